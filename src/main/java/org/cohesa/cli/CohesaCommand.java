@@ -1,0 +1,94 @@
+package org.cohesa.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ScopeType;
+
+/**
+ * The {@code cohesa} command line. Exit codes: 0 success, 1 failure of the program or the database,
+ * 2 bad input (unknown solvent, malformed number, bad file).
+ */
+@Command(name = "cohesa", mixinStandardHelpOptions = true, versionProvider = CohesaCommand.Version.class,
+        description = "Choose solvents and blends with Hansen solubility parameters, screen them for safety, record substitutions.%n"
+                + "Results are screening estimates: the supplier's SDS, local codes and your site's licensed safety professionals decide.",
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:success", "1:program or database failure", "2:bad input (the message names the field and value)"},
+        subcommands = {
+                SolventsCommand.class,
+                SolventCommand.class,
+                DistanceCommand.class,
+                CohesionCommand.class,
+        })
+public final class CohesaCommand implements Runnable {
+
+    public static final int EXIT_BAD_INPUT = 2;
+    public static final int EXIT_FAILURE = 1;
+
+    @Option(names = "--db", scope = ScopeType.INHERIT, paramLabel = "FILE",
+            description = "Database file (default: $COHESA_HOME/cohesa.db or the user data folder).")
+    Path db;
+
+    @Option(names = "--debug", scope = ScopeType.INHERIT, description = "Show stack traces on errors.")
+    boolean debug;
+
+    private CliContext context;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** The shared context, opened on first use. */
+    public CliContext context() {
+        if (context == null) {
+            context = new CliContext(db);
+        }
+        return context;
+    }
+
+    /** Builds the command line with our error handling, printing to the given writers. */
+    public static CommandLine commandLine(PrintWriter out, PrintWriter err) {
+        CommandLine cl = new CommandLine(new CohesaCommand());
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setParameterExceptionHandler(ErrorHandling::onParameterError);
+        cl.setExecutionExceptionHandler(ErrorHandling::onExecutionError);
+        return cl;
+    }
+
+    /** Runs the command line and closes the database. */
+    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cl = commandLine(out, err);
+        try {
+            return cl.execute(args);
+        } finally {
+            CohesaCommand root = cl.getCommand();
+            if (root.context != null) {
+                root.context.close();
+            }
+            out.flush();
+            err.flush();
+        }
+    }
+
+    public static void main(String[] args) {
+        PrintWriter out = new PrintWriter(new java.io.OutputStreamWriter(System.out, java.nio.charset.StandardCharsets.UTF_8), true);
+        PrintWriter err = new PrintWriter(new java.io.OutputStreamWriter(System.err, java.nio.charset.StandardCharsets.UTF_8), true);
+        System.exit(run(args, out, err));
+    }
+
+    /** Version from the jar manifest. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"cohesa " + AppVersion.get()};
+        }
+    }
+}

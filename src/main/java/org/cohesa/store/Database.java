@@ -1,0 +1,123 @@
+package org.cohesa.store;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.SQLException;
+import java.sql.Statement;
+
+/**
+ * The local SQLite database: opened in WAL mode with a busy timeout so the desktop app and the command
+ * line can use it at once; schema migrated on open; bundled solvents refreshed when the shipped table
+ * changes (the user's own entries are never touched).
+ */
+public final class Database implements AutoCloseable {
+
+    /** How long a writer waits for another process's lock before giving up, ms. */
+    public static final int BUSY_TIMEOUT_MS = 15_000;
+
+    private final Path file;
+    private final Connection connection;
+
+    private Database(Path file, Connection connection) {
+        this.file = file;
+        this.connection = connection;
+    }
+
+    /** Opens (creating if needed) the database at {@code file} with the program's bundled data. */
+    public static Database open(Path file) {
+        return open(file, BundledData.resource("solvents.csv"));
+    }
+
+    /** Opens the database, migrating it and syncing it with {@code bundledSolvents}. */
+    public static Database open(Path file, BundledData bundledSolvents) {
+        Database db = openWithoutSync(file);
+        try {
+            new SolventRepository(db).syncBundled(bundledSolvents);
+        } catch (RuntimeException e) {
+            db.close();
+            throw e;
+        }
+        return db;
+    }
+
+    /** Opens and migrates without touching the solvent data (tests of migrations, tools). */
+    public static Database openWithoutSync(Path file) {
+        try {
+            Path parent = file.toAbsolutePath().getParent();
+            if (parent != null) {
+                Files.createDirectories(parent);
+            }
+        } catch (IOException e) {
+            throw new StoreException("cannot create the folder for the database " + file + ": " + e.getMessage(), e);
+        }
+        try {
+            Connection c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath());
+            try (Statement st = c.createStatement()) {
+                st.execute("PRAGMA busy_timeout = " + BUSY_TIMEOUT_MS);
+                st.execute("PRAGMA journal_mode = WAL");
+                st.execute("PRAGMA synchronous = FULL");
+                st.execute("PRAGMA foreign_keys = ON");
+            }
+            Migrations.migrate(c);
+            return new Database(file, c);
+        } catch (SQLException e) {
+            throw new StoreException("cannot open the database " + file + ": " + e.getMessage(), e);
+        }
+    }
+
+    public Path file() {
+        return file;
+    }
+
+    public Connection connection() {
+        return connection;
+    }
+
+    /** Work done inside one transaction. */
+    @FunctionalInterface
+    public interface SqlWork<T> {
+        T run(Connection c) throws SQLException;
+    }
+
+    /**
+     * Runs {@code work} in one transaction (BEGIN IMMEDIATE, so concurrent writers queue on the busy
+     * timeout instead of failing mid-way); rolls everything back on any failure.
+     */
+    public synchronized <T> T inTransaction(SqlWork<T> work) {
+        try {
+            // autocommit stays on; we frame the transaction ourselves so the write lock is taken up front
+            // and released at once (the driver's own begin-after-commit would hold it between calls)
+            try (Statement st = connection.createStatement()) {
+                st.execute("BEGIN IMMEDIATE");
+            }
+            try {
+                T result = work.run(connection);
+                try (Statement st = connection.createStatement()) {
+                    st.execute("COMMIT");
+                }
+                return result;
+            } catch (SQLException | RuntimeException e) {
+                try (Statement st = connection.createStatement()) {
+                    st.execute("ROLLBACK");
+                } catch (SQLException suppressed) {
+                    e.addSuppressed(suppressed);
+                }
+                throw e;
+            }
+        } catch (SQLException e) {
+            throw new StoreException("database write failed, nothing was changed: " + e.getMessage(), e);
+        }
+    }
+
+    @Override
+    public void close() {
+        try {
+            connection.close();
+        } catch (SQLException e) {
+            throw new StoreException("cannot close the database: " + e.getMessage(), e);
+        }
+    }
+}

@@ -1,0 +1,82 @@
+package org.cohesa.store;
+
+import java.sql.Connection;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.List;
+
+/**
+ * The schema history. Append new steps at the end with the next version number; never edit a step
+ * that has shipped, since users' databases already ran it.
+ */
+public final class Migrations {
+
+    /** Every schema step, oldest first. */
+    public static final List<Migration> ALL = List.of(
+            new Migration(1, "solvent library and metadata", List.of(
+                    "CREATE TABLE meta (key TEXT PRIMARY KEY, value TEXT NOT NULL)",
+                    "CREATE TABLE solvent ("
+                            + " id INTEGER PRIMARY KEY,"
+                            + " name TEXT NOT NULL UNIQUE COLLATE NOCASE,"
+                            + " origin TEXT NOT NULL CHECK (origin IN ('bundled', 'user')),"
+                            + " synonyms TEXT, cas TEXT, formula TEXT, family TEXT,"
+                            + " molar_mass REAL, density REAL, molar_volume REAL,"
+                            + " dD REAL, dP REAL, dH REAL,"
+                            + " boiling_point_c REAL, melting_point_c REAL, flash_point_c REAL, autoignition_c REAL,"
+                            + " lfl_pct REAL, ufl_pct REAL,"
+                            + " antoine_a REAL, antoine_b REAL, antoine_c REAL, antoine_tmin_k REAL, antoine_tmax_k REAL,"
+                            + " hvap_kj_mol REAL,"
+                            + " oel_twa_ppm REAL, oel_stel_ppm REAL, oel_ceiling_ppm REAL, oel_skin TEXT, oel_jurisdiction TEXT,"
+                            + " hazard_statements TEXT, peroxide_former TEXT, ich_class INTEGER, unifac_groups TEXT,"
+                            + " sources TEXT, note TEXT)",
+                    "CREATE INDEX solvent_cas ON solvent (cas)")),
+            new Migration(2, "user prices per solvent, kept apart so bundled-data updates never touch them", List.of(
+                    "CREATE TABLE solvent_price (solvent_name TEXT PRIMARY KEY COLLATE NOCASE,"
+                            + " price_per_litre REAL NOT NULL CHECK (price_per_litre >= 0))")));
+
+    private Migrations() {
+    }
+
+    /** The newest schema version. */
+    public static int latest() {
+        return ALL.get(ALL.size() - 1).version();
+    }
+
+    /** The schema version stored in the database file (0 for a new file). */
+    public static int currentVersion(Connection c) throws SQLException {
+        try (Statement st = c.createStatement(); ResultSet rs = st.executeQuery("PRAGMA user_version")) {
+            return rs.next() ? rs.getInt(1) : 0;
+        }
+    }
+
+    /** Applies every step above the stored version, each step atomically. */
+    public static void migrate(Connection c) throws SQLException {
+        int current = currentVersion(c);
+        if (current > latest()) {
+            throw new SQLException("the database has schema version " + current
+                    + ", newer than this program knows (" + latest() + "); use a newer Cohesa");
+        }
+        boolean auto = c.getAutoCommit();
+        c.setAutoCommit(false);
+        try {
+            for (Migration m : ALL) {
+                if (m.version() <= current) {
+                    continue;
+                }
+                try (Statement st = c.createStatement()) {
+                    for (String sql : m.statements()) {
+                        st.execute(sql);
+                    }
+                    st.execute("PRAGMA user_version = " + m.version());
+                    c.commit();
+                } catch (SQLException e) {
+                    c.rollback();
+                    throw new SQLException("schema step " + m.version() + " (" + m.description() + ") failed: " + e.getMessage(), e);
+                }
+            }
+        } finally {
+            c.setAutoCommit(auto);
+        }
+    }
+}
