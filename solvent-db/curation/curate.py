@@ -1,0 +1,492 @@
+#!/usr/bin/env python3
+"""Regenerate solvent-db/solvents.csv from the published reference tables.
+
+Usage (from the repository root):
+    python3 solvent-db/curation/curate.py [REFERENCE_DATA_DIR]
+
+REFERENCE_DATA_DIR defaults to ../shared/reference-data relative to the repository
+root. The script reads the tables there (it never copies them), joins them by CAS
+number, applies the curation rules written in solvent-db/SOURCES.md, adds the
+hand-curated values of solvent-db/curation/manual.csv, and writes
+solvent-db/solvents.csv. Python 3 standard library only; the output is
+deterministic (same inputs -> byte-identical file).
+"""
+import csv
+import math
+import os
+import re
+import sys
+
+HERE = os.path.dirname(os.path.abspath(__file__))
+DB_DIR = os.path.dirname(HERE)
+REPO = os.path.dirname(DB_DIR)
+
+COLUMNS = [
+    "name", "synonyms", "cas", "formula", "family",
+    "molar_mass", "density", "molar_volume",
+    "dD", "dP", "dH",
+    "boiling_point_c", "melting_point_c", "flash_point_c", "autoignition_c", "lfl_pct", "ufl_pct",
+    "antoine_a", "antoine_b", "antoine_c", "antoine_tmin_k", "antoine_tmax_k",
+    "hvap_kj_mol",
+    "oel_twa_ppm", "oel_stel_ppm", "oel_ceiling_ppm", "oel_skin", "oel_jurisdiction",
+    "hazard_statements", "peroxide_former", "ich_class",
+    "unifac_groups",
+    "src_identity", "src_molar_mass", "src_density", "src_hsp", "src_boiling_point",
+    "src_melting_point", "src_flash_point", "src_autoignition", "src_flammability_limits",
+    "src_antoine", "src_hvap", "src_oel", "src_hazard_statements", "src_peroxide_former",
+    "src_ich", "src_unifac",
+    "note",
+]
+
+# IUPAC conventional/abridged standard atomic weights (CIAAW, IUPAC Technical
+# Report 2021 "Standard atomic weights of the elements 2021", Pure Appl. Chem.).
+ATOMIC_WEIGHTS = {
+    "H": 1.008, "C": 12.011, "N": 14.007, "O": 15.999, "F": 18.998,
+    "S": 32.06, "Cl": 35.45, "Br": 79.904,
+}
+
+# Curation decisions that pick a value against the default table priority.
+# Each one is explained in the note column of the solvent (see manual.csv) and in SOURCES.md.
+HSP_CHOICE = {
+    "112-07-2": "alshehri",   # 2-butoxyethyl acetate
+    "105-58-8": "schrier",    # diethyl carbonate
+    "108-20-3": "alshehri",   # diisopropyl ether
+    "141-43-5": "alshehri",   # monoethanolamine
+}
+# Flash point taken from the DIPPR (Serat) whole-degree value instead of IEC/NFPA.
+FLASH_FROM_SERAT = {"103-09-3"}  # 2-ethylhexyl acetate: IEC 44 °C vs NFPA 88 °C
+# Ontario mg/m3 limits converted to ppm (vapours only; aerosol/inhalable limits are not converted).
+OEL_CONVERT_MG = {"872-50-4", "108-01-0"}
+# ICH Q3C entries that cover an isomer group although listed under one CAS.
+ICH_ALIASES = {
+    "95-47-6": "1330-20-7", "108-38-3": "1330-20-7", "106-42-3": "1330-20-7",  # xylene
+    "156-60-5": "540-59-0",  # 1,2-dichloroethene
+}
+ICH_CONFIRMED_R8 = {"96-47-9", "5614-37-9", "75-65-0"}
+# The app's solvent model accepts ICH classes 1-3 only (Solvent.ichClass). Class 4 ("no adequate
+# toxicological data", no PDE) is therefore written into the note, not the ich_class column.
+# Set to True once the model accepts 4.
+ICH_WRITE_CLASS_4 = False
+# Antoine fits whose value at the normal boiling point is off by more than this are dropped.
+ANTOINE_MAX_DEV_AT_TB = 0.05
+
+
+def read_tsv(path, header=True):
+    with open(path, encoding="utf-8", newline="") as f:
+        rows = [line.rstrip("\n").split("\t") for line in f]
+    return rows[1:] if header else rows
+
+
+def by_cas(path):
+    out = {}
+    for row in read_tsv(path):
+        if row and row[0].strip():
+            out.setdefault(row[0].strip(), row)
+    return out
+
+
+def num(text):
+    text = (text or "").strip()
+    if not text:
+        return None
+    return float(text)
+
+
+def fmt(x, decimals):
+    """Fixed number of decimals (HSP 18.0, temperatures 28.0)."""
+    if x is None:
+        return ""
+    s = f"{x:.{decimals}f}"
+    return s[1:] if s.startswith("-") and float(s) == 0 else s
+
+
+def fmt_short(x, decimals):
+    """At most `decimals` decimals, trailing zeros stripped (1.40 -> 1.4, 11.0 -> 11)."""
+    if x is None:
+        return ""
+    s = fmt(x, decimals)
+    if "." in s:
+        s = s.rstrip("0").rstrip(".")
+    return s
+
+
+def fmt_sig(x, digits):
+    """`digits` significant figures, trailing zeros kept (0.997 -> 0.9970)."""
+    decimals = max(0, digits - 1 - int(math.floor(math.log10(abs(x)))))
+    return fmt(round(x, decimals), decimals)
+
+
+def sig(x, digits):
+    if x == 0:
+        return 0.0
+    return round(x, digits - 1 - int(math.floor(math.log10(abs(x)))))
+
+
+def kelvin_to_c(k):
+    return None if k is None else round(k - 273.15, 1)
+
+
+def parse_formula(formula):
+    counts = {}
+    for el, n in re.findall(r"([A-Z][a-z]?)(\d*)", formula):
+        counts[el] = counts.get(el, 0) + (int(n) if n else 1)
+    return counts
+
+
+def hill(counts):
+    keys = sorted(counts)
+    if "C" in counts:
+        keys = ["C"] + (["H"] if "H" in counts else []) + sorted(k for k in counts if k not in ("C", "H"))
+    return "".join(k + (str(counts[k]) if counts[k] != 1 else "") for k in keys)
+
+
+def molar_mass(formula):
+    return sum(ATOMIC_WEIGHTS[el] * n for el, n in parse_formula(formula).items())
+
+
+# Atoms in each original-UNIFAC subgroup used by the hand-made assignments, to check
+# that a manual assignment adds up to the molecular formula.
+SUBGROUP_ATOMS = {
+    1: "CH3", 2: "CH2", 3: "CH", 4: "C", 6: "C2H2", 7: "C2H2", 8: "C2H", 9: "CH", 10: "C",
+    11: "C2H3", 12: "C2H2", 13: "C2H", 14: "OH", 15: "CH4O", 16: "H2O", 21: "C2H3O2", 22: "C2H2O2",
+    24: "CH3O", 25: "CH2O", 26: "CHO", 27: "CH2O", 35: "CH2N", 54: "CH3NO2", 69: "Cl", 74: "CF3",
+    77: "CO2", 100: "C2H5O2", 101: "C2H4O2",
+}
+
+
+def unifac_formula(groups):
+    total = {}
+    for gid, cnt in groups:
+        for el, n in parse_formula(SUBGROUP_ATOMS[gid]).items():
+            total[el] = total.get(el, 0) + n * cnt
+    return hill(total)
+
+
+def parse_groups(text):
+    groups = []
+    for pair in text.split():
+        gid, cnt = pair.split(":")
+        groups.append((int(gid), int(cnt)))
+    return groups
+
+
+def ddbst_groups(field):
+    nums = [int(x) for x in field.split()]
+    return sorted(zip(nums[0::2], nums[1::2]))
+
+
+def groups_text(groups):
+    return " ".join(f"{g}:{c}" for g, c in sorted(groups))
+
+
+def parse_oel(cell):
+    """Ontario cells hold text such as '500 ppm' or '0.05 mg/m3'. Returns (value, unit)."""
+    cell = (cell or "").strip()
+    if not cell:
+        return None, None
+    m = re.fullmatch(r"([0-9.]+)\s*(ppm|mg/m3)", cell)
+    if not m:
+        raise ValueError(f"unparsed Ontario limit: {cell!r}")
+    return float(m.group(1)), m.group(2)
+
+
+def main(argv):
+    ref = argv[1] if len(argv) > 1 else os.path.join(REPO, "..", "shared", "reference-data")
+    ref = os.path.abspath(ref)
+    if not os.path.isdir(ref):
+        sys.exit(f"error: reference-data folder not found: {ref}")
+    p = lambda name: os.path.join(ref, name)
+
+    # The solvent list: the reference folder's index of working solvents, then any solvent
+    # that exists only in manual.csv (added by hand), in the order of that file.
+    with open(os.path.join(HERE, "manual.csv"), encoding="utf-8", newline="") as f:
+        manual_rows = list(csv.DictReader(f))
+    manual = {r["cas"]: r for r in manual_rows}
+    if len(manual) != len(manual_rows):
+        raise SystemExit("manual.csv: duplicate CAS")
+    solvents = [row[:2] for row in read_tsv(p("common-solvents.tsv"))]
+    listed = {row[1] for row in solvents}
+    solvents += [[r["name"], r["cas"]] for r in manual_rows if r["cas"] not in listed]
+    missing = [row[1] for row in solvents if row[1] not in manual]
+    if missing:
+        raise SystemExit(f"manual.csv has no row for: {', '.join(missing)}")
+
+    alshehri = by_cas(p("alshehri-hansen-solubility-parameters.tsv"))
+    schrier = by_cas(p("schrier-hansen-solubility-parameters.tsv"))
+    antoine = by_cas(p("antoine-collection-poling.tsv"))
+    hvap = by_cas(p("crc-handbook-heat-of-vaporization.tsv"))
+    phys = by_cas(p("physical-constants-of-organic-compounds.csv"))
+    iec = by_cas(p("iec-60079-20-1-2010.tsv"))
+    nfpa = by_cas(p("nfpa-497-2008.tsv"))
+    serat = by_cas(p("dippr-t-flash-serat.csv"))
+    ich = {r[1]: r for r in read_tsv(p("ich-q3c-r8.tsv"))}
+    subgroups = {int(r[0]) for r in read_tsv(p("unifac-subgroups.tsv"))}
+
+    ids = {}
+    for row in read_tsv(p("chemical-identifiers-pubchem-small.tsv"), header=False):
+        if len(row) > 6:
+            ids.setdefault(row[1], row)
+    ddbst = {}
+    for row in read_tsv(p("ddbst-unifac-assignments.tsv"), header=False):
+        ddbst.setdefault(row[0], row)
+
+    ontario = {}
+    for row in read_tsv(p("ontario-exposure-limits.tsv")):
+        for cas in row[0].split(";"):
+            cas = cas.strip()
+            if cas:
+                ontario.setdefault(cas, (row, len([c for c in row[0].split(";") if c.strip()]) > 1))
+
+    out_rows = []
+    for sol in solvents:
+        cas = sol[1]
+        m = manual[cas]
+        r = {c: "" for c in COLUMNS}
+        notes = [m["note"]] if m["note"] else []
+        r["name"] = m["name"]
+        r["synonyms"] = m["synonyms"]
+        r["cas"] = cas
+        r["family"] = m["family"]
+
+        # identity and formula
+        pub = ids.get(cas)
+        if pub is not None:
+            formula = hill(parse_formula(pub[2]))
+            r["src_identity"] = "pubchem"
+            if m["formula"] and hill(parse_formula(m["formula"])) != formula:
+                raise SystemExit(f"{cas}: manual formula {m['formula']} != PubChem {formula}")
+        else:
+            formula = hill(parse_formula(m["formula"])) if m["formula"] else ""
+            r["src_identity"] = "memory-identity"
+        r["formula"] = formula
+        crc_formula = hvap.get(cas, [None, None, ""])[2]
+        if formula and crc_formula and hill(parse_formula(crc_formula)) != formula:
+            raise SystemExit(f"{cas}: formula {formula} disagrees with CRC {crc_formula}")
+
+        mm = molar_mass(formula) if formula else None
+        if mm is not None:
+            r["molar_mass"] = fmt(round(mm, 3), 3)
+            r["src_molar_mass"] = "computed"
+
+        # density (g/cm3)
+        rho = None
+        if cas in phys and num(phys[cas][4]) is not None:
+            rho = sig(num(phys[cas][4]) / 1000.0, 4)
+            r["density"] = fmt_sig(rho, 4)
+            r["src_density"] = "crc-physical-constants"
+        elif m["density"]:
+            # kept as written in manual.csv: the number of digits states its precision
+            rho = float(m["density"])
+            r["density"] = m["density"]
+            r["src_density"] = m["src_density"]
+        if rho is not None:
+            if mm is not None:
+                r["molar_volume"] = fmt(round(mm / rho, 2), 2)
+
+        # Hansen parameters (MPa^0.5)
+        choice = HSP_CHOICE.get(cas)
+        hsp, src = None, ""
+        if choice == "schrier" or (choice is None and cas not in alshehri and cas in schrier):
+            hsp, src = schrier[cas][1:4], "schrier-2020"
+        elif cas in alshehri:
+            hsp, src = alshehri[cas][1:4], "alshehri-2022"
+        if hsp is not None:
+            vals = [round(float(x) / 1000.0, 1) for x in hsp]
+            if m["dD"]:
+                notes.append("manual HSP ignored: table value exists")
+        elif m["dD"]:
+            vals, src = [float(m["dD"]), float(m["dP"]), float(m["dH"])], m["src_hsp"]
+        else:
+            vals = None
+        if vals is not None:
+            r["dD"], r["dP"], r["dH"] = (fmt(v, 1) for v in vals)
+            r["src_hsp"] = src
+
+        # boiling and melting point (°C)
+        tb = num(phys[cas][3]) if cas in phys else None
+        if tb is not None:
+            r["src_boiling_point"] = "crc-physical-constants"
+        elif cas in hvap and num(hvap[cas][3]) is not None:
+            tb = num(hvap[cas][3])
+            r["src_boiling_point"] = "crc-hvap"
+        r["boiling_point_c"] = fmt(kelvin_to_c(tb), 1)
+        tm = num(phys[cas][2]) if cas in phys else None
+        if tm is not None:
+            r["melting_point_c"] = fmt(kelvin_to_c(tm), 1)
+            r["src_melting_point"] = "crc-physical-constants"
+        elif cas == "7732-18-5":
+            r["melting_point_c"] = "0.0"
+            r["src_melting_point"] = "memory-water-properties"
+
+        # flash point (closed cup, °C): IEC, then NFPA, then Serat values with at most two decimals
+        def serat_round():
+            # README caveat 2: the many-decimal Serat values look computed (median 6 K below IEC);
+            # the values with at most two decimals ("round" values) match IEC within about 2 K.
+            if cas in serat and serat[cas][2].strip():
+                text = serat[cas][2].strip()
+                if len(text.partition(".")[2]) <= 2:
+                    return float(text)
+                notes.append(f"Serat flash point {float(text):.2f} K not used (many decimals, looks computed)")
+            return None
+        fp, fsrc = None, ""
+        if cas in FLASH_FROM_SERAT:
+            fp, fsrc = serat_round(), "dippr-serat-2017"
+        elif cas in iec and num(iec[cas][2]) is not None:
+            fp, fsrc = num(iec[cas][2]), "iec-60079-20-1"
+        elif cas in nfpa and num(nfpa[cas][2]) is not None:
+            fp, fsrc = num(nfpa[cas][2]), "nfpa-497-2008"
+        else:
+            fp = serat_round()
+            fsrc = "dippr-serat-2017" if fp is not None else ""
+        if fp is not None:
+            r["flash_point_c"] = fmt(kelvin_to_c(fp), 1)
+            r["src_flash_point"] = fsrc
+
+        # autoignition (°C): IEC, then NFPA
+        for table, key in ((iec, "iec-60079-20-1"), (nfpa, "nfpa-497-2008")):
+            if cas in table and num(table[cas][3]) is not None:
+                r["autoignition_c"] = fmt(kelvin_to_c(num(table[cas][3])), 1)
+                r["src_autoignition"] = key
+                break
+
+        # flammability limits (vol %): both from the first table with a valid (positive) LFL
+        for table, key in ((iec, "iec-60079-20-1"), (nfpa, "nfpa-497-2008")):
+            if cas in table:
+                lfl, ufl = num(table[cas][4]), num(table[cas][5])
+                if lfl is not None and lfl <= 0:
+                    notes.append(f"{key} LFL {lfl:g} is not a valid fraction: flammability limits from that table not used")
+                    continue
+                if lfl is not None:
+                    r["lfl_pct"] = fmt_short(lfl * 100, 3)
+                    r["ufl_pct"] = fmt_short(ufl * 100, 3) if ufl is not None else ""
+                    r["src_flammability_limits"] = key
+                    break
+
+        # Antoine (log10 P/Pa = A - B/(T/K + C)), checked against the normal boiling point
+        if cas in antoine:
+            a, b, c, tmin, tmax = (antoine[cas][i].strip() for i in range(2, 7))
+            ok = True
+            if tb is not None and float(tmin) <= tb <= float(tmax):
+                p_tb = 10 ** (float(a) - float(b) / (tb + float(c)))
+                if abs(p_tb / 101325.0 - 1) > ANTOINE_MAX_DEV_AT_TB:
+                    ok = False
+                    notes.append(f"Poling Antoine fit dropped: gives {p_tb:.0f} Pa at the boiling point")
+            if ok:
+                r["antoine_a"], r["antoine_b"], r["antoine_c"] = a, b, c
+                r["antoine_tmin_k"], r["antoine_tmax_k"] = tmin, tmax
+                r["src_antoine"] = "poling-2000-antoine"
+
+        # enthalpy of vaporisation at 25 °C (kJ/mol)
+        if cas in hvap and num(hvap[cas][5]) is not None:
+            r["hvap_kj_mol"] = fmt(num(hvap[cas][5]) / 1000.0, 2)
+            r["src_hvap"] = "crc-hvap"
+
+        # occupational exposure limits (Ontario)
+        if cas in ontario:
+            row, group = ontario[cas]
+            vals = {}
+            for col, idx in (("oel_twa_ppm", 2), ("oel_stel_ppm", 3), ("oel_ceiling_ppm", 4)):
+                v, unit = parse_oel(row[idx])
+                if v is None:
+                    continue
+                if unit == "ppm":
+                    vals[col] = fmt_short(v, 3)
+                elif cas in OEL_CONVERT_MG and mm is not None:
+                    vals[col] = fmt_short(sig(v * 24.45 / mm, 3), 3)
+                    notes.append(f"OEL {col.split('_')[1].upper()} converted from Ontario {v:g} mg/m3 (ppm = mg/m3 x 24.45 / M)")
+            skin = row[5].strip().lower() == "skin"
+            if vals or skin:
+                r.update(vals)
+                r["oel_skin"] = "yes" if skin else ""
+                r["oel_jurisdiction"] = "Ontario"
+                r["src_oel"] = "ontario-oel"
+
+        # hazard statements and peroxide formers (hand-curated, from memory)
+        if m["hazard_statements"]:
+            r["hazard_statements"] = m["hazard_statements"]
+            r["src_hazard_statements"] = "memory-ghs-clp"
+        if m["peroxide_former"]:
+            r["peroxide_former"] = "yes"
+            r["src_peroxide_former"] = "memory-peroxide-formers"
+
+        # ICH Q3C(R8) class
+        ich_row = ich.get(cas) or ich.get(ICH_ALIASES.get(cas, ""))
+        if ich_row is not None and (ich_row[2] != "4" or ICH_WRITE_CLASS_4):
+            r["ich_class"] = ich_row[2]
+            r["src_ich"] = "ich-q3c-r8" if ich_row[1] in ICH_CONFIRMED_R8 else "ich-q3c-r8-memory"
+        elif ich_row is not None:
+            notes.append("ICH Q3C(R8) class 4 (no adequate toxicological data; no PDE), from memory of the "
+                         "guideline (key ich-q3c-r8-memory): not written in ich_class, which holds classes 1-3")
+
+        # UNIFAC (original) subgroups: DDBST where it lists the solvent, else hand-made
+        dd = ddbst.get(pub[6]) if pub is not None else None
+        if dd is not None:
+            if dd[1].split()[0] == "1":
+                r["unifac_groups"] = groups_text(ddbst_groups(dd[2]))
+                r["src_unifac"] = "ddbst-unifac"
+            if m["unifac"]:
+                raise SystemExit(f"{cas}: manual UNIFAC given although DDBST lists the solvent")
+        elif m["unifac"]:
+            groups = parse_groups(m["unifac"])
+            for g, _ in groups:
+                if g not in subgroups:
+                    raise SystemExit(f"{cas}: unknown UNIFAC subgroup {g}")
+            if formula and unifac_formula(groups) != formula:
+                raise SystemExit(f"{cas}: UNIFAC groups give {unifac_formula(groups)}, formula is {formula}")
+            r["unifac_groups"] = groups_text(groups)
+            r["src_unifac"] = "unifac-manual"
+
+        r["note"] = "; ".join(n for n in notes if n)
+        out_rows.append(r)
+
+    names = [r["name"] for r in out_rows]
+    if len(set(names)) != len(names):
+        raise SystemExit("duplicate names")
+    out = os.path.join(DB_DIR, "solvents.csv")
+    with open(out, "w", encoding="utf-8", newline="") as f:
+        w = csv.DictWriter(f, fieldnames=COLUMNS, lineterminator="\r\n")
+        w.writeheader()
+        w.writerows(out_rows)
+    print(f"wrote {len(out_rows)} solvents to {os.path.relpath(out, REPO)}")
+    update_readme_coverage(out_rows)
+
+
+COVERAGE_START = "<!-- coverage:start (generated by curation/curate.py) -->"
+COVERAGE_END = "<!-- coverage:end -->"
+
+
+def coverage_table(rows):
+    n = len(rows)
+    lines = [f"{n} solvents. Non-empty values per column (source columns omitted):", "",
+             "| column | filled | of | % |", "|---|---:|---:|---:|"]
+    for col in COLUMNS:
+        if col.startswith("src_") or col == "note":
+            continue
+        filled = sum(1 for r in rows if r[col])
+        lines.append(f"| `{col}` | {filled} | {n} | {100.0 * filled / n:.0f} |")
+    keys = {}
+    for r in rows:
+        for col in COLUMNS:
+            if col.startswith("src_") and r[col]:
+                keys[r[col]] = keys.get(r[col], 0) + 1
+    lines += ["", "Values per source key:", "", "| source key | values |", "|---|---:|"]
+    lines += [f"| `{k}` | {keys[k]} |" for k in sorted(keys)]
+    return "\n".join(lines)
+
+
+def update_readme_coverage(rows):
+    path = os.path.join(DB_DIR, "README.md")
+    if not os.path.exists(path):
+        return
+    with open(path, encoding="utf-8") as f:
+        text = f.read()
+    start, end = text.find(COVERAGE_START), text.find(COVERAGE_END)
+    if start < 0 or end < start:
+        return
+    text = text[:start + len(COVERAGE_START)] + "\n" + coverage_table(rows) + "\n" + text[end:]
+    with open(path, "w", encoding="utf-8") as f:
+        f.write(text)
+
+
+if __name__ == "__main__":
+    main(sys.argv)
