@@ -83,15 +83,36 @@ public final class SolventLibrary {
         return hits;
     }
 
-    /** Solvents whose name, a synonym or CAS contains {@code text} (case-insensitive); all for blank text. */
+    /**
+     * Solvents whose name, a synonym or CAS contains {@code text} (case-insensitive), best matches first:
+     * exact name, then names starting with the text, then names containing it, then synonym or CAS hits.
+     * All solvents, in library order, for blank text.
+     */
     public List<Solvent> search(String text) {
         if (text == null || text.isBlank()) {
             return solvents;
         }
         String k = key(text);
-        return solvents.stream().filter(s -> key(s.name()).contains(k)
-                || (s.cas() != null && s.cas().contains(text.strip()))
-                || s.synonyms().stream().anyMatch(syn -> key(syn).contains(k))).toList();
+        return solvents.stream()
+                .map(s -> Map.entry(s, relevance(s, k, text.strip())))
+                .filter(e -> e.getValue() < 4)
+                .sorted(Comparator.comparingInt(Map.Entry<Solvent, Integer>::getValue))
+                .map(Map.Entry::getKey).toList();
+    }
+
+    private static int relevance(Solvent s, String key, String raw) {
+        String name = key(s.name());
+        if (name.equals(key)) {
+            return 0;
+        }
+        if (name.startsWith(key)) {
+            return 1;
+        }
+        if (name.contains(key)) {
+            return 2;
+        }
+        boolean other = (s.cas() != null && s.cas().contains(raw)) || s.synonyms().stream().anyMatch(syn -> key(syn).contains(key));
+        return other ? 3 : 4;
     }
 
     /** Parses and resolves our blend notation into a {@link Blend}. */
