@@ -309,6 +309,9 @@ def main(argv):
         elif cas in hvap and num(hvap[cas][3]) is not None:
             tb = num(hvap[cas][3])
             r["src_boiling_point"] = "crc-hvap"
+        elif m.get("boiling_point_c"):
+            tb = float(m["boiling_point_c"]) + 273.15
+            r["src_boiling_point"] = m["src_boiling_point"]
         r["boiling_point_c"] = fmt(kelvin_to_c(tb), 1)
         tm = num(phys[cas][2]) if cas in phys else None
         if tm is not None:
