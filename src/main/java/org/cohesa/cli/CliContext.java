@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import org.cohesa.core.solvent.SolventLibrary;
 import org.cohesa.store.Database;
 import org.cohesa.store.DataHome;
+import org.cohesa.store.MaterialRepository;
 import org.cohesa.store.SolventRepository;
 
 /** What the commands share: where the database is, opened lazily once per run. */
@@ -29,6 +30,10 @@ public final class CliContext implements AutoCloseable {
 
     public SolventRepository solvents() {
         return new SolventRepository(database());
+    }
+
+    public MaterialRepository materials() {
+        return new MaterialRepository(database());
     }
 
     public SolventLibrary library() {

@@ -21,6 +21,8 @@ import picocli.CommandLine.ScopeType;
                 SolventCommand.class,
                 DistanceCommand.class,
                 CohesionCommand.class,
+                MaterialsCommand.class,
+                MaterialCommand.class,
         })
 public final class CohesaCommand implements Runnable {
 

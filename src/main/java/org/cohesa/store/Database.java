@@ -10,8 +10,8 @@ import java.sql.Statement;
 
 /**
  * The local SQLite database: opened in WAL mode with a busy timeout so the desktop app and the command
- * line can use it at once; schema migrated on open; bundled solvents refreshed when the shipped table
- * changes (the user's own entries are never touched).
+ * line can use it at once; schema migrated on open; bundled solvents and materials refreshed when the shipped
+ * tables change (the user's own entries are never touched).
  */
 public final class Database implements AutoCloseable {
 
@@ -31,11 +31,17 @@ public final class Database implements AutoCloseable {
         return open(file, BundledData.resource("solvents.csv"));
     }
 
-    /** Opens the database, migrating it and syncing it with {@code bundledSolvents}. */
+    /** Opens the database, migrating it and syncing it with {@code bundledSolvents} and the bundled materials. */
     public static Database open(Path file, BundledData bundledSolvents) {
+        return open(file, bundledSolvents, BundledData.resource("materials.csv"));
+    }
+
+    /** Opens the database, migrating it and syncing it with the given bundled solvent and material tables. */
+    public static Database open(Path file, BundledData bundledSolvents, BundledData bundledMaterials) {
         Database db = openWithoutSync(file);
         try {
             new SolventRepository(db).syncBundled(bundledSolvents);
+            new MaterialRepository(db).syncBundled(bundledMaterials);
         } catch (RuntimeException e) {
             db.close();
             throw e;

@@ -33,7 +33,16 @@ public final class Migrations {
                     "CREATE INDEX solvent_cas ON solvent (cas)")),
             new Migration(2, "user prices per solvent, kept apart so bundled-data updates never touch them", List.of(
                     "CREATE TABLE solvent_price (solvent_name TEXT PRIMARY KEY COLLATE NOCASE,"
-                            + " price_per_litre REAL NOT NULL CHECK (price_per_litre >= 0))")));
+                            + " price_per_litre REAL NOT NULL CHECK (price_per_litre >= 0))")),
+            new Migration(3, "material library: bundled spheres and the user's own (typed in or saved from a fit)", List.of(
+                    "CREATE TABLE material ("
+                            + " id INTEGER PRIMARY KEY,"
+                            + " name TEXT NOT NULL UNIQUE COLLATE NOCASE,"
+                            + " origin TEXT NOT NULL CHECK (origin IN ('bundled', 'user')),"
+                            + " synonyms TEXT, kind TEXT NOT NULL,"
+                            + " dD REAL NOT NULL CHECK (dD >= 0), dP REAL NOT NULL CHECK (dP >= 0), dH REAL NOT NULL CHECK (dH >= 0),"
+                            + " r0 REAL NOT NULL CHECK (r0 > 0),"
+                            + " source TEXT NOT NULL, note TEXT)")));
 
     private Migrations() {
     }
