@@ -85,7 +85,7 @@ public final class SolventLibrary {
 
     /**
      * Solvents whose name, a synonym or CAS contains {@code text} (case-insensitive), best matches first:
-     * exact name, then names starting with the text, then names containing it, then synonym or CAS hits.
+     * exact name, then names starting with the text, then names containing it, then synonym, CAS or family hits.
      * All solvents, in library order, for blank text.
      */
     public List<Solvent> search(String text) {
@@ -111,7 +111,8 @@ public final class SolventLibrary {
         if (name.contains(key)) {
             return 2;
         }
-        boolean other = (s.cas() != null && s.cas().contains(raw)) || s.synonyms().stream().anyMatch(syn -> key(syn).contains(key));
+        boolean other = (s.cas() != null && s.cas().contains(raw)) || s.synonyms().stream().anyMatch(syn -> key(syn).contains(key))
+                || (s.family() != null && key(s.family()).replace('_', ' ').contains(key.replace('_', ' ')));
         return other ? 3 : 4;
     }
 
