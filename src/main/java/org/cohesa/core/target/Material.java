@@ -1,0 +1,41 @@
+package org.cohesa.core.target;
+
+import java.util.List;
+import java.util.Objects;
+import org.cohesa.core.hsp.SolubilitySphere;
+
+/**
+ * A material that must dissolve (resin, polymer, pigment, drug substance) with its solubility sphere.
+ *
+ * @param name      name as formulators write it, e.g. "poly(methyl methacrylate)"
+ * @param synonyms  other names, abbreviations and trade grades
+ * @param kind      polymer, resin, drug, pigment or other
+ * @param sphere    centre (δD, δP, δH) and radius R0, MPa^½
+ * @param source    source key (cited in solvent-db/SOURCES.md for bundled rows; free text for the user's own)
+ * @param note      curation note (grade, confidence, how it was obtained)
+ * @param userEntry true for the user's own materials (typed in or saved from a fit), false for bundled data
+ */
+public record Material(String name, List<String> synonyms, MaterialKind kind, SolubilitySphere sphere, String source,
+                       String note, boolean userEntry) {
+
+    public Material {
+        if (name == null || name.isBlank()) {
+            throw new IllegalArgumentException("a material needs a name");
+        }
+        name = name.strip();
+        synonyms = List.copyOf(Objects.requireNonNullElse(synonyms, List.of()));
+        kind = Objects.requireNonNullElse(kind, MaterialKind.OTHER);
+        if (sphere == null) {
+            throw new IllegalArgumentException("material " + name + " needs a sphere (dD, dP, dH, R0)");
+        }
+        if (source == null || source.isBlank()) {
+            throw new IllegalArgumentException("material " + name + " needs a source");
+        }
+        source = source.strip();
+    }
+
+    /** A copy marked as a user entry or as bundled data. */
+    public Material withUserEntry(boolean user) {
+        return new Material(name, synonyms, kind, sphere, source, note, user);
+    }
+}
