@@ -71,6 +71,35 @@ ICH_WRITE_CLASS_4 = False
 ANTOINE_MAX_DEV_AT_TB = 0.05
 
 
+# The note text that marks a solvent without a flash point because it does not burn in the standard tests.
+NON_FLAMMABLE_NOTE = "no flash point (non-flammable under standard test conditions)"
+
+
+def check_memory_flash_point(cas, fp_c, tb_c, hazard_statements, note):
+    """Stops on a recalled flash point that contradicts the boiling point or the recalled GHS statements.
+
+    A pure liquid's flash point lies below its normal boiling point (at the flash point the vapour pressure only
+    reaches the lower flammability limit, a few kPa). GHS Rev. 10 (UN, 2023), chapter 2.6, flammable-liquid
+    categories by closed-cup flash point: H224/H225 below 23 °C, H226 from 23 to 60 °C; a solvent with no
+    flammability statement has a flash point above 60 °C.
+    """
+    codes = hazard_statements.split()
+    problems = []
+    if tb_c is not None and fp_c >= tb_c:
+        problems.append(f"not below the boiling point {tb_c} °C")
+    if NON_FLAMMABLE_NOTE in note:
+        problems.append("note says non-flammable")
+    if ("H224" in codes or "H225" in codes) and not fp_c < 23:
+        problems.append("H224/H225 needs < 23 °C")
+    if "H226" in codes and not 23 <= fp_c <= 60:
+        problems.append("H226 needs 23-60 °C")
+    classified = codes or "not classified as hazardous" in note
+    if classified and not {"H224", "H225", "H226"} & set(codes) and fp_c <= 60:
+        problems.append("no flammability statement needs > 60 °C")
+    if problems:
+        raise SystemExit(f"{cas}: manual flash point {fp_c} °C: " + "; ".join(problems))
+
+
 def read_tsv(path, header=True):
     with open(path, encoding="utf-8", newline="") as f:
         rows = [line.rstrip("\n").split("\t") for line in f]
@@ -342,8 +371,19 @@ def main(argv):
             fp = serat_round()
             fsrc = "dippr-serat-2017" if fp is not None else ""
         if fp is not None:
+            if m.get("flash_point_c"):
+                raise SystemExit(f"{cas}: manual flash point given although {fsrc} has one")
             r["flash_point_c"] = fmt(kelvin_to_c(fp), 1)
             r["src_flash_point"] = fsrc
+        elif m.get("flash_point_c"):
+            # recalled from memory of supplier SDS (closed cup, whole degrees), only where no table has a value
+            fp_c = float(m["flash_point_c"])
+            check_memory_flash_point(cas, fp_c, kelvin_to_c(tb), m["hazard_statements"], m["note"])
+            r["flash_point_c"] = fmt(fp_c, 1)
+            r["src_flash_point"] = m["src_flash_point"]
+        elif NON_FLAMMABLE_NOTE not in m["note"] and "flash point" not in m["note"]:
+            notes.append("flash point unknown (no table value, none recalled with confidence): "
+                         "treat as unknown, not as non-flammable; check the SDS")
 
         # autoignition (°C): IEC, then NFPA
         for table, key in ((iec, "iec-60079-20-1"), (nfpa, "nfpa-497-2008")):
@@ -474,6 +514,14 @@ def coverage_table(rows):
                 keys[r[col]] = keys.get(r[col], 0) + 1
     lines += ["", "Values per source key:", "", "| source key | values |", "|---|---:|"]
     lines += [f"| `{k}` | {keys[k]} |" for k in sorted(keys)]
+    # Solvents without vapour-pressure data, so that the drying and blend flash-point code knows the gaps.
+    no_antoine = {}
+    for r in rows:
+        if not r["antoine_a"]:
+            no_antoine.setdefault(r["family"], []).append(r["name"])
+    lines += ["", f"Solvents without Antoine constants (no vapour pressure), {sum(map(len, no_antoine.values()))} "
+              "by family:", "", "| family | solvents |", "|---|---|"]
+    lines += [f"| {fam} | {', '.join(no_antoine[fam])} |" for fam in sorted(no_antoine)]
     return "\n".join(lines)
 
 
