@@ -514,14 +514,21 @@ def coverage_table(rows):
                 keys[r[col]] = keys.get(r[col], 0) + 1
     lines += ["", "Values per source key:", "", "| source key | values |", "|---|---:|"]
     lines += [f"| `{k}` | {keys[k]} |" for k in sorted(keys)]
-    # Solvents without vapour-pressure data, so that the drying and blend flash-point code knows the gaps.
-    no_antoine = {}
-    for r in rows:
-        if not r["antoine_a"]:
-            no_antoine.setdefault(r["family"], []).append(r["name"])
-    lines += ["", f"Solvents without Antoine constants (no vapour pressure), {sum(map(len, no_antoine.values()))} "
-              "by family:", "", "| family | solvents |", "|---|---|"]
-    lines += [f"| {fam} | {', '.join(no_antoine[fam])} |" for fam in sorted(no_antoine)]
+    # Solvents without Antoine constants, so that the drying and blend flash-point code knows the gaps: with a
+    # boiling point and ΔHvap the app can only estimate the vapour pressure (Clausius–Clapeyron), without them
+    # it has none.
+    for title, want_estimate in (("without Antoine constants, vapour pressure only estimated from the boiling "
+                                  "point and ΔHvap (Clausius–Clapeyron)", True),
+                                 ("without any vapour-pressure data (no Antoine constants, no boiling point "
+                                  "and ΔHvap pair)", False)):
+        by_family = {}
+        for r in rows:
+            estimate = bool(r["boiling_point_c"] and r["hvap_kj_mol"])
+            if not r["antoine_a"] and estimate == want_estimate:
+                by_family.setdefault(r["family"], []).append(r["name"])
+        lines += ["", f"Solvents {title}: {sum(map(len, by_family.values()))}", "",
+                  "| family | solvents |", "|---|---|"]
+        lines += [f"| {fam} | {', '.join(by_family[fam])} |" for fam in sorted(by_family)]
     return "\n".join(lines)
 
 
