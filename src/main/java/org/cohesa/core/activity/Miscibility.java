@@ -35,7 +35,11 @@ public final class Miscibility {
     static final double TPD_TOLERANCE = 1e-7;
     /** A stationary point this close to the feed (max |wᵢ − zᵢ|) is the trivial solution. */
     static final double TRIVIAL_DISTANCE = 1e-4;
-    private static final int MAX_ITERATIONS = 400;
+    private static final int MAX_ITERATIONS = 300;
+    /** Successive substitution that comes this close to the feed is converging to the trivial solution. */
+    private static final double TRIVIAL_APPROACH = 1e-3;
+    /** A grid TPD this negative settles the question without refinement. */
+    private static final double CLEAR_SPLIT = -1e-3;
 
     private Miscibility() {
     }
@@ -98,7 +102,7 @@ public final class Miscibility {
         return new Unifac(lle, counts, lle.name(), "");
     }
 
-    private record Stationary(double[] w, double tpd) {
+    record Stationary(double[] w, double tpd) {
     }
 
     /** The trial composition with the lowest TPD found (grid, then refinement); null if none below zero. */
@@ -116,9 +120,13 @@ public final class Miscibility {
             gridBest.add(new Stationary(w, t));
         }
         gridBest.sort((p, q) -> Double.compare(p.tpd, q.tpd));
-        for (int i = 0; i < Math.min(4, gridBest.size()); i++) {
+        for (int i = 0; i < Math.min(3, gridBest.size()); i++) {
             starts.add(gridBest.get(i).w);
             best = better(best, gridBest.get(i), z);
+        }
+        if (best != null && best.tpd < CLEAR_SPLIT) {
+            // the grid already found a clearly lower-energy phase: refining it changes the wording, not the answer
+            return best;
         }
         for (int i = 0; i < n; i++) {
             double[] w = new double[n];
@@ -128,7 +136,7 @@ public final class Miscibility {
             starts.add(w);
         }
         for (double[] w0 : starts) {
-            best = better(best, refine(model, w0, d, kelvin), z);
+            best = better(best, refine(model, w0, d, z, kelvin), z);
         }
         return best;
     }
@@ -141,7 +149,7 @@ public final class Miscibility {
     }
 
     /** Michelsen's successive substitution from {@code w0}; returns the end point with its TPD. */
-    private static Stationary refine(ActivityModel model, double[] w0, double[] d, double kelvin) {
+    private static Stationary refine(ActivityModel model, double[] w0, double[] d, double[] z, double kelvin) {
         int n = w0.length;
         double[] w = w0.clone();
         double[] bigW = new double[n];
@@ -162,8 +170,12 @@ public final class Miscibility {
                 w[i] = nw;
             }
             normalise(w);
-            if (change < 1e-10) {
+            if (change < 1e-9) {
                 break;
+            }
+            if (distance(w, z) < TRIVIAL_APPROACH) {
+                // heading for the trivial solution w = z, which says nothing about a split
+                return null;
             }
         }
         return new Stationary(w, tpd(model, w, d, kelvin));
