@@ -23,6 +23,8 @@ import picocli.CommandLine.ScopeType;
                 CohesionCommand.class,
                 MaterialsCommand.class,
                 MaterialCommand.class,
+                RecordCommand.class,
+                BackupCommand.class,
         })
 public final class CohesaCommand implements Runnable {
 

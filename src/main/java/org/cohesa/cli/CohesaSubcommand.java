@@ -31,6 +31,11 @@ public abstract class CohesaSubcommand implements Callable<Integer> {
     public final Integer call() throws Exception {
         execute();
         out().flush();
+        return exitCode();
+    }
+
+    /** The exit code after a successful run; a check that found a problem (e.g. {@code record verify}) returns 1. */
+    protected int exitCode() {
         return 0;
     }
 

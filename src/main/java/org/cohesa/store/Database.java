@@ -118,6 +118,47 @@ public final class Database implements AutoCloseable {
         }
     }
 
+    /**
+     * Runs read-only {@code work} in one read transaction: in WAL mode it sees one committed state of the
+     * database even while other connections write.
+     */
+    public synchronized <T> T inReadTransaction(SqlWork<T> work) {
+        try {
+            try (Statement st = connection.createStatement()) {
+                st.execute("BEGIN DEFERRED");
+            }
+            try {
+                return work.run(connection);
+            } finally {
+                try (Statement st = connection.createStatement()) {
+                    st.execute("COMMIT");
+                }
+            }
+        } catch (SQLException e) {
+            throw new StoreException("database read failed: " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Writes a consistent copy of the whole database to {@code target} with SQLite's {@code VACUUM INTO}
+     * (a read transaction: other processes keep reading and writing meanwhile). The target must not exist.
+     */
+    public synchronized void backupTo(Path target) {
+        if (Files.exists(target)) {
+            throw new org.cohesa.core.InvalidInputException("FILE", target.toString(), "already exists; choose a new file name");
+        }
+        Path parent = target.toAbsolutePath().getParent();
+        if (parent != null && !Files.isDirectory(parent)) {
+            throw new org.cohesa.core.InvalidInputException("FILE", target.toString(), "its folder does not exist");
+        }
+        try (java.sql.PreparedStatement ps = connection.prepareStatement("VACUUM INTO ?")) {
+            ps.setString(1, target.toAbsolutePath().toString());
+            ps.execute();
+        } catch (SQLException e) {
+            throw new StoreException("backup to " + target + " failed: " + e.getMessage(), e);
+        }
+    }
+
     @Override
     public void close() {
         try {

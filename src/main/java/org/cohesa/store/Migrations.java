@@ -42,7 +42,29 @@ public final class Migrations {
                             + " synonyms TEXT, kind TEXT NOT NULL,"
                             + " dD REAL NOT NULL CHECK (dD >= 0), dP REAL NOT NULL CHECK (dP >= 0), dH REAL NOT NULL CHECK (dH >= 0),"
                             + " r0 REAL NOT NULL CHECK (r0 > 0),"
-                            + " source TEXT NOT NULL, note TEXT)")));
+                            + " source TEXT NOT NULL, note TEXT)")),
+            new Migration(4, "substitution records: append-only hash-chained events and the chain's head note", List.of(
+                    "CREATE TABLE record_event ("
+                            + " id INTEGER PRIMARY KEY AUTOINCREMENT,"
+                            + " record_id INTEGER NOT NULL CHECK (record_id > 0),"
+                            + " seq INTEGER NOT NULL CHECK (seq > 0),"
+                            + " kind TEXT NOT NULL,"
+                            + " payload TEXT NOT NULL,"
+                            + " actor TEXT NOT NULL,"
+                            + " at TEXT NOT NULL,"
+                            + " prev_record_id INTEGER NOT NULL,"
+                            + " prev_seq INTEGER NOT NULL,"
+                            + " prev_hash TEXT NOT NULL,"
+                            + " hash TEXT NOT NULL UNIQUE,"
+                            + " UNIQUE (record_id, seq))",
+                    "CREATE TABLE record_chain_head (singleton INTEGER PRIMARY KEY CHECK (singleton = 1),"
+                            + " events INTEGER NOT NULL, last_hash TEXT NOT NULL, last_record_id INTEGER NOT NULL, last_seq INTEGER NOT NULL,"
+                            + " max_record_id INTEGER NOT NULL)",
+                    // the app never changes a stored event; these guards stop slips, the hash chain catches the rest
+                    "CREATE TRIGGER record_event_append_only_update BEFORE UPDATE ON record_event"
+                            + " BEGIN SELECT RAISE(ABORT, 'substitution record events are append-only'); END",
+                    "CREATE TRIGGER record_event_append_only_delete BEFORE DELETE ON record_event"
+                            + " BEGIN SELECT RAISE(ABORT, 'substitution record events are append-only'); END")));
 
     private Migrations() {
     }
