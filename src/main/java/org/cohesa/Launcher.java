@@ -2,9 +2,11 @@ package org.cohesa;
 
 import org.cohesa.cli.CohesaCommand;
 import org.cohesa.desktop.DesktopLauncher;
+import org.cohesa.desktop.StartOptions;
 
 /**
- * Entry point of {@code cohesa.jar}: no arguments opens the desktop app, any argument runs the command line.
+ * Entry point of {@code cohesa.jar}: no arguments (or only the desktop options of {@code StartOptions}, such as
+ * {@code --screenshot=FILE --screen=NAME}) opens the desktop app, any other argument runs the command line.
  * It must not extend {@code javafx.application.Application}: the JavaFX launcher refuses a fat jar whose
  * main class does.
  */
@@ -14,7 +16,7 @@ public final class Launcher {
     }
 
     public static void main(String[] args) {
-        boolean desktop = args.length == 0 || (args.length >= 1 && args[0].startsWith("--screenshot="));
+        boolean desktop = args.length == 0 || java.util.Arrays.stream(args).allMatch(StartOptions::isDesktopOption);
         if (!desktop) {
             CohesaCommand.main(args);
             return;

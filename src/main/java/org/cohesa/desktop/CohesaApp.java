@@ -1,34 +1,139 @@
 package org.cohesa.desktop;
 
+import java.io.IOException;
 import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.Locale;
 import javafx.animation.PauseTransition;
 import javafx.application.Application;
+import javafx.application.ConditionalFeature;
 import javafx.application.Platform;
 import javafx.scene.Scene;
+import javafx.scene.SceneAntialiasing;
 import javafx.stage.Stage;
 import javafx.util.Duration;
+import org.cohesa.desktop.common.ErrorText;
+import org.cohesa.desktop.common.Session;
+import org.cohesa.desktop.common.Settings;
+import org.cohesa.desktop.common.TargetChoice;
 import org.cohesa.store.DataHome;
 
-/** The desktop workbench. {@code --screenshot=FILE} renders the window once to a PNG and exits (for docs and CI). */
+/**
+ * The desktop workbench. Remembers the window, the screen, the plot settings and the target between runs
+ * ({@link Settings}). See {@link StartOptions} for the screenshot and frame-measurement modes.
+ */
 public final class CohesaApp extends Application {
 
+    private Workbench workbench;
+    private Settings settings;
+    private Path settingsFile;
+    private Stage stage;
+
     @Override
-    public void start(Stage stage) {
+    public void start(Stage primary) {
+        this.stage = primary;
+        StartOptions opts;
+        try {
+            opts = StartOptions.parse(getParameters().getNamed());
+        } catch (IllegalArgumentException e) {
+            System.err.println("error: " + e.getMessage());
+            Platform.exit();
+            return;
+        }
         Path db = DataHome.defaultDatabase();
-        Workbench workbench = new Workbench(db);
-        Scene scene = new Scene(workbench.root(), 1280, 800);
-        stage.setTitle("Cohesa — solvent and blend workbench");
-        stage.setScene(scene);
-        stage.show();
-        workbench.load();
-        String shot = getParameters().getNamed().get("screenshot");
-        if (shot != null) {
-            PauseTransition wait = new PauseTransition(Duration.seconds(2.5));
+        settingsFile = db.resolveSibling(Settings.FILE_NAME);
+        settings = Settings.load(settingsFile);
+        Session session = new Session(db);
+        Thread.setDefaultUncaughtExceptionHandler((t, e) -> session.jobs().complain(ErrorText.of(e)));
+        workbench = new Workbench(session, SceneAntialiasing.BALANCED);
+        boolean scripted = opts.screenshot() != null || opts.measurePoints() > 0;
+        double w = scripted ? 1400 : settings.windowWidth;
+        double h = scripted ? 860 : settings.windowHeight;
+        Scene scene = new Scene(workbench.root(), w, h);
+        scene.getStylesheets().add(CohesaApp.class.getResource("cohesa.css").toExternalForm());
+        primary.setTitle("Cohesa — solvent and blend workbench");
+        primary.setScene(scene);
+        if (!scripted) {
+            if (!Double.isNaN(settings.windowX) && !Double.isNaN(settings.windowY)) {
+                primary.setX(settings.windowX);
+                primary.setY(settings.windowY);
+            }
+            primary.setMaximized(settings.maximized);
+            primary.setOnCloseRequest(e -> saveSettings());
+        }
+        workbench.apply(settings);
+        primary.show();
+        workbench.load(() -> afterLoad(opts, scene));
+    }
+
+    @Override
+    public void stop() {
+        if (workbench != null && settingsFile != null && stage != null && stage.isShowing()) {
+            saveSettings();
+        }
+    }
+
+    private void afterLoad(StartOptions opts, Scene scene) {
+        Session session = workbench.session();
+        if (opts.target() != null) {
+            session.targetProperty().set(new TargetChoice("typed-in sphere", opts.target(), "--target"));
+        }
+        if (opts.select() != null) {
+            session.solvents().stream().filter(s -> s.name().equalsIgnoreCase(opts.select())).findFirst()
+                    .ifPresent(s -> session.selectedSolventProperty().set(s));
+        }
+        if (opts.screen() != null) {
+            workbench.show(opts.screen());
+        }
+        if (opts.view() >= 0) {
+            workbench.spaceView().showView(opts.view());
+        }
+        if (opts.measurePoints() > 0) {
+            measure(opts.measurePoints());
+        } else if (opts.screenshot() != null) {
+            PauseTransition wait = new PauseTransition(Duration.seconds(1.5));
             wait.setOnFinished(e -> {
-                Snapshots.savePng(scene.snapshot(null), Path.of(shot));
+                Snapshots.savePng(scene.snapshot(null), opts.screenshot());
                 Platform.exit();
             });
             wait.play();
+        }
+    }
+
+    /** Rotates the 3D view with {@code points} points for 8 s and prints the frame intervals (ms). */
+    private void measure(int points) {
+        int library = workbench.spaceModel().points().size();
+        workbench.spaceModel().addSyntheticPoints(Math.max(0, points - library));
+        workbench.show(Screen.SPACE);
+        workbench.spaceView().showView(0);
+        PauseTransition settle = new PauseTransition(Duration.seconds(1.5));
+        settle.setOnFinished(e -> workbench.spaceView().view3d().measureFrames(8, ms -> {
+            double[] sorted = ms.clone();
+            Arrays.sort(sorted);
+            double median = sorted.length == 0 ? Double.NaN : sorted[sorted.length / 2];
+            double p95 = sorted.length == 0 ? Double.NaN : sorted[(int) Math.floor(sorted.length * 0.95)];
+            double max = sorted.length == 0 ? Double.NaN : sorted[sorted.length - 1];
+            System.out.printf(Locale.ROOT, "points=%d frames=%d median_ms=%.1f p95_ms=%.1f max_ms=%.1f median_fps=%.1f scene3d=%s%n",
+                    workbench.spaceView().view3d().pointCount(), ms.length, median, p95, max, 1000 / median,
+                    Platform.isSupported(ConditionalFeature.SCENE3D));
+            Platform.exit();
+        }));
+        settle.play();
+    }
+
+    private void saveSettings() {
+        settings.maximized = stage.isMaximized();
+        if (!stage.isMaximized()) {
+            settings.windowX = stage.getX();
+            settings.windowY = stage.getY();
+            settings.windowWidth = stage.getWidth();
+            settings.windowHeight = stage.getHeight();
+        }
+        workbench.remember(settings);
+        try {
+            settings.save(settingsFile);
+        } catch (IOException | RuntimeException e) {
+            System.err.println("cohesa: could not save the window settings: " + e.getMessage());
         }
     }
 }

@@ -1,115 +1,242 @@
 package org.cohesa.desktop;
 
-import java.nio.file.Path;
-import java.util.List;
-import javafx.beans.property.ReadOnlyObjectWrapper;
-import javafx.collections.FXCollections;
-import javafx.collections.ObservableList;
-import javafx.collections.transformation.FilteredList;
-import javafx.collections.transformation.SortedList;
-import javafx.concurrent.Task;
+import java.util.EnumMap;
+import java.util.Map;
+import javafx.beans.binding.Bindings;
 import javafx.geometry.Insets;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
 import javafx.scene.Parent;
+import javafx.scene.SceneAntialiasing;
+import javafx.scene.control.Button;
 import javafx.scene.control.Label;
-import javafx.scene.control.TableColumn;
-import javafx.scene.control.TableView;
-import javafx.scene.control.TextField;
+import javafx.scene.control.Menu;
+import javafx.scene.control.MenuBar;
+import javafx.scene.control.MenuItem;
+import javafx.scene.control.ProgressBar;
+import javafx.scene.control.SeparatorMenuItem;
+import javafx.scene.control.Tab;
+import javafx.scene.control.TabPane;
+import javafx.scene.input.KeyCombination;
 import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
-import org.cohesa.core.solvent.Solvent;
-import org.cohesa.store.Database;
-import org.cohesa.store.SolventRepository;
+import org.cohesa.desktop.common.Dialogs;
+import org.cohesa.desktop.common.Session;
+import org.cohesa.desktop.common.Settings;
+import org.cohesa.desktop.common.TargetChoice;
+import org.cohesa.desktop.library.LibraryModel;
+import org.cohesa.desktop.library.LibraryView;
+import org.cohesa.desktop.space.Colouring;
+import org.cohesa.desktop.space.SpaceModel;
+import org.cohesa.desktop.space.SpaceView;
+import org.cohesa.desktop.target.TargetModel;
+import org.cohesa.desktop.target.TargetView;
+import org.cohesa.core.hsp.SolubilitySphere;
 
-/** The main window: for now the searchable, sortable solvent library. */
+/**
+ * The main window: a menu bar, one tab per screen, and a status bar with the current job's progress and a
+ * cancel button. Builds the view-models over one {@link Session} and wires the screens to it.
+ */
 public final class Workbench {
 
-    private final Path dbFile;
-    private final BorderPane root = new BorderPane();
-    private final ObservableList<Solvent> solvents = FXCollections.observableArrayList();
-    private final Label status = new Label("Opening the library…");
+    static final String SAFETY_NOTICE = "Every number Cohesa shows is a screening estimate. Solvents burn, poison and can harm "
+            + "fertility. The supplier's safety data sheet, your local codes and your site's licensed safety professionals "
+            + "decide; test every blend in the lab before use.";
 
-    public Workbench(Path dbFile) {
-        this.dbFile = dbFile;
+    private final Session session;
+    private final BorderPane root = new BorderPane();
+    private final TabPane tabs = new TabPane();
+    private final Map<Screen, Tab> tabByScreen = new EnumMap<>(Screen.class);
+    private final LibraryModel libraryModel;
+    private final LibraryView libraryView;
+    private final TargetView targetView;
+    private final SpaceModel spaceModel;
+    private final SpaceView spaceView;
+
+    public Workbench(Session session, SceneAntialiasing antialiasing) {
+        this.session = session;
         root.setId("workbench");
-        TextField filter = new TextField();
-        filter.setId("library-filter");
-        filter.setPromptText("Filter by name, synonym or CAS");
-        FilteredList<Solvent> filtered = new FilteredList<>(solvents, s -> true);
-        filter.textProperty().addListener((o, a, text) -> filtered.setPredicate(s -> matches(s, text)));
-        TableView<Solvent> table = new TableView<>();
-        table.setId("solvent-table");
-        SortedList<Solvent> sorted = new SortedList<>(filtered);
-        sorted.comparatorProperty().bind(table.comparatorProperty());
-        table.setItems(sorted);
-        table.getColumns().addAll(List.of(
-                text("Name", Solvent::name, 220),
-                text("CAS", Solvent::cas, 100),
-                number("δD", s -> s.hasHansen() ? s.hansen().dD() : null),
-                number("δP", s -> s.hasHansen() ? s.hansen().dP() : null),
-                number("δH", s -> s.hasHansen() ? s.hansen().dH() : null),
-                number("Vm cm³/mol", Solvent::effectiveMolarVolume),
-                number("bp °C", Solvent::boilingPointC),
-                number("Flash point °C", Solvent::flashPointC),
-                text("ICH class", s -> s.ichClass() == null ? "" : s.ichClass().toString(), 80),
-                text("Family", Solvent::family, 120)));
-        VBox top = new VBox(8, new Label("Solvent library"), filter);
-        top.setPadding(new Insets(10));
-        root.setTop(top);
-        root.setCenter(table);
-        HBox bottom = new HBox(status);
-        HBox.setHgrow(status, Priority.ALWAYS);
-        bottom.setPadding(new Insets(6, 10, 6, 10));
-        status.setId("status");
-        root.setBottom(bottom);
+        libraryModel = new LibraryModel(session);
+        libraryView = new LibraryView(libraryModel);
+        targetView = new TargetView(new TargetModel(session));
+        spaceModel = new SpaceModel(session);
+        spaceView = new SpaceView(spaceModel, antialiasing);
+        addScreen(Screen.LIBRARY, libraryView.node());
+        addScreen(Screen.TARGET, targetView.node());
+        addScreen(Screen.SPACE, spaceView.node());
+        tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        tabs.setId("screens");
+        root.setTop(menus());
+        root.setCenter(tabs);
+        root.setBottom(statusBar());
     }
 
     public Parent root() {
         return root;
     }
 
-    /** Loads the library off the FX thread. */
-    public void load() {
-        Task<List<Solvent>> task = new Task<>() {
-            @Override
-            protected List<Solvent> call() {
-                try (Database db = Database.open(dbFile)) {
-                    return new SolventRepository(db).all();
-                }
-            }
-        };
-        task.setOnSucceeded(e -> {
-            solvents.setAll(task.getValue());
-            status.setText(solvents.size() + " solvents · database " + dbFile);
-        });
-        task.setOnFailed(e -> status.setText("Could not open the library: " + task.getException().getMessage()));
-        Thread t = new Thread(task, "library-loader");
-        t.setDaemon(true);
-        t.start();
+    public Session session() {
+        return session;
     }
 
-    private static boolean matches(Solvent s, String text) {
-        if (text == null || text.isBlank()) {
-            return true;
+    public SpaceView spaceView() {
+        return spaceView;
+    }
+
+    public SpaceModel spaceModel() {
+        return spaceModel;
+    }
+
+    public LibraryView libraryView() {
+        return libraryView;
+    }
+
+    public LibraryModel libraryModel() {
+        return libraryModel;
+    }
+
+    public TargetView targetView() {
+        return targetView;
+    }
+
+    /** Loads the library off the FX thread; {@code then} runs on the FX thread once it is shown. */
+    public void load(Runnable then) {
+        libraryModel.reload(then);
+    }
+
+    public void show(Screen s) {
+        Tab t = tabByScreen.get(s);
+        if (t != null) {
+            tabs.getSelectionModel().select(t);
         }
-        String k = text.strip().toLowerCase(java.util.Locale.ROOT);
-        return s.name().toLowerCase(java.util.Locale.ROOT).contains(k) || (s.cas() != null && s.cas().contains(k))
-                || s.synonyms().stream().anyMatch(x -> x.toLowerCase(java.util.Locale.ROOT).contains(k));
     }
 
-    private static TableColumn<Solvent, String> text(String title, java.util.function.Function<Solvent, String> f, double width) {
-        TableColumn<Solvent, String> c = new TableColumn<>(title);
-        c.setCellValueFactory(cd -> new ReadOnlyObjectWrapper<>(f.apply(cd.getValue())));
-        c.setPrefWidth(width);
-        return c;
+    public Screen currentScreen() {
+        Tab t = tabs.getSelectionModel().getSelectedItem();
+        return tabByScreen.entrySet().stream().filter(e -> e.getValue() == t).map(Map.Entry::getKey).findFirst().orElse(Screen.LIBRARY);
     }
 
-    private static TableColumn<Solvent, Double> number(String title, java.util.function.Function<Solvent, Double> f) {
-        TableColumn<Solvent, Double> c = new TableColumn<>(title);
-        c.setCellValueFactory(cd -> new ReadOnlyObjectWrapper<>(f.apply(cd.getValue())));
-        c.setPrefWidth(90);
-        c.setStyle("-fx-alignment: CENTER-RIGHT;");
-        return c;
+    /** Restores the screen, plot settings and target remembered from the last run. */
+    public void apply(Settings s) {
+        try {
+            spaceModel.colouringProperty().set(Colouring.valueOf(s.colourBy));
+        } catch (IllegalArgumentException | NullPointerException e) {
+            spaceModel.colouringProperty().set(Colouring.FAMILY);
+        }
+        spaceModel.doubledDdProperty().set(s.doubledDd);
+        if (s.hasTarget()) {
+            try {
+                session.targetProperty().set(new TargetChoice(s.targetName,
+                        SolubilitySphere.of(s.targetDd, s.targetDp, s.targetDh, s.targetR0), s.targetSource));
+            } catch (IllegalArgumentException e) {
+                session.jobs().complain("The remembered target was not valid and was dropped: " + e.getMessage());
+            }
+        }
+        Screen screen = Screen.byKey(s.screen);
+        show(screen == null ? Screen.LIBRARY : screen);
+    }
+
+    /** Copies the current screen, plot settings and target into {@code s}. */
+    public void remember(Settings s) {
+        s.screen = currentScreen().key();
+        s.colourBy = spaceModel.colouringProperty().get().name();
+        s.doubledDd = spaceModel.doubledDdProperty().get();
+        TargetChoice t = session.target();
+        if (t != null) {
+            s.targetName = t.name();
+            s.targetSource = t.source();
+            s.targetDd = t.sphere().centre().dD();
+            s.targetDp = t.sphere().centre().dP();
+            s.targetDh = t.sphere().centre().dH();
+            s.targetR0 = t.sphere().r0();
+        }
+    }
+
+    private void addScreen(Screen s, Node content) {
+        Tab t = new Tab(s.title(), content);
+        t.setId("tab-" + s.key());
+        tabs.getTabs().add(t);
+        tabByScreen.put(s, t);
+    }
+
+    private MenuBar menus() {
+        Menu file = new Menu("_File");
+        MenuItem reload = item("_Reload the library", "F5", e -> libraryModel.reload(null));
+        MenuItem quit = item("_Quit", "Shortcut+Q", e -> javafx.application.Platform.exit());
+        file.getItems().addAll(reload, new SeparatorMenuItem(), quit);
+        Menu view = new Menu("_View");
+        int i = 1;
+        for (Screen s : tabByScreen.keySet()) {
+            view.getItems().add(item("_" + i + " " + s.title(), "Shortcut+" + i, e -> show(s)));
+            i++;
+        }
+        Menu help = new Menu("_Help");
+        help.getItems().addAll(
+                item("_Safety notice", null, e -> Dialogs.message(root, "Safety notice", SAFETY_NOTICE)),
+                item("_Keyboard", null, e -> Dialogs.message(root, "Keyboard",
+                        "Ctrl+1…" + tabByScreen.size() + ": screens · Ctrl+C: copy the selected rows · F5: reload the library\n"
+                                + "Alt + underlined letter: buttons and fields\n"
+                                + "3D view: arrow keys rotate, + and − zoom, R resets; drag rotates, the wheel zooms, "
+                                + "right- or shift-drag pans")),
+                item("_About Cohesa", null, e -> Dialogs.message(root, "About Cohesa",
+                        "Cohesa " + version() + " — solvent and blend selection with Hansen solubility parameters.\nDatabase: "
+                                + session.databaseFile() + "\n\n" + SAFETY_NOTICE)));
+        MenuBar bar = new MenuBar(file, view, help);
+        bar.setId("menus");
+        return bar;
+    }
+
+    private static String version() {
+        String v = Workbench.class.getPackage().getImplementationVersion();
+        return v == null ? "(development build)" : v;
+    }
+
+    private static MenuItem item(String text, String accelerator, javafx.event.EventHandler<javafx.event.ActionEvent> action) {
+        MenuItem m = new MenuItem(text);
+        if (accelerator != null) {
+            m.setAccelerator(KeyCombination.keyCombination(accelerator));
+        }
+        m.setOnAction(action);
+        return m;
+    }
+
+    private Node statusBar() {
+        Label message = new Label();
+        message.setId("status");
+        message.textProperty().bind(session.jobs().messageProperty());
+        message.setMaxWidth(Double.MAX_VALUE);
+        session.jobs().failedProperty().addListener((o, a, bad) -> {
+            if (bad) {
+                message.getStyleClass().add("status-problem");
+            } else {
+                message.getStyleClass().remove("status-problem");
+            }
+        });
+        HBox.setHgrow(message, Priority.ALWAYS);
+        ProgressBar progress = new ProgressBar();
+        progress.setId("job-progress");
+        progress.setPrefWidth(160);
+        progress.progressProperty().bind(session.jobs().progressProperty());
+        progress.visibleProperty().bind(session.jobs().runningProperty());
+        progress.managedProperty().bind(progress.visibleProperty());
+        Button cancel = new Button("Cancel");
+        cancel.setId("job-cancel");
+        cancel.setOnAction(e -> session.jobs().cancel());
+        cancel.visibleProperty().bind(session.jobs().runningProperty());
+        cancel.managedProperty().bind(cancel.visibleProperty());
+        Label target = new Label();
+        target.setId("status-target");
+        target.textProperty().bind(Bindings.createStringBinding(() -> session.target() == null ? "no target"
+                : "target: " + session.target().name(), session.targetProperty()));
+        target.getStyleClass().add("status-target");
+        Label safety = new Label("Screening estimates: the SDS and your safety professionals decide.");
+        safety.getStyleClass().add("status-safety");
+        HBox bar = new HBox(10, message, progress, cancel, target, safety);
+        bar.setAlignment(Pos.CENTER_LEFT);
+        bar.setPadding(new Insets(4, 10, 4, 10));
+        bar.getStyleClass().add("status-bar");
+        return new VBox(bar);
     }
 }

@@ -1,0 +1,48 @@
+package org.cohesa.desktop;
+
+import java.util.Locale;
+
+/** The workbench's screens, in tab order; {@code key} is the name used by {@code --screen=} and the settings. */
+public enum Screen {
+    LIBRARY("library", "Library"),
+    TARGET("target", "Target"),
+    SPACE("space", "Parameter space");
+
+    private final String key;
+    private final String title;
+
+    Screen(String key, String title) {
+        this.key = key;
+        this.title = title;
+    }
+
+    public String key() {
+        return key;
+    }
+
+    public String title() {
+        return title;
+    }
+
+    /** The screen named {@code key} (case-insensitive), or null. */
+    public static Screen byKey(String key) {
+        if (key == null) {
+            return null;
+        }
+        for (Screen s : values()) {
+            if (s.key.equals(key.strip().toLowerCase(Locale.ROOT))) {
+                return s;
+            }
+        }
+        return null;
+    }
+
+    /** "library, target, …" for messages. */
+    public static String keys() {
+        StringBuilder b = new StringBuilder();
+        for (Screen s : values()) {
+            b.append(b.length() == 0 ? "" : ", ").append(s.key);
+        }
+        return b.toString();
+    }
+}

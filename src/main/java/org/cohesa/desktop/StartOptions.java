@@ -1,0 +1,70 @@
+package org.cohesa.desktop;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.cohesa.core.InvalidInputException;
+import org.cohesa.core.hsp.SolubilitySphere;
+
+/**
+ * Options of the desktop app, all optional:
+ * {@code --screenshot=FILE} (render once to PNG and exit), {@code --screen=NAME} (which screen to open),
+ * {@code --view=3d|p-h|d-p|d-h|teas} (which plot on the parameter-space screen),
+ * {@code --target=dD,dP,dH,R0} (start with this sphere), {@code --select=NAME} (select a solvent),
+ * {@code --measure-frames=N} (rotate the 3D view with N points, print frame times, exit).
+ */
+public record StartOptions(Path screenshot, Screen screen, int view, SolubilitySphere target, String select, int measurePoints) {
+
+    static final List<String> NAMES = List.of("screenshot", "screen", "view", "target", "select", "measure-frames");
+    private static final List<String> VIEWS = List.of("3d", "p-h", "d-p", "d-h", "teas");
+
+    /** True for an argument the desktop app understands (the launcher sends everything else to the command line). */
+    public static boolean isDesktopOption(String arg) {
+        return NAMES.stream().anyMatch(n -> arg.startsWith("--" + n + "="));
+    }
+
+    /** @throws InvalidInputException naming the bad option */
+    public static StartOptions parse(Map<String, String> named) {
+        String shot = named.get("screenshot");
+        Screen screen = null;
+        if (named.containsKey("screen")) {
+            screen = Screen.byKey(named.get("screen"));
+            if (screen == null) {
+                throw new InvalidInputException("--screen", named.get("screen"), "unknown screen; use one of " + Screen.keys());
+            }
+        }
+        int view = -1;
+        if (named.containsKey("view")) {
+            view = VIEWS.indexOf(named.get("view").strip().toLowerCase(java.util.Locale.ROOT));
+            if (view < 0) {
+                throw new InvalidInputException("--view", named.get("view"), "unknown view; use one of " + String.join(", ", VIEWS));
+            }
+        }
+        SolubilitySphere target = null;
+        if (named.containsKey("target")) {
+            String t = named.get("target");
+            String[] parts = t.split(",");
+            try {
+                if (parts.length != 4) {
+                    throw new IllegalArgumentException("give four numbers dD,dP,dH,R0");
+                }
+                target = SolubilitySphere.of(Double.parseDouble(parts[0].strip()), Double.parseDouble(parts[1].strip()),
+                        Double.parseDouble(parts[2].strip()), Double.parseDouble(parts[3].strip()));
+            } catch (IllegalArgumentException e) {
+                throw new InvalidInputException("--target", t, e instanceof NumberFormatException ? "not a number" : e.getMessage());
+            }
+        }
+        int points = 0;
+        if (named.containsKey("measure-frames")) {
+            try {
+                points = Integer.parseInt(named.get("measure-frames").strip());
+            } catch (NumberFormatException e) {
+                points = -1;
+            }
+            if (points < 1 || points > 100_000) {
+                throw new InvalidInputException("--measure-frames", named.get("measure-frames"), "give the number of points, 1 to 100000");
+            }
+        }
+        return new StartOptions(shot == null ? null : Path.of(shot), screen, view, target, named.get("select"), points);
+    }
+}

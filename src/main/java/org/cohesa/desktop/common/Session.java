@@ -1,0 +1,71 @@
+package org.cohesa.desktop.common;
+
+import java.nio.file.Path;
+import java.util.List;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import org.cohesa.core.hsp.HansenParameters;
+import org.cohesa.core.solvent.Blend;
+import org.cohesa.core.solvent.Solvent;
+import org.cohesa.store.Database;
+
+/**
+ * State shared by the screens of one app session: the library, the target, what is selected. Screens bind
+ * to these properties, so a click in the 3D view selects the row in the library table and a blend chosen on
+ * the design screen appears in the plots. Touched on the FX thread only; database work goes through
+ * {@link #jobs()}.
+ */
+public final class Session {
+
+    private final Path databaseFile;
+    private final Jobs jobs = new Jobs();
+    private final ObservableList<Solvent> solvents = FXCollections.observableArrayList();
+    private final ObjectProperty<TargetChoice> target = new SimpleObjectProperty<>();
+    private final ObjectProperty<Solvent> selectedSolvent = new SimpleObjectProperty<>();
+    private final ObjectProperty<Blend> selectedBlend = new SimpleObjectProperty<>();
+    private final ObjectProperty<List<HansenParameters>> dryingPath = new SimpleObjectProperty<>(List.of());
+
+    public Session(Path databaseFile) {
+        this.databaseFile = databaseFile;
+    }
+
+    public Path databaseFile() {
+        return databaseFile;
+    }
+
+    /** Opens the database for one piece of work (call from a worker thread). */
+    public Database openDatabase() {
+        return Database.open(databaseFile);
+    }
+
+    public Jobs jobs() {
+        return jobs;
+    }
+
+    public ObservableList<Solvent> solvents() {
+        return solvents;
+    }
+
+    public ObjectProperty<TargetChoice> targetProperty() {
+        return target;
+    }
+
+    public TargetChoice target() {
+        return target.get();
+    }
+
+    public ObjectProperty<Solvent> selectedSolventProperty() {
+        return selectedSolvent;
+    }
+
+    public ObjectProperty<Blend> selectedBlendProperty() {
+        return selectedBlend;
+    }
+
+    /** The selected blend's parameters along its drying path (empty when none was computed). */
+    public ObjectProperty<List<HansenParameters>> dryingPathProperty() {
+        return dryingPath;
+    }
+}

@@ -1,0 +1,42 @@
+package org.cohesa.desktop;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.TimeUnit;
+import javafx.scene.Scene;
+import javafx.scene.SceneAntialiasing;
+import javafx.stage.Stage;
+import org.cohesa.desktop.common.Session;
+import org.testfx.util.WaitForAsyncUtils;
+
+/** A workbench on a scratch database in a real (headless) stage, for the desktop tests. */
+final class DesktopFixture {
+
+    final Path folder;
+    final Session session;
+    final Workbench workbench;
+
+    DesktopFixture(Stage stage) throws Exception {
+        folder = Files.createTempDirectory("cohesa-desktop-test");
+        session = new Session(folder.resolve("cohesa.db"));
+        workbench = new Workbench(session, SceneAntialiasing.DISABLED);
+        Scene scene = new Scene(workbench.root(), 1280, 800);
+        scene.getStylesheets().add(CohesaApp.class.getResource("cohesa.css").toExternalForm());
+        stage.setScene(scene);
+        stage.show();
+        workbench.load(null);
+    }
+
+    /** Waits until the library is loaded (the first load builds the database from the bundled table). */
+    void awaitLibrary() throws Exception {
+        WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> session.solvents().size() >= 8 && !session.jobs().runningProperty().get());
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
+    /** Waits until no background job is running. */
+    void awaitJobs() throws Exception {
+        WaitForAsyncUtils.waitForFxEvents();
+        WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> !session.jobs().runningProperty().get());
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+}
