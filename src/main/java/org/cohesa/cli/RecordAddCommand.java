@@ -7,6 +7,7 @@ import org.cohesa.core.records.SubstitutionRecord;
 import org.cohesa.core.records.TargetRef;
 import org.cohesa.core.solvent.Blend;
 import org.cohesa.core.solvent.SolventLibrary;
+import org.cohesa.core.target.Material;
 import org.cohesa.store.RecordRepository;
 import org.cohesa.store.SourceCatalog;
 import picocli.CommandLine.ArgGroup;
@@ -42,6 +43,8 @@ public final class RecordAddCommand extends CohesaSubcommand {
     static final class TargetChoice {
         @Option(names = "--target", paramLabel = "dD,dP,dH,R0", description = "Sphere of the material that must stay dissolved, MPa^½.")
         String sphere;
+        @Option(names = "--material", paramLabel = "NAME", description = "The material that must stay dissolved, from the material library.")
+        String material;
     }
 
     @Override
@@ -56,6 +59,11 @@ public final class RecordAddCommand extends CohesaSubcommand {
             var sphere = Targets.parseSphere("--target", target.sphere);
             targetText = target.sphere.strip();
             evidence.target(new TargetRef("sphere typed by the author", sphere, "typed as " + targetText + " by " + author.strip()));
+        } else if (target != null && target.material != null) {
+            Material m = ctx().materials().library().resolve("--material", target.material);
+            targetText = m.name();
+            String source = m.source() + catalog.citation(m.source()).map(c -> " — " + c).orElse("");
+            evidence.target(new TargetRef(m.name(), m.sphere(), source));
         }
         Evidence snapshot = evidence.build();
         RecordDraft draft = new RecordDraft(process, site, from.describe(), to.describe(), targetText, reason, snapshot);

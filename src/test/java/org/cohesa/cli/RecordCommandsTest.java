@@ -81,6 +81,25 @@ class RecordCommandsTest {
     }
 
     @Test
+    void aLibraryMaterialBecomesTheTargetWithItsSource() {
+        JsonNode material = run("materials", "--json").json().get(0);
+        String name = material.get("name").asText();
+        Result r = run("record", "add", "--process", "p (invented)", "--replaced", "toluene", "--replacement", "ethyl acetate",
+                "--reason", "supply", "--author", "A", "--material", name, "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode t = r.json().get("evidence").get("target");
+        assertEquals(name, t.get("label").asText());
+        assertEquals(material.get("dD").asDouble(), t.get("dD").asDouble(), 1e-9);
+        assertEquals(material.get("r0").asDouble(), t.get("r0").asDouble(), 1e-9);
+        assertTrue(t.get("source").asText().startsWith(material.get("source").asText()), t.toString());
+        assertTrue(r.json().get("evidence").get("replaced").has("red"));
+        Result unknown = run("record", "add", "--process", "p", "--replaced", "toluene", "--replacement", "ethanol",
+                "--reason", "r", "--author", "a", "--material", "no such polymer");
+        assertEquals(2, unknown.exitCode());
+        assertTrue(unknown.err().startsWith("error: --material"), unknown.err());
+    }
+
+    @Test
     void listShowsBothRecords() {
         JsonNode j = run("record", "list", "--json").json();
         assertEquals(2, j.size());
