@@ -9,6 +9,7 @@ import javafx.collections.ObservableList;
 import org.cohesa.core.hsp.HansenParameters;
 import org.cohesa.core.solvent.Blend;
 import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.target.Material;
 import org.cohesa.store.Database;
 
 /**
@@ -22,6 +23,7 @@ public final class Session {
     private final Path databaseFile;
     private final Jobs jobs = new Jobs();
     private final ObservableList<Solvent> solvents = FXCollections.observableArrayList();
+    private final ObservableList<Material> materials = FXCollections.observableArrayList();
     private final ObjectProperty<TargetChoice> target = new SimpleObjectProperty<>();
     private final ObjectProperty<Solvent> selectedSolvent = new SimpleObjectProperty<>();
     private final ObjectProperty<Blend> selectedBlend = new SimpleObjectProperty<>();
@@ -46,6 +48,11 @@ public final class Session {
 
     public ObservableList<Solvent> solvents() {
         return solvents;
+    }
+
+    /** The material library: published spheres and the user's own. */
+    public ObservableList<Material> materials() {
+        return materials;
     }
 
     public ObjectProperty<TargetChoice> targetProperty() {

@@ -16,7 +16,9 @@ import org.cohesa.core.RowError;
 import org.cohesa.core.solvent.Solvent;
 import org.cohesa.desktop.common.ErrorText;
 import org.cohesa.desktop.common.Session;
+import org.cohesa.core.target.Material;
 import org.cohesa.store.Database;
+import org.cohesa.store.MaterialRepository;
 import org.cohesa.store.SolventCsv;
 import org.cohesa.store.SolventRepository;
 
@@ -30,12 +32,17 @@ public final class LibraryModel {
     private final Session session;
     private final StringProperty filter = new SimpleStringProperty("");
     private final FilteredList<Solvent> filtered;
+    private final FilteredList<Material> filteredMaterials;
     private final ObservableList<String> importProblems = FXCollections.observableArrayList();
 
     public LibraryModel(Session session) {
         this.session = session;
         filtered = new FilteredList<>(session.solvents(), s -> true);
-        filter.addListener((o, a, text) -> filtered.setPredicate(s -> matches(s, text)));
+        filteredMaterials = new FilteredList<>(session.materials(), m -> true);
+        filter.addListener((o, a, text) -> {
+            filtered.setPredicate(s -> matches(s, text));
+            filteredMaterials.setPredicate(m -> matches(m, text));
+        });
     }
 
     public Session session() {
@@ -50,6 +57,10 @@ public final class LibraryModel {
         return filtered;
     }
 
+    public FilteredList<Material> filteredMaterials() {
+        return filteredMaterials;
+    }
+
     /** Lines describing the last refused import (empty when it went through). */
     public ObservableList<String> importProblems() {
         return importProblems;
@@ -59,12 +70,14 @@ public final class LibraryModel {
     public void reload(Runnable then) {
         session.jobs().run("Loading the library", p -> {
             try (Database db = session.openDatabase()) {
-                return new SolventRepository(db).all();
+                return new Loaded(new SolventRepository(db).all(), new MaterialRepository(db).all());
             }
-        }, list -> {
+        }, loaded -> {
+            List<Solvent> list = loaded.solvents();
             session.solvents().setAll(list);
-            session.jobs().say(list.size() + " solvents in the library (" + list.stream().filter(Solvent::userEntry).count()
-                    + " of your own) · " + session.databaseFile());
+            session.materials().setAll(loaded.materials());
+            session.jobs().say(list.size() + " solvents (" + list.stream().filter(Solvent::userEntry).count()
+                    + " of your own) and " + loaded.materials().size() + " materials · " + session.databaseFile());
             if (then != null) {
                 then.run();
             }
@@ -115,6 +128,9 @@ public final class LibraryModel {
         }
     }
 
+    private record Loaded(List<Solvent> solvents, List<Material> materials) {
+    }
+
     private interface RepoWork {
         void run(SolventRepository repo);
     }
@@ -126,6 +142,15 @@ public final class LibraryModel {
             }
             return Boolean.TRUE;
         }, ok -> reload(then));
+    }
+
+    static boolean matches(Material m, String text) {
+        if (text == null || text.isBlank()) {
+            return true;
+        }
+        String k = text.strip().toLowerCase(Locale.ROOT);
+        return m.name().toLowerCase(Locale.ROOT).contains(k) || m.kind().key().contains(k)
+                || m.synonyms().stream().anyMatch(x -> x.toLowerCase(Locale.ROOT).contains(k));
     }
 
     static boolean matches(Solvent s, String text) {

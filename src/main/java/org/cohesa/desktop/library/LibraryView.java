@@ -22,6 +22,7 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.target.Material;
 import org.cohesa.desktop.common.Columns;
 import org.cohesa.desktop.common.Dialogs;
 import org.cohesa.desktop.common.ErrorText;
@@ -54,8 +55,9 @@ public final class LibraryView {
         Label count = new Label();
         count.setId("library-count");
         count.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(
-                () -> model.filtered().size() + " of " + model.session().solvents().size() + " solvents",
-                model.filtered(), model.session().solvents()));
+                () -> model.filtered().size() + " of " + model.session().solvents().size() + " solvents, "
+                        + model.filteredMaterials().size() + " of " + model.session().materials().size() + " materials",
+                model.filtered(), model.session().solvents(), model.filteredMaterials(), model.session().materials()));
 
         Button add = button("_Add…", "library-add", e -> addEntry());
         Button edit = button("_Edit…", "library-edit", e -> editEntry());
@@ -113,6 +115,12 @@ public final class LibraryView {
         details.getStyleClass().add("details");
         SplitPane split = new SplitPane(table, details);
         split.setDividerPositions(0.8);
+        javafx.scene.control.TabPane kinds = new javafx.scene.control.TabPane(
+                new javafx.scene.control.Tab("Solvents", split), new javafx.scene.control.Tab("Materials", materialsTable()));
+        kinds.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
+        kinds.getTabs().get(0).setId("library-solvents");
+        kinds.getTabs().get(1).setId("library-materials");
+        kinds.setId("library-kinds");
 
         ListView<String> problems = new ListView<>(model.importProblems());
         problems.setId("import-problems");
@@ -133,7 +141,7 @@ public final class LibraryView {
         problemBox.managedProperty().bind(problemBox.visibleProperty());
 
         root.setTop(bar);
-        root.setCenter(split);
+        root.setCenter(kinds);
         root.setBottom(problemBox);
     }
 
@@ -143,6 +151,40 @@ public final class LibraryView {
 
     public TableView<Solvent> table() {
         return table;
+    }
+
+    private TableView<Material> materialsTable() {
+        TableView<Material> mt = new TableView<>();
+        mt.setId("material-table");
+        SortedList<Material> sortedMaterials = new SortedList<>(model.filteredMaterials());
+        sortedMaterials.comparatorProperty().bind(mt.comparatorProperty());
+        mt.setItems(sortedMaterials);
+        mt.getColumns().addAll(List.of(
+                Columns.<Material>text("Name", Material::name, 260),
+                Columns.<Material>text("Kind", m -> m.kind().key(), 80),
+                Columns.<Material>number("δD", m -> m.sphere().centre().dD(), 60, 1),
+                Columns.<Material>number("δP", m -> m.sphere().centre().dP(), 60, 1),
+                Columns.<Material>number("δH", m -> m.sphere().centre().dH(), 60, 1),
+                Columns.<Material>number("R0", m -> m.sphere().r0(), 60, 1),
+                Columns.<Material>text("Source", Material::source, 200),
+                Columns.<Material>text("Note", m -> m.note() == null ? "" : m.note(), 360),
+                Columns.<Material>text("Origin", m -> m.userEntry() ? "yours" : "bundled", 70)));
+        mt.setPlaceholder(new Label("No material matches the filter."));
+        TableTools.equip(mt, () -> exportTable(mt, "cohesa-materials.csv"));
+        return mt;
+    }
+
+    private void exportTable(TableView<?> t, String suggested) {
+        Path file = Dialogs.saveFile(root, "Export the table to CSV", suggested, "CSV files", "*.csv");
+        if (file == null) {
+            return;
+        }
+        try {
+            TableTools.writeCsv(t, file);
+            model.session().jobs().say("Exported " + t.getItems().size() + " rows to " + file);
+        } catch (java.io.IOException | RuntimeException ex) {
+            model.session().jobs().complain(ErrorText.of(ex));
+        }
     }
 
     private Solvent selected() {

@@ -1,0 +1,234 @@
+package org.cohesa.desktop.target;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.function.Function;
+import javafx.beans.binding.Bindings;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.collections.transformation.SortedList;
+import javafx.geometry.Insets;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.TableCell;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableView;
+import javafx.scene.control.TextField;
+import javafx.scene.control.TitledPane;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+import org.cohesa.core.target.Material;
+import org.cohesa.desktop.common.Columns;
+import org.cohesa.desktop.common.Dialogs;
+import org.cohesa.desktop.common.ErrorText;
+import org.cohesa.desktop.common.Numbers;
+import org.cohesa.desktop.common.TableTools;
+import org.cohesa.desktop.common.TargetChoice;
+
+/**
+ * The target screen: set the solubility sphere the other screens work against, and see the library's
+ * liquids ranked by RED to it.
+ */
+public final class TargetView {
+
+    private final TargetModel model;
+    private final BorderPane root = new BorderPane();
+    private final VBox side = new VBox(12);
+    private final TableView<TargetModel.Ranked> table = new TableView<>();
+    private final Label formProblem = new Label();
+
+    public TargetView(TargetModel model) {
+        this.model = model;
+        root.setId("target-screen");
+        GridPane form = new GridPane();
+        form.setHgap(8);
+        form.setVgap(6);
+        TextField name = field("target-name", model.nameProperty(), 16);
+        TextField dD = field("target-dd", model.dDProperty(), 6);
+        TextField dP = field("target-dp", model.dPProperty(), 6);
+        TextField dH = field("target-dh", model.dHProperty(), 6);
+        TextField r0 = field("target-r0", model.r0Property(), 6);
+        addRow(form, 0, "_Name", name);
+        addRow(form, 1, "δ_D (MPa½)", dD);
+        addRow(form, 2, "δ_P (MPa½)", dP);
+        addRow(form, 3, "δ_H (MPa½)", dH);
+        addRow(form, 4, "R_0 (MPa½)", r0);
+        Button apply = new Button("_Set target");
+        apply.setId("target-apply");
+        apply.setDefaultButton(true);
+        apply.setOnAction(e -> apply());
+        formProblem.setId("target-problem");
+        formProblem.getStyleClass().add("form-problems");
+        formProblem.setWrapText(true);
+        formProblem.setManaged(false);
+        formProblem.setVisible(false);
+        VBox typed = new VBox(8, new Label("A sphere from a publication or your own fit:"), form, apply, formProblem);
+        typed.setPadding(new Insets(8));
+        TitledPane typedPane = new TitledPane("Type in a sphere", typed);
+        typedPane.setCollapsible(false);
+        typedPane.setId("target-typed");
+
+        Label current = new Label();
+        current.setId("target-current");
+        current.getStyleClass().add("headline");
+        current.setWrapText(true);
+        current.textProperty().bind(Bindings.createStringBinding(() -> describe(model.session().target()),
+                model.session().targetProperty()));
+        side.getChildren().addAll(current, materialPicker(), typedPane);
+        side.setPadding(new Insets(10));
+        side.setPrefWidth(390);
+        side.setMinWidth(300);
+
+        table.setId("target-ranking");
+        SortedList<TargetModel.Ranked> sorted = new SortedList<>(model.ranked());
+        sorted.comparatorProperty().bind(table.comparatorProperty());
+        table.setItems(sorted);
+        table.getColumns().addAll(List.of(
+                Columns.text("Liquid", r -> r.solvent().name(), 240),
+                Columns.number("δD", r -> r.solvent().hansen().dD(), 60, 1),
+                Columns.number("δP", r -> r.solvent().hansen().dP(), 60, 1),
+                Columns.number("δH", r -> r.solvent().hansen().dH(), 60, 1),
+                Columns.number("Ra (MPa½)", TargetModel.Ranked::ra, 85, 2),
+                Columns.number("RED", TargetModel.Ranked::red, 65, 2),
+                Columns.text("Inside", r -> r.red() < 1 ? "yes" : "", 60),
+                Columns.number("bp (°C)", r -> r.solvent().boilingPointC(), 70, 0),
+                Columns.number("Flash pt (°C)", r -> r.solvent().flashPointC(), 108, 0),
+                Columns.text("ICH", r -> r.solvent().ichClass() == null ? "" : r.solvent().ichClass().toString(), 50)));
+        table.setPlaceholder(new Label("Set a target to rank the library's liquids by RED."));
+        TableTools.equip(table, this::exportCsv);
+        table.getSelectionModel().selectedItemProperty().addListener((o, a, r) -> {
+            if (r != null) {
+                model.session().selectedSolventProperty().set(r.solvent());
+            }
+        });
+        Label tableTitle = new Label("Library liquids by RED to the target (RED < 1: predicted to dissolve it)");
+        tableTitle.getStyleClass().add("section-title");
+        Region grow = new Region();
+        HBox.setHgrow(grow, Priority.ALWAYS);
+        Button export = new Button("E_xport CSV…");
+        export.setOnAction(e -> exportCsv());
+        HBox tableBar = new HBox(8, tableTitle, grow, export);
+        tableBar.setAlignment(Pos.CENTER_LEFT);
+        tableBar.setPadding(new Insets(8, 10, 8, 10));
+        BorderPane right = new BorderPane(table);
+        right.setTop(tableBar);
+        root.setLeft(side);
+        root.setCenter(right);
+    }
+
+    private Node materialPicker() {
+        TextField find = new TextField();
+        find.setId("material-filter");
+        find.setPromptText("Filter materials by name or kind");
+        javafx.collections.transformation.FilteredList<Material> filtered = new javafx.collections.transformation.FilteredList<>(
+                model.session().materials(), m -> true);
+        find.textProperty().addListener((o, a, t) -> filtered.setPredicate(m -> t == null || t.isBlank()
+                || m.name().toLowerCase(java.util.Locale.ROOT).contains(t.strip().toLowerCase(java.util.Locale.ROOT))
+                || m.kind().key().contains(t.strip().toLowerCase(java.util.Locale.ROOT))
+                || m.synonyms().stream().anyMatch(x -> x.toLowerCase(java.util.Locale.ROOT).contains(t.strip().toLowerCase(java.util.Locale.ROOT)))));
+        javafx.scene.control.ListView<Material> list = new javafx.scene.control.ListView<>(filtered.sorted(
+                java.util.Comparator.comparing(m -> m.name().toLowerCase(java.util.Locale.ROOT))));
+        list.setId("material-list");
+        list.setPrefHeight(260);
+        list.setCellFactory(v -> new javafx.scene.control.ListCell<>() {
+            @Override
+            protected void updateItem(Material m, boolean empty) {
+                super.updateItem(m, empty);
+                setText(empty || m == null ? null : m.name() + "  · " + m.kind().key());
+            }
+        });
+        Button use = new Button("_Use as target");
+        use.setId("material-use");
+        use.disableProperty().bind(list.getSelectionModel().selectedItemProperty().isNull());
+        use.setOnAction(e -> useMaterial(list.getSelectionModel().getSelectedItem()));
+        list.setOnMouseClicked(e -> {
+            if (e.getClickCount() == 2 && list.getSelectionModel().getSelectedItem() != null) {
+                useMaterial(list.getSelectionModel().getSelectedItem());
+            }
+        });
+        Label note = new Label("Published spheres; the source of each is shown with the target.");
+        note.getStyleClass().add("hint");
+        note.setWrapText(true);
+        VBox box = new VBox(6, find, list, use, note);
+        box.setPadding(new Insets(8));
+        TitledPane pane = new TitledPane("Pick a material", box);
+        pane.setCollapsible(false);
+        pane.setId("target-materials");
+        return pane;
+    }
+
+    private void useMaterial(Material m) {
+        if (m != null) {
+            model.useMaterial(m);
+            model.session().jobs().say("Target set: " + describe(model.session().target()));
+        }
+    }
+
+    public Node node() {
+        return root;
+    }
+
+    /** Extra panes (material picker, fit) added by later features, above the typed-in sphere. */
+    public void addSection(Node section) {
+        side.getChildren().add(1, section);
+    }
+
+    public TableView<TargetModel.Ranked> table() {
+        return table;
+    }
+
+    private void apply() {
+        try {
+            model.applyTypedSphere();
+            formProblem.setVisible(false);
+            formProblem.setManaged(false);
+            model.session().jobs().say("Target set: " + describe(model.session().target()));
+        } catch (RuntimeException ex) {
+            formProblem.setText(ErrorText.of(ex));
+            formProblem.setVisible(true);
+            formProblem.setManaged(true);
+        }
+    }
+
+    static String describe(TargetChoice t) {
+        if (t == null) {
+            return "No target yet: pick a material or type in a sphere.";
+        }
+        var c = t.sphere().centre();
+        return t.name() + ": δD " + Numbers.one(c.dD()) + ", δP " + Numbers.one(c.dP()) + ", δH " + Numbers.one(c.dH())
+                + ", R0 " + Numbers.one(t.sphere().r0()) + " MPa½" + (t.source().isBlank() ? "" : " (" + t.source() + ")");
+    }
+
+    private void exportCsv() {
+        Path file = Dialogs.saveFile(root, "Export the ranking to CSV", "cohesa-ranking.csv", "CSV files", "*.csv");
+        if (file == null) {
+            return;
+        }
+        try {
+            TableTools.writeCsv(table, file);
+            model.session().jobs().say("Exported " + table.getItems().size() + " rows to " + file);
+        } catch (java.io.IOException | RuntimeException ex) {
+            model.session().jobs().complain(ErrorText.of(ex));
+        }
+    }
+
+    private static TextField field(String id, javafx.beans.property.StringProperty p, int cols) {
+        TextField tf = new TextField();
+        tf.setId(id);
+        tf.setPrefColumnCount(cols);
+        tf.textProperty().bindBidirectional(p);
+        return tf;
+    }
+
+    private static void addRow(GridPane g, int row, String label, TextField tf) {
+        Label l = new Label(label);
+        l.setMnemonicParsing(true);
+        l.setLabelFor(tf);
+        g.addRow(row, l, tf);
+    }
+}
