@@ -58,7 +58,7 @@ public final class RecordAddCommand extends CohesaSubcommand {
         if (target != null && target.sphere != null) {
             var sphere = Targets.parseSphere("--target", target.sphere);
             targetText = target.sphere.strip();
-            evidence.target(new TargetRef("sphere typed by the author", sphere, "typed as " + targetText + " by " + author.strip()));
+            evidence.target(new TargetRef("sphere entered by hand", sphere, "entered as " + targetText + " by " + author.strip() + " when filing"));
         } else if (target != null && target.material != null) {
             Material m = ctx().materials().library().resolve("--material", target.material);
             targetText = m.name();

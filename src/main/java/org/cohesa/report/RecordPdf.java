@@ -116,8 +116,8 @@ public final class RecordPdf {
         l.heading("Summary");
         Evidence ev = r.evidence();
         List<String[]> rows = new ArrayList<>();
-        rows.add(new String[] {"Replaced", r.content().replaced()});
-        rows.add(new String[] {"Replacement", r.content().replacement()});
+        rows.add(new String[] {"Replaced", ev.section(Evidence.Sections.REPLACED).map(RecordPdf::liquidName).orElse(r.content().replaced())});
+        rows.add(new String[] {"Replacement", ev.section(Evidence.Sections.REPLACEMENT).map(RecordPdf::liquidName).orElse(r.content().replacement())});
         rows.add(new String[] {"Target", target(ev, r.content().target())});
         rows.add(new String[] {"Reason", r.content().reason()});
         rows.add(new String[] {"Filed", r.author() + ", " + stamp(r.created())});
@@ -149,7 +149,7 @@ public final class RecordPdf {
         JsonNode sb = safety == null ? null : safety.get(Evidence.Sections.REPLACEMENT);
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"", "Replaced", "Replacement"});
-        rows.add(new String[] {"Liquid (volume fractions)", a.path("notation").asText(), b.path("notation").asText()});
+        rows.add(new String[] {"Liquid (volume %)", liquidName(a), liquidName(b)});
         rows.add(new String[] {"δD, δP, δH (MPa½)", triple(a), triple(b)});
         if (a.has("red") || b.has("red")) {
             rows.add(new String[] {"Ra to target (MPa½)", n(a.get("ra_to_target"), 2), n(b.get("ra_to_target"), 2)});
@@ -164,6 +164,23 @@ public final class RecordPdf {
         rows.add(new String[] {"OEL TWA / STEL (ppm)", oels(a), oels(b)});
         rows.add(new String[] {"ICH Q3C class", perComponent(a, "ich_class"), perComponent(b, "ich_class")});
         l.table(new float[] {0.26f, 0.37f, 0.37f}, rows, true, true, 8.6f);
+    }
+
+    /** "toluene", or "ethyl acetate 50 % + n-butyl acetate 50 %" for a blend (volume percent). */
+    static String liquidName(JsonNode liquid) {
+        JsonNode cs = liquid.path("components");
+        if (cs.size() == 1) {
+            return cs.get(0).path("name").asText();
+        }
+        if (cs.isEmpty()) {
+            return liquid.path("notation").asText("—");
+        }
+        List<String> parts = new ArrayList<>();
+        for (JsonNode c : cs) {
+            parts.add(c.path("name").asText() + " " + String.format(Locale.ROOT, "%.4g", c.path("fraction").doubleValue() * 100)
+                    .replaceAll("\\.?0+$", "") + " %");
+        }
+        return String.join(" + ", parts);
     }
 
     private static String triple(JsonNode liquid) {
@@ -243,6 +260,8 @@ public final class RecordPdf {
     }
 
     private static void history(PdfLayout l, SubstitutionRecord r) throws IOException {
+        // keep the short history on one page: a quality reviewer reads it as one block
+        l.ensure(60 + 26f * r.history().size());
         l.heading("Status history");
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"Step", "Event", "Status after", "By", "When", "Comment"});
@@ -259,14 +278,16 @@ public final class RecordPdf {
         if (texts.isEmpty()) {
             return;
         }
-        l.heading("Cautions");
         float size = 9;
         List<String> lines = new ArrayList<>();
         for (String t : texts) {
             lines.addAll(l.wrap(l.fonts.regular, size, t, PdfLayout.RIGHT - PdfLayout.LEFT - 20));
+            lines.add("");
         }
+        lines.remove(lines.size() - 1);
         float h = lines.size() * (size + 2.6f) + 12;
-        l.ensure(h);
+        l.ensure(h + 40);
+        l.heading("Cautions");
         l.fillRect(PdfLayout.LEFT, l.y - h, 3, h, VERMILLION);
         float ty = l.y - 6 - size;
         for (String line : lines) {
@@ -327,7 +348,11 @@ public final class RecordPdf {
             return plain;
         }
         int cut = plain.lastIndexOf(". ", 300);
-        return (cut > 120 ? plain.substring(0, cut + 1) : plain.substring(0, 300)) + " […]";
+        if (cut < 120) {
+            cut = plain.lastIndexOf(' ', 280);
+            return plain.substring(0, cut) + " […]";
+        }
+        return plain.substring(0, cut + 1) + " […]";
     }
 
     static String n(JsonNode v, int decimals) {
