@@ -25,6 +25,7 @@ import picocli.CommandLine.ScopeType;
                 MaterialCommand.class,
                 RecordCommand.class,
                 BackupCommand.class,
+                HazardsCommand.class,
         })
 public final class CohesaCommand implements Runnable {
 

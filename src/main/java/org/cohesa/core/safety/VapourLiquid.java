@@ -1,0 +1,76 @@
+package org.cohesa.core.safety;
+
+import java.util.List;
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.NoBracketingException;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
+import org.cohesa.core.activity.ActivityModel;
+import org.cohesa.core.solvent.Antoine;
+
+/**
+ * Liquid–vapour equilibrium at low pressure by modified Raoult's law, pᵢ = xᵢ γᵢ Psatᵢ(T), with Antoine
+ * vapour pressures (Poling, Prausnitz, O'Connell, <i>The Properties of Gases and Liquids</i>, 5th ed., 2000)
+ * and activity coefficients from an {@link ActivityModel}. Ideal vapour phase; pressures in Pa, temperatures in K.
+ */
+final class VapourLiquid {
+
+    /** Standard atmosphere, Pa. */
+    static final double ATMOSPHERE_PA = 101_325.0;
+
+    private static final double ABSOLUTE_ACCURACY_K = 1e-6;
+    private static final int MAX_EVALUATIONS = 500;
+
+    private VapourLiquid() {
+    }
+
+    /** Partial pressures xᵢγᵢPsatᵢ(T), Pa; a component without an Antoine equation gives NaN. */
+    static double[] partialPressures(double[] x, List<Antoine> antoine, ActivityModel model, double kelvin) {
+        double[] g = model.gamma(x, kelvin);
+        double[] p = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            Antoine a = antoine.get(i);
+            p[i] = x[i] == 0 ? 0 : (a == null ? Double.NaN : x[i] * g[i] * a.pressurePa(kelvin));
+        }
+        return p;
+    }
+
+    /**
+     * Bubble-point temperature at {@code pressurePa}: Σ xᵢγᵢPsatᵢ(T) = P solved for T with Brent's method
+     * (Commons Math). For a pure liquid this is the Antoine equation inverted. Every component with xᵢ &gt; 0
+     * needs an Antoine equation.
+     *
+     * @return K, or NaN when no root lies in 150–700 K
+     */
+    static double bubblePointK(double[] x, List<Antoine> antoine, ActivityModel model, double pressurePa) {
+        UnivariateFunction f = t -> {
+            double sum = 0;
+            for (double p : partialPressures(x, antoine, model, t)) {
+                sum += p;
+            }
+            return Math.log(sum / pressurePa);
+        };
+        return solve(f, 150, 700);
+    }
+
+    /** Brent root of {@code f} in [lo, hi], scanning in 10 K steps for the first sign change; NaN when none is found. */
+    static double solve(UnivariateFunction f, double lo, double hi) {
+        double step = 10;
+        double a = lo;
+        double fa = f.value(a);
+        while (a < hi) {
+            double b = Math.min(a + step, hi);
+            double fb = f.value(b);
+            if (Double.isFinite(fa) && Double.isFinite(fb) && fa * fb <= 0) {
+                try {
+                    return new BrentSolver(ABSOLUTE_ACCURACY_K).solve(MAX_EVALUATIONS, f, a, b);
+                } catch (NoBracketingException | TooManyEvaluationsException e) {
+                    return Double.NaN;
+                }
+            }
+            a = b;
+            fa = fb;
+        }
+        return Double.NaN;
+    }
+}

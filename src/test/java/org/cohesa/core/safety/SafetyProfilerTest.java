@@ -1,0 +1,93 @@
+package org.cohesa.core.safety;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.cohesa.core.InvalidInputException;
+import org.cohesa.core.solvent.Blend;
+import org.cohesa.core.solvent.BlendComponent;
+import org.cohesa.core.solvent.ExposureLimit;
+import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.solvent.SolventLibrary;
+import org.junit.jupiter.api.Test;
+
+/** The profile's decisions: no silent ideal fallback, non-flammable components, cautions. */
+class SafetyProfilerTest {
+
+    private static final SolventLibrary LIB = TestSolvents.bundled();
+
+    private static Blend blend(String a, double fa, String b) {
+        return new Blend(List.of(new BlendComponent(LIB.resolve("s", a), fa), new BlendComponent(LIB.resolve("s", b), 1 - fa)));
+    }
+
+    @Test
+    void aBlendNoModelCanDescribeHasAnUnknownFlashPointNotAnIdealOne() {
+        // a liquid with neither UNIFAC groups nor Hansen parameters (invented for this test) leaves no activity model
+        Solvent unknown = TestSolvents.vle("test liquid without groups", "0-00-0", 100.0, 20.0, BlendFlashPointTest.ETHANOL,
+                ExposureLimit.NONE, "H225");
+        Blend b = new Blend(List.of(new BlendComponent(unknown, 0.5), new BlendComponent(LIB.resolve("s", "water"), 0.5)));
+        SafetyProfile p = SafetyProfiler.profile(b, 298.15);
+        assertEquals(SafetyProfile.FlashPointStatus.UNKNOWN, p.flashPoint().status());
+        assertNull(p.flashPoint().celsius());
+        assertTrue(p.flashPoint().detail().get(0).contains("test liquid without groups"), p.flashPoint().detail().toString());
+        assertNull(p.ghs().category());
+        List<String> c = Cautions.forProfile(p);
+        assertTrue(c.stream().anyMatch(s -> s.contains("could not be estimated")), c.toString());
+    }
+
+    @Test
+    void waterIsNotFlammableAndDilutesTheBlend() {
+        SafetyProfile water = SafetyProfiler.profile(Blend.pure(LIB.resolve("s", "water")), 298.15);
+        assertEquals(SafetyProfile.FlashPointStatus.NOT_FLAMMABLE, water.flashPoint().status());
+        assertNull(water.packingGroup());
+        assertEquals(GuideRank.RECOMMENDED, water.guideRank());
+        SafetyProfile aqueous = SafetyProfiler.profile(blend("ethanol", 0.4, "water"), 298.15);
+        assertTrue(aqueous.flashPoint().celsius() > LIB.resolve("s", "ethanol").flashPointC(), "water raises the flash point");
+        assertTrue(aqueous.flashPoint().detail().stream().anyMatch(d -> d.contains("water")), "the non-flammable component is named");
+    }
+
+    @Test
+    void blendRankIsTheLeastFavourableComponent() {
+        SafetyProfile p = SafetyProfiler.profile(blend("ethanol", 0.5, "N-methyl-2-pyrrolidone"), 298.15);
+        assertEquals(GuideRank.HAZARDOUS, p.guideRank());
+        assertEquals("reproductive toxicant", p.cmr().get(0).effect());
+        assertEquals(50.0, p.cmr().get(0).volumePercent(), 1e-9);
+    }
+
+    @Test
+    void hazardStatementsCarryTheirComponentsAndShares() {
+        SafetyProfile p = SafetyProfiler.profile(blend("toluene", 0.3, "ethyl acetate"), 298.15);
+        SafetyProfile.HazardLine h225 = p.hazardStatements().stream().filter(h -> h.code().equals("H225")).findFirst().orElseThrow();
+        assertEquals(2, h225.carriers().size());
+        SafetyProfile.HazardLine h304 = p.hazardStatements().stream().filter(h -> h.code().equals("H304")).findFirst().orElseThrow();
+        assertEquals("toluene", h304.carriers().get(0).name());
+        assertEquals(30.0, h304.carriers().get(0).volumePercent(), 1e-9);
+        assertEquals(List.of("toluene"), p.aspirationHazards());
+    }
+
+    @Test
+    void everyCautionListEndsWithTheReminder() {
+        for (Blend b : List.of(Blend.pure(LIB.resolve("s", "water")), Blend.pure(LIB.resolve("s", "diethyl ether")), blend("ethanol", 0.3, "water"),
+                blend("dichloromethane", 0.5, "methanol"))) {
+            List<String> c = Cautions.forProfile(SafetyProfiler.profile(b, 298.15));
+            assertEquals(Cautions.REMINDER, c.get(c.size() - 1), b.describe());
+        }
+        List<String> ether = Cautions.forProfile(SafetyProfiler.profile(Blend.pure(LIB.resolve("s", "diethyl ether")), 298.15));
+        assertTrue(ether.stream().anyMatch(s -> s.contains("peroxides")), ether.toString());
+        assertTrue(ether.stream().anyMatch(s -> s.contains("highly flammable")), ether.toString());
+        List<String> water = Cautions.forProfile(SafetyProfiler.profile(Blend.pure(LIB.resolve("s", "water")), 298.15));
+        assertEquals(1, water.size(), "water alone needs only the reminder: " + water);
+    }
+
+    @Test
+    void temperatureOutsideTheRangeIsRejectedNamingTheField() {
+        InvalidInputException e = assertThrows(InvalidInputException.class,
+                () -> SafetyProfiler.profile(Blend.pure(LIB.resolve("s", "water")), 1000));
+        assertEquals("temperature", e.field());
+        assertFalse(e.getMessage().isBlank());
+    }
+}
