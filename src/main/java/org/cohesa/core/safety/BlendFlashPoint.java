@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.cohesa.core.activity.ActivityModel;
-import org.cohesa.core.solvent.Antoine;
+import org.cohesa.core.solvent.VapourPressure;
 
 /**
  * Flash point of a liquid mixture by Le Chatelier's rule combined with vapour–liquid equilibrium:
@@ -17,8 +17,10 @@ import org.cohesa.core.solvent.Antoine;
  *
  * <p>The sum runs over the flammable components only (those with a flash point): a non-flammable component
  * (water, dichloromethane) adds no flammable vapour but dilutes the liquid, through xᵢ and through the γᵢ of the
- * others. Psatᵢ(T_fp,i) is the pure component's vapour pressure at its own flash point (Antoine), which
- * stands in for its lower flammability limit × P. Temperatures in K, pressures in Pa.
+ * others. Psatᵢ(T_fp,i) is the pure component's vapour pressure at its own flash point, which stands in for its
+ * lower flammability limit × P. Vapour pressures come from {@link VapourPressure} (Antoine where the library has it,
+ * else the Clausius–Clapeyron estimate from Tb and ΔHvap; with constant ΔHvap the ratio Psat(T)/Psat(T_fp) does not
+ * depend on the Tb anchor). The notes name every estimate and extrapolation. Temperatures in K, pressures in Pa.
  *
  * <p>The search runs from 80 K below the lowest component flash point up to the mixture's bubble point: if the
  * sum stays below 1 up to boiling, the mixture has no flash point below its boiling point.
@@ -46,42 +48,42 @@ public final class BlendFlashPoint {
     /**
      * @param names        component names, for the notes
      * @param x            mole fractions (sum 1)
-     * @param antoine      each component's vapour-pressure equation (null allowed only for non-flammable
+     * @param psat         each component's vapour-pressure curve (null allowed only for non-flammable
      *                     components; then no bubble point is computed)
      * @param flashPointK  each component's flash point, K, or null for a non-flammable component
      * @param model        the activity-coefficient model for these components, in the same order
      */
-    public static Result solve(List<String> names, double[] x, List<Antoine> antoine, List<Double> flashPointK, ActivityModel model) {
+    public static Result solve(List<String> names, double[] x, List<VapourPressure> psat, List<Double> flashPointK, ActivityModel model) {
         int n = x.length;
-        if (names.size() != n || antoine.size() != n || flashPointK.size() != n || model.size() != n) {
+        if (names.size() != n || psat.size() != n || flashPointK.size() != n || model.size() != n) {
             throw new IllegalArgumentException("need one name, Antoine equation, flash point and model slot per component");
         }
         List<String> notes = new ArrayList<>();
         double[] pAtFlash = new double[n];
         double lowestFp = Double.POSITIVE_INFINITY;
         boolean anyFlammable = false;
-        boolean allAntoine = true;
+        boolean allPsat = true;
         for (int i = 0; i < n; i++) {
-            Antoine a = antoine.get(i);
+            VapourPressure a = psat.get(i);
             Double fp = flashPointK.get(i);
             if (a == null) {
-                allAntoine = false;
+                allPsat = false;
             }
             if (fp == null || x[i] == 0) {
                 continue;
             }
             if (a == null) {
-                throw new IllegalArgumentException(names.get(i) + " has a flash point but no vapour-pressure (Antoine) equation in the library");
+                throw new IllegalArgumentException(names.get(i) + " has a flash point but the library has no vapour-pressure data for it"
+                        + " (neither Antoine constants nor boiling point and enthalpy of vaporisation)");
             }
             anyFlammable = true;
             pAtFlash[i] = a.pressurePa(fp);
             lowestFp = Math.min(lowestFp, fp);
-            if (!a.isValidAt(fp, 5)) {
-                notes.add(names.get(i) + ": Antoine equation extrapolated to its flash point " + kelvinToC(fp) + " (fitted range "
-                        + kelvinToC(a.tminK()) + " to " + kelvinToC(a.tmaxK()) + ")");
+            if (a.isEstimate(fp)) {
+                notes.add(names.get(i) + ": vapour pressure " + a.methodAt(fp).label());
             }
         }
-        double bubble = allAntoine ? VapourLiquid.bubblePointK(x, antoine, model, VapourLiquid.ATMOSPHERE_PA) : Double.NaN;
+        double bubble = allPsat ? VapourLiquid.bubblePointK(x, psat, model, VapourLiquid.ATMOSPHERE_PA) : Double.NaN;
         if (!anyFlammable) {
             return new Result(Double.NaN, bubble, notes);
         }
@@ -90,7 +92,7 @@ public final class BlendFlashPoint {
             double sum = 0;
             for (int i = 0; i < n; i++) {
                 if (flashPointK.get(i) != null && x[i] > 0) {
-                    sum += x[i] * g[i] * antoine.get(i).pressurePa(t) / pAtFlash[i];
+                    sum += x[i] * g[i] * psat.get(i).pressurePa(t) / pAtFlash[i];
                 }
             }
             return Math.log(sum);
@@ -102,7 +104,7 @@ public final class BlendFlashPoint {
         }
         double hi = Double.isFinite(bubble) ? bubble : lowestFp + 250;
         if (!Double.isFinite(bubble)) {
-            notes.add("no bubble point (a component lacks a vapour-pressure equation): searched up to " + kelvinToC(hi));
+            notes.add("no bubble point (a component lacks vapour-pressure data): searched up to " + kelvinToC(hi));
         }
         if (leChatelier.value(hi) < 0) {
             return new Result(Double.NaN, bubble, notes);

@@ -11,11 +11,11 @@ import org.cohesa.core.activity.ActivityModels;
 import org.cohesa.core.activity.Composition;
 import org.cohesa.core.safety.SafetyProfile.FlashPoint;
 import org.cohesa.core.safety.SafetyProfile.FlashPointStatus;
-import org.cohesa.core.solvent.Antoine;
 import org.cohesa.core.solvent.Blend;
 import org.cohesa.core.solvent.BlendComponent;
 import org.cohesa.core.solvent.ExposureLimit;
 import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.solvent.VapourPressure;
 
 /**
  * Builds the {@link SafetyProfile} of a solvent or blend: flash point (library value for a pure liquid,
@@ -59,7 +59,7 @@ public final class SafetyProfiler {
         int n = solvents.size();
         List<String> names = solvents.stream().map(Solvent::name).toList();
         List<String> cas = solvents.stream().map(Solvent::cas).toList();
-        List<Antoine> antoine = solvents.stream().map(Solvent::antoine).toList();
+        List<VapourPressure> psat = solvents.stream().map(s -> VapourPressure.of(s).orElse(null)).toList();
         List<ExposureLimit> limits = solvents.stream().map(Solvent::exposure).toList();
 
         double[] x = null;
@@ -119,7 +119,7 @@ public final class SafetyProfiler {
                     why = unknownFlammable;
                 } else {
                     try {
-                        r = BlendFlashPoint.solve(names, x, antoine, flashPointsK(solvents), model);
+                        r = BlendFlashPoint.solve(names, x, psat, flashPointsK(solvents), model);
                     } catch (IllegalArgumentException e) {
                         why = e.getMessage();
                     }
@@ -129,8 +129,8 @@ public final class SafetyProfiler {
                 flash = new FlashPoint(null, FlashPointStatus.UNKNOWN, FLASH_METHOD, List.of("not estimated: " + why));
                 ibp = null;
                 ibpBasis = "unknown: " + why;
-                if (why != null && x != null && model != null && antoine.stream().allMatch(a -> a != null)) {
-                    double bubble = VapourLiquid.bubblePointK(x, antoine, model, VapourLiquid.ATMOSPHERE_PA);
+                if (why != null && x != null && model != null && psat.stream().allMatch(a -> a != null)) {
+                    double bubble = VapourLiquid.bubblePointK(x, psat, model, VapourLiquid.ATMOSPHERE_PA);
                     if (Double.isFinite(bubble)) {
                         ibp = bubble - 273.15;
                         ibpBasis = bubbleBasis(modelName);
@@ -161,7 +161,7 @@ public final class SafetyProfiler {
                     ibpBasis = bubbleBasis(modelName);
                 } else {
                     ibp = null;
-                    ibpBasis = "unknown: a component lacks a vapour-pressure equation";
+                    ibpBasis = "unknown: a component lacks vapour-pressure data";
                 }
             }
         }
@@ -187,7 +187,7 @@ public final class SafetyProfiler {
             }
             exposure = new VapourExposure.Result(0, false, cs, List.of("exposure not estimated: " + why));
         } else {
-            exposure = VapourExposure.compute(names, cas, x, antoine, limits, model, kelvin);
+            exposure = VapourExposure.compute(names, cas, x, psat, limits, model, kelvin);
         }
 
         List<SafetyProfile.HazardLine> hazards = hazardLines(blend);
@@ -226,7 +226,7 @@ public final class SafetyProfiler {
     }
 
     private static String bubbleBasis(String modelName) {
-        return "bubble point at 101.325 kPa (modified Raoult's law, Antoine, activity model: " + modelName + ")";
+        return "bubble point at 101.325 kPa (modified Raoult's law, library vapour pressures, activity model: " + modelName + ")";
     }
 
     private static FlashPoint pureFlashPoint(Solvent s) {

@@ -3,7 +3,7 @@ package org.cohesa.core.safety;
 import java.util.ArrayList;
 import java.util.List;
 import org.cohesa.core.activity.ActivityModel;
-import org.cohesa.core.solvent.Antoine;
+import org.cohesa.core.solvent.VapourPressure;
 import org.cohesa.core.solvent.ExposureLimit;
 
 /**
@@ -11,7 +11,8 @@ import org.cohesa.core.solvent.ExposureLimit;
  * the mixture exposure index by the additive formula
  * <pre>  I = Σᵢ Cᵢ / OELᵢ,   Cᵢ = xᵢ γᵢ Psatᵢ(T) / P × 10⁶ (ppm by volume)</pre>
  * Source of the additive formula: ACGIH, <i>TLVs and BEIs</i> (annual booklet), appendix "Mixtures" (the
- * additive-effects formula C₁/T₁ + C₂/T₂ + … ; from memory). Cᵢ by modified Raoult's law (see {@link VapourLiquid}),
+ * additive-effects formula C₁/T₁ + C₂/T₂ + … ; from memory). Cᵢ by modified Raoult's law (see {@link VapourLiquid};
+ * estimated vapour pressures are named in the notes),
  * P = 101.325 kPa. For a pure liquid the index is Psat/P × 10⁶ / OEL, the vapour hazard ratio: how many times the
  * limit the air at equilibrium with the liquid would be. The limit used is the 8-h TWA; where only a STEL or a
  * ceiling is known that value is used and named. Components without a limit are listed and make the index a
@@ -28,7 +29,7 @@ public final class VapourExposure {
      * One component's share.
      *
      * @param name             solvent name
-     * @param saturatedPpm     equilibrium vapour concentration, ppm (null without a vapour-pressure equation)
+     * @param saturatedPpm     equilibrium vapour concentration, ppm (null without vapour-pressure data)
      * @param limitPpm         the limit used, ppm (null when none is known)
      * @param limitKind        "TWA", "STEL" or "ceiling" (null when none)
      * @param twaPpm           8-h TWA, ppm, or null
@@ -81,11 +82,16 @@ public final class VapourExposure {
         return sum;
     }
 
-    public static Result compute(List<String> names, List<String> cas, double[] x, List<Antoine> antoine, List<ExposureLimit> limits,
+    public static Result compute(List<String> names, List<String> cas, double[] x, List<VapourPressure> psat, List<ExposureLimit> limits,
                                  ActivityModel model, double kelvin) {
         int n = x.length;
-        double[] p = VapourLiquid.partialPressures(x, antoine, model, kelvin);
+        double[] p = VapourLiquid.partialPressures(x, psat, model, kelvin);
         List<String> notes = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            if (psat.get(i) != null && x[i] > 0 && psat.get(i).isEstimate(kelvin)) {
+                notes.add(names.get(i) + ": vapour pressure " + psat.get(i).methodAt(kelvin).label());
+            }
+        }
         double total = 0;
         for (double v : p) {
             if (Double.isFinite(v)) {

@@ -6,12 +6,12 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.NoBracketingException;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.cohesa.core.activity.ActivityModel;
-import org.cohesa.core.solvent.Antoine;
+import org.cohesa.core.solvent.VapourPressure;
 
 /**
- * Liquid–vapour equilibrium at low pressure by modified Raoult's law, pᵢ = xᵢ γᵢ Psatᵢ(T), with Antoine
- * vapour pressures (Poling, Prausnitz, O'Connell, <i>The Properties of Gases and Liquids</i>, 5th ed., 2000)
- * and activity coefficients from an {@link ActivityModel}. Ideal vapour phase; pressures in Pa, temperatures in K.
+ * Liquid–vapour equilibrium at low pressure by modified Raoult's law, pᵢ = xᵢ γᵢ Psatᵢ(T), with the library's
+ * vapour-pressure curves ({@link VapourPressure}: Antoine, Poling, Prausnitz, O'Connell, <i>The Properties of Gases and
+ * Liquids</i>, 5th ed., 2000, else the Clausius–Clapeyron estimate) and activity coefficients from an {@link ActivityModel}. Ideal vapour phase; pressures in Pa, temperatures in K.
  */
 final class VapourLiquid {
 
@@ -24,12 +24,12 @@ final class VapourLiquid {
     private VapourLiquid() {
     }
 
-    /** Partial pressures xᵢγᵢPsatᵢ(T), Pa; a component without an Antoine equation gives NaN. */
-    static double[] partialPressures(double[] x, List<Antoine> antoine, ActivityModel model, double kelvin) {
+    /** Partial pressures xᵢγᵢPsatᵢ(T), Pa; a component without a vapour-pressure curve gives NaN. */
+    static double[] partialPressures(double[] x, List<VapourPressure> psat, ActivityModel model, double kelvin) {
         double[] g = model.gamma(x, kelvin);
         double[] p = new double[x.length];
         for (int i = 0; i < x.length; i++) {
-            Antoine a = antoine.get(i);
+            VapourPressure a = psat.get(i);
             p[i] = x[i] == 0 ? 0 : (a == null ? Double.NaN : x[i] * g[i] * a.pressurePa(kelvin));
         }
         return p;
@@ -37,15 +37,14 @@ final class VapourLiquid {
 
     /**
      * Bubble-point temperature at {@code pressurePa}: Σ xᵢγᵢPsatᵢ(T) = P solved for T with Brent's method
-     * (Commons Math). For a pure liquid this is the Antoine equation inverted. Every component with xᵢ &gt; 0
-     * needs an Antoine equation.
+     * (Commons Math). Every component with xᵢ &gt; 0 needs a vapour-pressure curve.
      *
      * @return K, or NaN when no root lies in 150–700 K
      */
-    static double bubblePointK(double[] x, List<Antoine> antoine, ActivityModel model, double pressurePa) {
+    static double bubblePointK(double[] x, List<VapourPressure> psat, ActivityModel model, double pressurePa) {
         UnivariateFunction f = t -> {
             double sum = 0;
-            for (double p : partialPressures(x, antoine, model, t)) {
+            for (double p : partialPressures(x, psat, model, t)) {
                 sum += p;
             }
             return Math.log(sum / pressurePa);

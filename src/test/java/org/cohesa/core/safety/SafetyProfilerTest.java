@@ -51,6 +51,17 @@ class SafetyProfilerTest {
     }
 
     @Test
+    void estimatedVapourPressuresAreUsedAndNamed() {
+        // DMF has no Antoine constants in the library but has Tb and ΔHvap: the Clausius–Clapeyron estimate serves, and says so
+        SafetyProfile p = SafetyProfiler.profile(blend("ethanol", 0.5, "N,N-dimethylformamide"), 298.15);
+        assertEquals(SafetyProfile.FlashPointStatus.COMPUTED, p.flashPoint().status(), p.flashPoint().detail().toString());
+        assertTrue(p.flashPoint().detail().stream().anyMatch(d -> d.contains("N,N-dimethylformamide") && d.contains("Clausius")),
+                p.flashPoint().detail().toString());
+        // Le Chatelier with positive weights: the blend flashes between its components' flash points or below the lower one
+        assertTrue(p.flashPoint().celsius() < LIB.resolve("s", "N,N-dimethylformamide").flashPointC());
+    }
+
+    @Test
     void blendRankIsTheLeastFavourableComponent() {
         SafetyProfile p = SafetyProfiler.profile(blend("ethanol", 0.5, "N-methyl-2-pyrrolidone"), 298.15);
         assertEquals(GuideRank.HAZARDOUS, p.guideRank());

@@ -28,7 +28,7 @@ class VapourExposureTest {
     void pureTolueneSaturatedVapourAt25C() {
         // CRC Handbook, vapour pressure of toluene at 25 °C: 3.79 kPa (28.4 mmHg) — from memory → 37,400 ppm
         ExposureLimit oel = new ExposureLimit(20.0, null, null, false, "Ontario");
-        VapourExposure.Result r = VapourExposure.compute(List.of("toluene"), List.of("108-88-3"), new double[] {1}, List.of(TOLUENE),
+        VapourExposure.Result r = VapourExposure.compute(List.of("toluene"), List.of("108-88-3"), new double[] {1}, List.of(BlendFlashPointTest.curve("toluene", TOLUENE)),
                 List.of(oel), new IdealStandIn(1), 298.15);
         double ppm = r.components().get(0).saturatedPpm();
         assertEquals(3.79e3 / 101_325 * 1e6, ppm, 0.02 * ppm);
@@ -41,7 +41,7 @@ class VapourExposureTest {
         ExposureLimit none = ExposureLimit.NONE;
         ExposureLimit oel = new ExposureLimit(20.0, null, null, true, "Ontario");
         VapourExposure.Result r = VapourExposure.compute(List.of("toluene", "mystery"), List.of("108-88-3", "0-00-0"), new double[] {0.5, 0.5},
-                Arrays.asList(TOLUENE, TOLUENE), List.of(oel, none), new IdealStandIn(2), 298.15);
+                Arrays.asList(BlendFlashPointTest.curve("toluene", TOLUENE), BlendFlashPointTest.curve("toluene", TOLUENE)), List.of(oel, none), new IdealStandIn(2), 298.15);
         assertFalse(r.complete());
         assertEquals("no limit known", r.components().get(1).status());
         assertNull(r.components().get(1).ratio());
@@ -53,7 +53,7 @@ class VapourExposureTest {
         // ethanol in the Ontario table: STEL 1000 ppm, no TWA
         ExposureLimit ethanol = new ExposureLimit(null, 1000.0, null, false, "Ontario");
         VapourExposure.Result r = VapourExposure.compute(List.of("ethanol"), List.of("64-17-5"), new double[] {1},
-                List.of(BlendFlashPointTest.ETHANOL), List.of(ethanol), new IdealStandIn(1), 298.15);
+                List.of(BlendFlashPointTest.ETHANOL_P), List.of(ethanol), new IdealStandIn(1), 298.15);
         assertEquals("STEL", r.components().get(0).limitKind());
         assertEquals(r.components().get(0).saturatedPpm() / 1000.0, r.index(), 1e-9);
     }
@@ -61,7 +61,7 @@ class VapourExposureTest {
     @Test
     void aboveTheBoilingPointTheVapourIsCappedAtPureVapour() {
         ExposureLimit oel = new ExposureLimit(20.0, null, null, false, "Ontario");
-        VapourExposure.Result r = VapourExposure.compute(List.of("toluene"), List.of("108-88-3"), new double[] {1}, List.of(TOLUENE),
+        VapourExposure.Result r = VapourExposure.compute(List.of("toluene"), List.of("108-88-3"), new double[] {1}, List.of(BlendFlashPointTest.curve("toluene", TOLUENE)),
                 List.of(oel), new IdealStandIn(1), 400.0);
         assertEquals(1e6, r.components().get(0).saturatedPpm(), 1e-6);
         assertFalse(r.notes().isEmpty());
