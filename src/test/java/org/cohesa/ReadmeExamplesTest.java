@@ -3,7 +3,11 @@ package org.cohesa;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.fasterxml.jackson.core.type.TypeReference;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -11,6 +15,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
+import org.cohesa.cli.CohesaCommand;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -31,16 +36,34 @@ class ReadmeExamplesTest {
         List<List<String>> commands = commands(Files.readString(Path.of("README.md"), StandardCharsets.UTF_8));
         assertTrue(commands.size() >= 4, "the README should show command-line examples");
         copyTree(Path.of("demo-blends"), work.resolve("demo-blends"));
-        for (List<String> args : commands) {
-            List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                    "-cp", System.getProperty("java.class.path"), Launcher.class.getName()));
-            cmd.addAll(args);
-            ProcessBuilder pb = new ProcessBuilder(cmd).directory(work.toFile()).redirectErrorStream(true);
-            pb.environment().put("COHESA_HOME", work.resolve("home").toString());
-            Process p = pb.start();
-            String output = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
-            assertTrue(p.waitFor(120, TimeUnit.SECONDS), "timed out: " + args);
-            assertEquals(0, p.exitValue(), "README example failed: cohesa " + String.join(" ", args) + "\n" + output);
+        // one JVM for all examples, started in the scratch folder so relative output files land there
+        Path script = work.resolve("examples.json");
+        Files.writeString(script, new ObjectMapper().writeValueAsString(commands));
+        List<String> cmd = List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), Runner.class.getName(), script.toString());
+        ProcessBuilder pb = new ProcessBuilder(cmd).directory(work.toFile()).redirectErrorStream(true);
+        pb.environment().put("COHESA_HOME", work.resolve("home").toString());
+        Process p = pb.start();
+        String output = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+        assertTrue(p.waitFor(300, TimeUnit.SECONDS), "timed out");
+        assertEquals(0, p.exitValue(), "a README example failed:\n" + output);
+    }
+
+    /** Runs each example in turn in this JVM; stops at the first that does not exit 0. */
+    public static final class Runner {
+        public static void main(String[] args) throws Exception {
+            List<List<String>> commands = new ObjectMapper().readValue(Path.of(args[0]).toFile(),
+                    new TypeReference<List<List<String>>>() { });
+            for (List<String> c : commands) {
+                StringWriter out = new StringWriter();
+                StringWriter err = new StringWriter();
+                int code = CohesaCommand.run(c.toArray(String[]::new), new PrintWriter(out), new PrintWriter(err));
+                if (code != 0) {
+                    System.out.println("cohesa " + String.join(" ", c) + " exited " + code + "\n" + out + err);
+                    System.exit(1);
+                }
+            }
+            System.exit(0);
         }
     }
 
