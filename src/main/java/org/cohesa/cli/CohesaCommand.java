@@ -26,6 +26,8 @@ import picocli.CommandLine.ScopeType;
                 RecordCommand.class,
                 BackupCommand.class,
                 HazardsCommand.class,
+                FitCommand.class,
+                BenchCommand.class,
         })
 public final class CohesaCommand implements Runnable {
 

@@ -1,0 +1,107 @@
+package org.cohesa.cli;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.SplittableRandom;
+import org.cohesa.core.hsp.HansenParameters;
+import org.cohesa.core.hsp.SolubilitySphere;
+import org.cohesa.core.target.FitOptions;
+import org.cohesa.core.target.SphereFitter;
+import org.cohesa.core.target.TestResult;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/**
+ * {@code cohesa bench ...}: timing runs of the heavy computations on this machine (speed targets live here, not in
+ * unit tests). Each workflow adds its own subcommand.
+ */
+@Command(name = "bench", description = "Time the heavy computations on this machine (median of several runs).",
+        subcommands = {BenchCommand.Fit.class})
+public final class BenchCommand implements Runnable {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** Median, minimum and maximum of run times in seconds. */
+    static Map<String, Object> stats(double[] seconds) {
+        double[] s = seconds.clone();
+        Arrays.sort(s);
+        double median = s.length % 2 == 1 ? s[s.length / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("runs", s.length);
+        m.put("median_s", Output.round(median, 4));
+        m.put("min_s", Output.round(s[0], 4));
+        m.put("max_s", Output.round(s[s.length - 1], 4));
+        m.put("cores", Runtime.getRuntime().availableProcessors());
+        return m;
+    }
+
+    /** {@code cohesa bench fit}: a sphere fit of N invented results with bootstrap resamples. */
+    @Command(name = "fit", description = "Time a sphere fit: N invented test results (liquids drawn at random, scored against a known sphere) "
+            + "with bootstrap resamples; prints the median of several runs after one warm-up run.")
+    static final class Fit extends CohesaSubcommand {
+        @Option(names = "--results", description = "Test results per fit (default ${DEFAULT-VALUE}).") int results = 60;
+        @Option(names = "--resamples", description = "Bootstrap resamples (default ${DEFAULT-VALUE}).") int resamples = 200;
+        @Option(names = "--runs", description = "Timed runs (default ${DEFAULT-VALUE}).") int runs = 7;
+        @Option(names = "--seed", description = "Seed of the invented data and of the fit (default ${DEFAULT-VALUE}).") long seed = 5;
+
+        @Override
+        protected void execute() {
+            if (results < 3 || results > 4000) {
+                throw new org.cohesa.core.InvalidInputException("--results", String.valueOf(results), "must lie between 3 and 4000");
+            }
+            if (runs < 1 || runs > 1000) {
+                throw new org.cohesa.core.InvalidInputException("--runs", String.valueOf(runs), "must lie between 1 and 1000");
+            }
+            if (resamples < 0 || resamples > 10_000) {
+                throw new org.cohesa.core.InvalidInputException("--resamples", String.valueOf(resamples), "must lie between 0 and 10000");
+            }
+            List<TestResult> data = invented(results, seed);
+            FitOptions options = new FitOptions(seed, resamples, 12, 5);
+            SphereFitter.fit(data, List.of(), options);
+            double[] t = new double[runs];
+            for (int i = 0; i < runs; i++) {
+                long start = System.nanoTime();
+                SphereFitter.fit(data, List.of(), options);
+                t[i] = (System.nanoTime() - start) / 1e9;
+            }
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("benchmark", "fit");
+            m.put("results", results);
+            m.put("resamples", resamples);
+            m.putAll(stats(t));
+            if (json()) {
+                Output.json(out(), m);
+                return;
+            }
+            out().printf(Locale.ROOT, "sphere fit, %d results, %d bootstrap resamples, %d cores: median %.3f s (min %.3f, max %.3f) over %d runs%n",
+                    results, resamples, Runtime.getRuntime().availableProcessors(), (Double) m.get("median_s"), (Double) m.get("min_s"),
+                    (Double) m.get("max_s"), runs);
+        }
+
+        /**
+         * Invented data (for timing only): liquids uniform in δD 14–21, δP 0–20, δH 0–25 MPa^½, scored 1 inside the
+         * sphere (18.5, 9, 7.5; R0 7) and 0 outside — the same design as the reference script in the shared bench.
+         */
+        static List<TestResult> invented(int n, long seed) {
+            SplittableRandom rng = new SplittableRandom(seed);
+            SolubilitySphere truth = SolubilitySphere.of(18.5, 9.0, 7.5, 7.0);
+            List<TestResult> out = new ArrayList<>();
+            for (int i = 0; i < n; i++) {
+                HansenParameters p = HansenParameters.of(14 + 7 * rng.nextDouble(), 20 * rng.nextDouble(), 25 * rng.nextDouble());
+                out.add(TestResult.of("liquid " + (i + 1), p, truth.contains(p) ? 1 : 0));
+            }
+            return out;
+        }
+    }
+}
