@@ -21,7 +21,7 @@ import picocli.CommandLine.Option;
  * unit tests). Each workflow adds its own subcommand.
  */
 @Command(name = "bench", description = "Time the heavy computations on this machine (median of several runs).",
-        subcommands = {BenchCommand.Fit.class})
+        subcommands = {BenchCommand.Fit.class, BenchCommand.Dry.class})
 public final class BenchCommand implements Runnable {
 
     @CommandLine.Spec
@@ -102,6 +102,68 @@ public final class BenchCommand implements Runnable {
                 out.add(TestResult.of("liquid " + (i + 1), p, truth.contains(p) ? 1 : 0));
             }
             return out;
+        }
+    }
+
+    /**
+     * {@code cohesa bench dry}: one drying path to 95 % evaporated (default: a 4-component lacquer thinner, original
+     * UNIFAC, 25 °C), timed after warm-up; the median goes into docs/performance.md (issue 5 target: under 50 ms).
+     */
+    @Command(name = "dry", description = "Time one drying path (default: a 4-component lacquer thinner to 95 %% evaporated, UNIFAC, 25 °C).")
+    static final class Dry extends CohesaSubcommand {
+
+        static final String DEFAULT_BLEND = "acetone:0.3,ethyl acetate:0.2,toluene:0.3,n-butyl acetate:0.2";
+
+        @Option(names = "--blend", paramLabel = "NAME:FRACTION,...", description = "Blend to time (default ${DEFAULT-VALUE}).")
+        String blend = DEFAULT_BLEND;
+        @Option(names = "--runs", description = "Timed runs (default ${DEFAULT-VALUE}).") int runs = 51;
+        @Option(names = "--warmup", description = "Untimed warm-up runs (default ${DEFAULT-VALUE}).") int warmup = 30;
+        @Option(names = "--ideal", description = "Time the ideal-solution path instead.") boolean ideal;
+
+        @Override
+        protected void execute() {
+            if (runs < 1 || runs > 100_000) {
+                throw new org.cohesa.core.InvalidInputException("--runs", String.valueOf(runs), "must lie between 1 and 100000");
+            }
+            if (warmup < 0 || warmup > 100_000) {
+                throw new org.cohesa.core.InvalidInputException("--warmup", String.valueOf(warmup), "must lie between 0 and 100000");
+            }
+            org.cohesa.core.solvent.Blend b = ctx().library().resolveBlend("--blend", blend);
+            org.cohesa.core.drying.DryingRequest req = new org.cohesa.core.drying.DryingRequest(b, null,
+                    org.cohesa.core.drying.DryingRequest.DEFAULT_KELVIN, org.cohesa.core.drying.DryingRequest.DEFAULT_UNTIL, ideal,
+                    org.cohesa.core.drying.DryingRequest.DEFAULT_STEP, false);
+            String model = org.cohesa.core.drying.DryingSimulator.simulate(req).model();
+            for (int i = 0; i < warmup; i++) {
+                org.cohesa.core.drying.DryingSimulator.simulate(req);
+            }
+            double[] t = new double[runs];
+            for (int i = 0; i < runs; i++) {
+                long start = System.nanoTime();
+                org.cohesa.core.drying.DryingSimulator.simulate(req);
+                t[i] = (System.nanoTime() - start) / 1e9;
+            }
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("benchmark", "dry");
+            m.put("blend", b.describe());
+            m.put("components", b.size());
+            m.put("until", org.cohesa.core.drying.DryingRequest.DEFAULT_UNTIL);
+            m.put("model", model);
+            m.put("warmup", warmup);
+            m.putAll(stats(t));
+            double[] sorted = t.clone();
+            Arrays.sort(sorted);
+            int n = sorted.length;
+            double median = n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
+            m.put("median_ms", Output.round(median * 1e3, 3));
+            if (json()) {
+                Output.json(out(), m);
+                return;
+            }
+            TextTable tt = new TextTable("benchmark", "components", "model", "runs", "median ms", "min ms", "max ms");
+            tt.row("dry to 95 %", b.size(), model, runs, Output.fmt(median * 1e3, 2), Output.fmt(sorted[0] * 1e3, 2),
+                    Output.fmt(sorted[n - 1] * 1e3, 2));
+            tt.print(out());
+            out().println("blend: " + b.describe() + "; " + Runtime.getRuntime().availableProcessors() + " cores");
         }
     }
 }

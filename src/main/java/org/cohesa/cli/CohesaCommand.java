@@ -27,6 +27,7 @@ import picocli.CommandLine.ScopeType;
                 BackupCommand.class,
                 HazardsCommand.class,
                 FitCommand.class,
+                DryCommand.class,
                 BenchCommand.class,
         })
 public final class CohesaCommand implements Runnable {
