@@ -77,14 +77,20 @@ public final class DryCommand extends CohesaSubcommand {
             tails = TailSolventAdvisor.suggest(req, library.all(), 3);
         }
         List<String> cautions = cautions(path);
+        if (!tails.isEmpty()) {
+            cautions.add(0, "check the hazard statements of a suggested tail solvent before use: it is the solvent that stays longest in the film and the room");
+        }
+        java.util.function.Function<String, List<String>> hazards = name -> library.lookup(name).stream().findFirst()
+                .map(s -> s.hazardStatements()).orElse(List.of());
         if (json()) {
-            Output.json(out(), json(b, targetLabel, tC, path, tails, cautions));
+            Output.json(out(), json(b, targetLabel, tC, path, tails, cautions, hazards));
             return;
         }
-        table(b, targetLabel, tC, path, tails, cautions);
+        table(b, targetLabel, tC, path, tails, cautions, hazards);
     }
 
-    private void table(Blend b, String targetLabel, double tC, DryingPath path, List<TailSuggestion> tails, List<String> cautions) {
+    private void table(Blend b, String targetLabel, double tC, DryingPath path, List<TailSuggestion> tails, List<String> cautions,
+                       java.util.function.Function<String, List<String>> hazards) {
         out().println("blend: " + b.describe() + "   at " + Output.fmt(tC, 1) + " °C" + (targetLabel == null ? "" : "   target: " + targetLabel));
         out().println("activity model: " + path.model() + (path.modelNote().isEmpty() ? "" : " (" + path.modelNote() + ")"));
         List<String> header = new ArrayList<>(List.of("evaporated", "time"));
@@ -123,9 +129,10 @@ public final class DryCommand extends CohesaSubcommand {
         }
         if (!tails.isEmpty()) {
             out().println("slow tail solvents that keep the path inside:");
-            TextTable tt = new TextTable("add", "volume fraction", "relative rate", "max RED", "left last");
+            TextTable tt = new TextTable("add", "volume fraction", "relative rate", "max RED", "left last", "hazard statements");
             for (TailSuggestion s : tails) {
-                tt.row(s.solvent(), Output.fmt(s.fraction(), 2), Output.fmt(s.relativeRate(), 3), Output.fmt(s.maxRed(), 3), s.lastSolvent());
+                tt.row(s.solvent(), Output.fmt(s.fraction(), 2), Output.fmt(s.relativeRate(), 3), Output.fmt(s.maxRed(), 3), s.lastSolvent(),
+                        String.join(" ", hazards.apply(s.solvent())));
             }
             tt.print(out());
         } else if (path.leavesSphereAt() != null && path.leavesSphereAt() > 0) {
@@ -140,7 +147,7 @@ public final class DryCommand extends CohesaSubcommand {
     }
 
     private static Map<String, Object> json(Blend b, String targetLabel, double tC, DryingPath path, List<TailSuggestion> tails,
-                                            List<String> cautions) {
+                                            List<String> cautions, java.util.function.Function<String, List<String>> hazards) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("blend", b.describe());
         m.put("target", targetLabel);
@@ -178,6 +185,7 @@ public final class DryCommand extends CohesaSubcommand {
             q.put("relative_rate", Output.round(s.relativeRate(), 4));
             q.put("max_red", Output.round(s.maxRed(), 4));
             q.put("last_solvent", s.lastSolvent());
+            q.put("hazard_statements", hazards.apply(s.solvent()));
             ts.add(q);
         }
         m.put("tail_suggestions", ts);
