@@ -12,6 +12,13 @@ import org.testfx.util.WaitForAsyncUtils;
 /** A workbench on a scratch database in a real (headless) stage, for the desktop tests. */
 final class DesktopFixture {
 
+    /** Monocle draws no 3D and logs one warning per 3D node; kept quiet so real problems stand out. */
+    private static final java.util.logging.Logger JAVAFX_LOG = java.util.logging.Logger.getLogger("javafx");
+
+    static {
+        JAVAFX_LOG.setLevel(java.util.logging.Level.SEVERE);
+    }
+
     final Path folder;
     final Session session;
     final Workbench workbench;

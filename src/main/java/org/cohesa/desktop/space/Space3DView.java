@@ -52,7 +52,7 @@ import org.cohesa.desktop.common.Session;
  */
 public final class Space3DView {
 
-    static final double POINT_RADIUS = 0.42;
+    static final double POINT_RADIUS = 0.38;
     private static final double DEFAULT_RX = -22;
     private static final double DEFAULT_RY = -32;
 
@@ -64,7 +64,7 @@ public final class Space3DView {
     private final Group pointGroup = new Group();
     private final Group blendGroup = new Group();
     private final Group pathGroup = new Group();
-    private final Sphere targetSphere = new Sphere(1, 48);
+    private final Sphere targetSphere = new Sphere(1, 32);
     private final Sphere targetCentre = new Sphere(0.3, 12);
     private final Sphere selectedMarker = new Sphere(POINT_RADIUS * 2.2, 16);
     private final Pane overlay = new Pane();
@@ -78,6 +78,7 @@ public final class Space3DView {
     private final List<Label> labels = new ArrayList<>();
     private final List<Point3D> labelAnchors = new ArrayList<>();
     private final List<PhongMaterial> categoryMaterials = new ArrayList<>();
+    private static final int WARM_UP_FRAMES = 5;
     private double defaultDistance = 140;
     private double pressX;
     private double pressY;
@@ -95,7 +96,7 @@ public final class Space3DView {
         pointGroup.setId("points");
         blendGroup.setId("blend");
         pathGroup.setId("drying-path");
-        PhongMaterial glass = new PhongMaterial(Color.color(0.20, 0.52, 0.75, 0.16));
+        PhongMaterial glass = new PhongMaterial(Color.color(0.10, 0.32, 0.50, 0.28));
         glass.setSpecularColor(Color.TRANSPARENT);
         targetSphere.setMaterial(glass);
         targetSphere.setCullFace(CullFace.BACK);
@@ -214,16 +215,20 @@ public final class Space3DView {
             private long start = -1;
             private long last = -1;
 
+            private int frames;
+
             @Override
             public void handle(long now) {
-                if (start < 0) {
+                // the first frames upload meshes and compile shaders: they are not what the user feels while rotating
+                frames++;
+                if (frames == WARM_UP_FRAMES) {
                     start = now;
-                } else {
+                } else if (frames > WARM_UP_FRAMES) {
                     intervals.add((now - last) / 1e6);
                 }
                 last = now;
-                rotateBy(0.75, 0.1 * Math.sin((now - start) / 1e9));
-                if (now - start > seconds * 1e9) {
+                rotateBy(0.75, 0.1 * Math.sin(frames / 60.0));
+                if (start > 0 && now - start > seconds * 1e9) {
                     stop();
                     done.accept(intervals.stream().mapToDouble(Double::doubleValue).toArray());
                 }
@@ -333,7 +338,7 @@ public final class Space3DView {
         centre.setZ(-cz);
         double diag = Math.sqrt(Math.pow(x1 - x0, 2) + Math.pow(r.hMax() - r.hMin(), 2) + Math.pow(r.pMax() - r.pMin(), 2));
         double oldDefault = defaultDistance;
-        defaultDistance = diag * 1.55;
+        defaultDistance = diag * 2.3;
         if (Math.abs(camera.getTranslateZ() + oldDefault) < 1e-6) {
             camera.setTranslateZ(-defaultDistance);
         }
@@ -386,7 +391,7 @@ public final class Space3DView {
                 label(Numbers.plain(h), new Point3D(x0 - 1.8, -h, r.pMin() - 1.8), "tick");
             }
         }
-        label((k == 2 ? "2δD" : "δD") + " (MPa½)", new Point3D(x1 + 6, 0, r.pMin() - 3), "axis-title");
+        label((k == 2 ? "2δD" : "δD") + " (MPa½)", new Point3D(x1 + 9, 0, r.pMin() - 3), "axis-title");
         label("δP (MPa½)", new Point3D(x0 - 3, 0, r.pMax() + 7), "axis-title");
         label("δH (MPa½)", new Point3D(x0, -r.hMax() - 4, r.pMin()), "axis-title");
         overlay.getChildren().add(hover);

@@ -108,8 +108,9 @@ public final class SpaceModel {
         for (Solvent s : syntheticPoints) {
             add(out, s, c, target, null);
         }
-        points.set(List.copyOf(out));
+        // ranges first: the views redraw when the points change and read the ranges then
         ranges.set(AxisRanges.cover(out.stream().map(PlotPoint::hansen).toList(), target));
+        points.set(List.copyOf(out));
     }
 
     private static void add(List<PlotPoint> out, Solvent s, Colouring c, SolubilitySphere target, Solvent libraryEntry) {

@@ -1,0 +1,21 @@
+#!/usr/bin/env bash
+# Retakes every screenshot of the desktop app under Xvfb (see docs/desktop.md).
+# Needs: xvfb xauth libgtk-3-0 libgl1-mesa-dri (apt) and a built target/cohesa.jar.
+set -euo pipefail
+cd "$(dirname "$0")/../.."
+out=docs/screenshots
+home=$(mktemp -d)
+shot() {   # shot NAME ARGS...
+  local name=$1; shift
+  COHESA_HOME="$home" xvfb-run -a -s "-screen 0 1400x900x24" \
+    java -Dprism.forceGPU=true -jar target/cohesa.jar --screenshot="$out/$name.png" "$@" 2>/dev/null
+  echo "$out/$name.png"
+}
+target="--target=18.5,9,8,8"   # an invented demo sphere
+shot library --screen=library --select=toluene
+shot target --screen=target "$target"
+shot space-3d --screen=space --view=3d "$target" --select=toluene
+shot space-p-h --screen=space --view=p-h "$target" --select=toluene
+shot space-d-h --screen=space --view=d-h "$target" --select=toluene
+shot space-teas --screen=space --view=teas "$target" --select=toluene
+rm -rf "$home"
