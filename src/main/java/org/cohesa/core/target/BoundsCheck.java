@@ -53,8 +53,9 @@ final class BoundsCheck {
         double minT = results.stream().filter(r -> r.temperatureC() != null).mapToDouble(TestResult::temperatureC).min().orElse(Double.NaN);
         double maxT = results.stream().filter(r -> r.temperatureC() != null).mapToDouble(TestResult::temperatureC).max().orElse(Double.NaN);
         if (Double.isFinite(minT) && (maxT - minT > 15 || Math.abs(minT - 25) > 15 || Math.abs(maxT - 25) > 15)) {
-            out.add(String.format(Locale.ROOT, "tests ran at %.0f–%.0f °C but the liquids' parameters are 25 °C values: "
-                    + "hydrogen bonding weakens as it warms, so a sphere from hot tests reads larger than at room temperature", minT, maxT));
+            String range = minT == maxT ? String.format(Locale.ROOT, "%.0f °C", minT) : String.format(Locale.ROOT, "%.0f–%.0f °C", minT, maxT);
+            out.add("tests ran at " + range + " but the liquids' parameters are 25 °C values; the parameters shift with "
+                    + "temperature (Hansen and Beerbower 1971), so read the sphere as approximate for the test temperature");
         }
         return out;
     }

@@ -117,4 +117,14 @@ class SphereFitterTest {
         FitResult b = SphereFitter.fit(r, List.of(), FitOptions.defaults(99).withResamples(0));
         assertEquals(a.sphere().centre().dD(), b.sphere().centre().dD(), 1e-9, "the consensus does not depend on the starts");
     }
+
+    @Test
+    void hotTestsAreFlagged() {
+        List<TestResult> r = new ArrayList<>();
+        for (TestResult t : scored(SolubilitySphere.of(18.0, 8.0, 7.0, 7.0))) {
+            r.add(new TestResult(t.label(), t.liquid(), t.score(), 60.0));
+        }
+        FitResult f = SphereFitter.fit(r, List.of(), FitOptions.defaults(2).withResamples(0));
+        assertTrue(f.confidence().warnings().stream().anyMatch(w -> w.startsWith("tests ran at 60 °C")), f.confidence().warnings().toString());
+    }
 }

@@ -1,0 +1,42 @@
+package org.cohesa.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The benchmark command runs and reports its statistics (no timing is asserted: speed lives in docs/performance.md). */
+class BenchCommandTest {
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void fitBenchmarkReportsMedianOfItsRuns() throws Exception {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = CohesaCommand.run(new String[] {"--db", dir.resolve("t.db").toString(), "bench", "fit", "--runs", "3",
+                "--resamples", "5", "--results", "30", "--json"}, new PrintWriter(out), new PrintWriter(err));
+        assertEquals(0, code, err.toString());
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertEquals("fit", j.get("benchmark").asText());
+        assertEquals(3, j.get("runs").asInt());
+        assertTrue(j.get("min_s").asDouble() <= j.get("median_s").asDouble());
+        assertTrue(j.get("median_s").asDouble() <= j.get("max_s").asDouble());
+    }
+
+    @Test
+    void badRunCountIsRefused() {
+        StringWriter err = new StringWriter();
+        int code = CohesaCommand.run(new String[] {"--db", dir.resolve("t.db").toString(), "bench", "fit", "--runs", "0"},
+                new PrintWriter(new StringWriter()), new PrintWriter(err));
+        assertEquals(2, code);
+        assertTrue(err.toString().startsWith("error: --runs '0'"), err.toString());
+    }
+}
