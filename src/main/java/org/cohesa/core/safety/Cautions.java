@@ -29,6 +29,7 @@ public final class Cautions {
     public static List<String> forProfile(SafetyProfile p) {
         List<String> out = new ArrayList<>();
         flammability(p, out);
+        labelAgreement(p, out);
         cmr(p, out);
         statement(p, out, c -> c.startsWith("H300") || c.startsWith("H310") || c.startsWith("H330"),
                 "%s %s able to kill in small amounts (swallowed, on the skin or inhaled, see its statements): closed handling and the SDS's protective measures are required.");
@@ -83,8 +84,10 @@ public final class Cautions {
             }
             case NONE_BELOW_BOILING -> out.add(what + " shows no flash point below its boiling point in the model, but it contains flammable liquids: "
                     + "its vapour can still burn when it is heated, boiled or sprayed. Measure the flash point before treating it as non-flammable.");
-            case UNKNOWN -> out.add(what + ": the flash point could not be estimated (" + String.join("; ", fp.detail())
-                    + "). Treat it as at least as flammable as its most flammable component.");
+            case UNKNOWN -> out.add(what + ": the flash point could not be estimated (" + String.join("; ", fp.detail()) + "). "
+                    + (p.isPure() && p.ghs().category() != null
+                            ? "Its hazard statements declare GHS Category " + p.ghs().category() + "; handle it accordingly."
+                            : "Treat it as at least as flammable as its most flammable component."));
             case NOT_FLAMMABLE -> {
                 if (!p.isPure() || !"7732-18-5".equals(p.components().get(0).cas())) {
                     out.add(what + " has no flash point in our data; that is not proof it cannot burn or decompose in a fire — check the SDS.");
@@ -92,6 +95,21 @@ public final class Cautions {
             }
             default -> {
             }
+        }
+    }
+
+    /** A pure solvent whose own hazard statement disagrees with the category its flash point gives: the stricter holds. */
+    private static void labelAgreement(SafetyProfile p, List<String> out) {
+        if (!p.isPure() || p.flashPoint().status() != FlashPointStatus.LIBRARY) {
+            return;
+        }
+        Solvent s = p.blend().components().get(0).solvent();
+        Integer labelled = SafetyProfiler.labelledCategory(s);
+        Integer computed = p.ghs().category();
+        if (labelled != null && !labelled.equals(computed)) {
+            out.add(String.format(Locale.ROOT, "%s: its hazard statements declare GHS Category %d, its library flash point gives %s. "
+                    + "Different test methods give different flash points; apply the stricter category until the supplier's SDS settles it.",
+                    s.name(), labelled, computed == null ? "no category" : "Category " + computed));
         }
     }
 

@@ -168,7 +168,12 @@ public final class SafetyProfiler {
 
         FlammableLiquidClass.GhsCategory ghs;
         String pg;
-        if (flash.status() == FlashPointStatus.UNKNOWN) {
+        Integer labelled = n == 1 ? labelledCategory(solvents.get(0)) : null;
+        if (flash.status() == FlashPointStatus.UNKNOWN && labelled != null) {
+            // the supplier's classification stands in for the missing flash point (H224 → 1, H225 → 2, H226 → 3)
+            ghs = new FlammableLiquidClass.GhsCategory(labelled, "from the solvent's hazard statement (no flash point in the library)");
+            pg = labelled == 1 ? "I" : labelled == 2 ? "II" : "III";
+        } else if (flash.status() == FlashPointStatus.UNKNOWN) {
             ghs = new FlammableLiquidClass.GhsCategory(null, "not decidable: the flash point is unknown");
             pg = null;
         } else {
@@ -240,6 +245,27 @@ public final class SafetyProfiler {
         }
         return new FlashPoint(null, FlashPointStatus.NOT_FLAMMABLE, "library value",
                 List.of("no flash point in the library and no flammable-liquid H-statement: treated as not flammable; check the SDS"));
+    }
+
+    /**
+     * The GHS flammable-liquid category the solvent's own hazard statements declare (H224 → 1, H225 → 2, H226 → 3,
+     * H227 → 4; GHS Rev. 10 Table 2.6.1 with Annex 3), or null when none is present.
+     */
+    public static Integer labelledCategory(Solvent s) {
+        Integer best = null;
+        for (String h : s.hazardStatements()) {
+            Integer c = switch (HazardStatements.family(h)) {
+                case "H224" -> 1;
+                case "H225" -> 2;
+                case "H226" -> 3;
+                case "H227" -> 4;
+                default -> null;
+            };
+            if (c != null && (best == null || c < best)) {
+                best = c;
+            }
+        }
+        return best;
     }
 
     private static boolean flammableByStatement(Solvent s) {

@@ -18,7 +18,7 @@ final class VapourLiquid {
     /** Standard atmosphere, Pa. */
     static final double ATMOSPHERE_PA = 101_325.0;
 
-    private static final double ABSOLUTE_ACCURACY_K = 1e-6;
+    private static final double ABSOLUTE_ACCURACY_K = 1e-5;
     private static final int MAX_EVALUATIONS = 500;
 
     private VapourLiquid() {
@@ -52,24 +52,37 @@ final class VapourLiquid {
         return solve(f, 150, 700);
     }
 
-    /** Brent root of {@code f} in [lo, hi], scanning in 10 K steps for the first sign change; NaN when none is found. */
+    /**
+     * Brent root of {@code f} in [lo, hi]; NaN when none is found. Both functions solved here (log of the bubble-point
+     * and of the Le Chatelier sums) rise with temperature, so when the ends differ in sign Brent runs on the whole
+     * interval; otherwise the interval is scanned in 10 K steps for a sign change.
+     */
     static double solve(UnivariateFunction f, double lo, double hi) {
+        double flo = f.value(lo);
+        double fhi = f.value(hi);
+        if (Double.isFinite(flo) && Double.isFinite(fhi) && flo * fhi <= 0) {
+            return brent(f, lo, hi);
+        }
         double step = 10;
         double a = lo;
-        double fa = f.value(a);
+        double fa = flo;
         while (a < hi) {
             double b = Math.min(a + step, hi);
             double fb = f.value(b);
             if (Double.isFinite(fa) && Double.isFinite(fb) && fa * fb <= 0) {
-                try {
-                    return new BrentSolver(ABSOLUTE_ACCURACY_K).solve(MAX_EVALUATIONS, f, a, b);
-                } catch (NoBracketingException | TooManyEvaluationsException e) {
-                    return Double.NaN;
-                }
+                return brent(f, a, b);
             }
             a = b;
             fa = fb;
         }
         return Double.NaN;
+    }
+
+    private static double brent(UnivariateFunction f, double a, double b) {
+        try {
+            return new BrentSolver(ABSOLUTE_ACCURACY_K).solve(MAX_EVALUATIONS, f, a, b);
+        } catch (NoBracketingException | TooManyEvaluationsException e) {
+            return Double.NaN;
+        }
     }
 }

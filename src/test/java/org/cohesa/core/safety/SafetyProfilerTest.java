@@ -62,6 +62,24 @@ class SafetyProfilerTest {
     }
 
     @Test
+    void aPureSolventsOwnStatementStandsInForAMissingFlashPoint() {
+        // H226 declares GHS Category 3 (GHS Rev. 10 Annex 3 / Table 2.6.1); Class 3 liquids of that category travel in PG III
+        Solvent noFp = TestSolvents.guideInput("test liquid H226 without flash point", "0-00-1", "ether", 150.0, null, null, false, "H226");
+        SafetyProfile p = SafetyProfiler.profile(Blend.pure(noFp), 298.15);
+        assertEquals(SafetyProfile.FlashPointStatus.UNKNOWN, p.flashPoint().status());
+        assertEquals(3, p.ghs().category());
+        assertEquals("III", p.packingGroup());
+    }
+
+    @Test
+    void aLabelThatDisagreesWithTheFlashPointIsPointedOut() {
+        // n-butyl acetate: IEC 60079-20-1:2010 flash point 22 °C (Category 2 by Table 2.6.1), CLP Annex VI H226 (Category 3, from memory)
+        Solvent nba = TestSolvents.guideInput("n-butyl acetate", "123-86-4", "ester", 126.0, 22.0, 390.0, false, "H226 H336");
+        List<String> c = Cautions.forProfile(SafetyProfiler.profile(Blend.pure(nba), 298.15));
+        assertTrue(c.stream().anyMatch(s -> s.contains("declare GHS Category 3") && s.contains("Category 2")), c.toString());
+    }
+
+    @Test
     void blendRankIsTheLeastFavourableComponent() {
         SafetyProfile p = SafetyProfiler.profile(blend("ethanol", 0.5, "N-methyl-2-pyrrolidone"), 298.15);
         assertEquals(GuideRank.HAZARDOUS, p.guideRank());
