@@ -90,6 +90,15 @@ public final class CohesaApp extends Application {
         if (opts.view() >= 0) {
             workbench.spaceView().showView(opts.view());
         }
+        if (opts.blend() != null) {
+            workbench.dryingModel().blendTextProperty().set(opts.blend());
+            workbench.dryingModel().run(() -> finish(opts, scene), () -> finish(opts, scene));
+        } else {
+            finish(opts, scene);
+        }
+    }
+
+    private void finish(StartOptions opts, Scene scene) {
         if (opts.measurePoints() > 0) {
             measure(opts.measurePoints());
         } else if (opts.screenshot() != null) {

@@ -11,11 +11,13 @@ import org.cohesa.core.hsp.SolubilitySphere;
  * {@code --screenshot=FILE} (render once to PNG and exit), {@code --screen=NAME} (which screen to open),
  * {@code --view=3d|p-h|d-p|d-h|teas} (which plot on the parameter-space screen),
  * {@code --target=dD,dP,dH,R0} (start with this sphere), {@code --select=NAME} (select a solvent),
- * {@code --measure-frames=N} (rotate the 3D view with N points, print frame times, exit).
+ * {@code --measure-frames=N} (rotate the 3D view with N points, print frame times, exit),
+ * {@code --blend=NAME:FRACTION,...} (compute this blend's drying path and safety profile at start).
  */
-public record StartOptions(Path screenshot, Screen screen, int view, SolubilitySphere target, String select, int measurePoints) {
+public record StartOptions(Path screenshot, Screen screen, int view, SolubilitySphere target, String select, int measurePoints,
+                           String blend) {
 
-    static final List<String> NAMES = List.of("screenshot", "screen", "view", "target", "select", "measure-frames");
+    static final List<String> NAMES = List.of("screenshot", "screen", "view", "target", "select", "measure-frames", "blend");
     private static final List<String> VIEWS = List.of("3d", "p-h", "d-p", "d-h", "teas");
 
     /** True for an argument the desktop app understands (the launcher sends everything else to the command line). */
@@ -65,6 +67,6 @@ public record StartOptions(Path screenshot, Screen screen, int view, SolubilityS
                 throw new InvalidInputException("--measure-frames", named.get("measure-frames"), "give the number of points, 1 to 100000");
             }
         }
-        return new StartOptions(shot == null ? null : Path.of(shot), screen, view, target, named.get("select"), points);
+        return new StartOptions(shot == null ? null : Path.of(shot), screen, view, target, named.get("select"), points, named.get("blend"));
     }
 }

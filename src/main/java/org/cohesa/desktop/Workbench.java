@@ -26,6 +26,8 @@ import org.cohesa.desktop.common.Dialogs;
 import org.cohesa.desktop.common.Session;
 import org.cohesa.desktop.common.Settings;
 import org.cohesa.desktop.common.TargetChoice;
+import org.cohesa.desktop.drying.DryingModel;
+import org.cohesa.desktop.drying.DryingView;
 import org.cohesa.desktop.library.LibraryModel;
 import org.cohesa.desktop.library.LibraryView;
 import org.cohesa.desktop.space.Colouring;
@@ -54,6 +56,7 @@ public final class Workbench {
     private final TargetView targetView;
     private final SpaceModel spaceModel;
     private final SpaceView spaceView;
+    private final DryingModel dryingModel;
 
     public Workbench(Session session, SceneAntialiasing antialiasing) {
         this.session = session;
@@ -65,6 +68,8 @@ public final class Workbench {
         spaceView = new SpaceView(spaceModel, antialiasing);
         addScreen(Screen.LIBRARY, libraryView.node());
         addScreen(Screen.TARGET, targetView.node());
+        dryingModel = new DryingModel(session);
+        addScreen(Screen.DRYING, new DryingView(dryingModel).node());
         addScreen(Screen.SPACE, spaceView.node());
         tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         tabs.setId("screens");
@@ -91,6 +96,10 @@ public final class Workbench {
 
     public LibraryView libraryView() {
         return libraryView;
+    }
+
+    public DryingModel dryingModel() {
+        return dryingModel;
     }
 
     public LibraryModel libraryModel() {
