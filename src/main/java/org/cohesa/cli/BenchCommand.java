@@ -21,7 +21,7 @@ import picocli.CommandLine.Option;
  * unit tests). Each workflow adds its own subcommand.
  */
 @Command(name = "bench", description = "Time the heavy computations on this machine (median of several runs).",
-        subcommands = {BenchCommand.Fit.class, BenchCommand.Dry.class})
+        subcommands = {BenchCommand.Fit.class, BenchCommand.Dry.class, BenchBlendCommand.class})
 public final class BenchCommand implements Runnable {
 
     @CommandLine.Spec

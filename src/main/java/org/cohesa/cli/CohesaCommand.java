@@ -28,6 +28,8 @@ import picocli.CommandLine.ScopeType;
                 HazardsCommand.class,
                 FitCommand.class,
                 DryCommand.class,
+                BlendCommand.class,
+                ReplaceCommand.class,
                 BenchCommand.class,
         })
 public final class CohesaCommand implements Runnable {

@@ -1,0 +1,27 @@
+package org.cohesa.core.blend;
+
+import java.util.List;
+import org.cohesa.core.solvent.Solvent;
+
+/**
+ * A liquid–liquid split test of a blend at its composition and temperature (the app plugs in the
+ * activity-coefficient model of {@code org.cohesa.core.activity}).
+ */
+@FunctionalInterface
+public interface PhaseCheck {
+
+    /**
+     * @param splits true when the blend separates into two liquid phases
+     * @param model  the model that decided, e.g. "UNIFAC (LLE, Magnussen 1981)"
+     * @param detail a sentence for the user
+     */
+    record Verdict(boolean splits, String model, String detail) {
+    }
+
+    /**
+     * @param components      the liquids
+     * @param volumeFractions their volume fractions, same order, summing to 1
+     * @param kelvin          temperature, K
+     */
+    Verdict check(List<Solvent> components, double[] volumeFractions, double kelvin);
+}
