@@ -57,6 +57,9 @@ final class BlendView {
         if (s.phase() == null) {
             return "single liquid";
         }
+        if (!s.phase().checked()) {
+            return "NOT CHECKED";
+        }
         return s.phase().splits() ? "TWO PHASES" : "one phase";
     }
 
@@ -93,10 +96,12 @@ final class BlendView {
         }
         Map<String, Object> phase = new LinkedHashMap<>();
         if (s.phase() == null) {
+            phase.put("checked", true);
             phase.put("splits", false);
             phase.put("model", null);
             phase.put("detail", "a single liquid cannot split");
         } else {
+            phase.put("checked", s.phase().checked());
             phase.put("splits", s.phase().splits());
             phase.put("model", s.phase().model());
             phase.put("detail", s.phase().detail());
@@ -113,7 +118,10 @@ final class BlendView {
         m.put("library_size", p.librarySize());
         m.put("searched", p.free().size());
         m.put("without_hansen", p.withoutHansen());
-        m.put("left_out", p.leftOut());
+        Map<String, Object> counts = new LinkedHashMap<>();
+        p.leftOut().forEach((reason, names) -> counts.put(reason, names.size()));
+        m.put("left_out", counts);
+        m.put("without_hansen_names", p.leftOut().getOrDefault(CandidatePool.NO_HANSEN, List.of()));
         m.put("subsets", r.subsets());
         m.put("solved_exactly", r.solved());
         m.put("two_phase_left_out", r.droppedTwoPhase());

@@ -12,8 +12,14 @@ final class PhaseChecks {
 
     static PhaseCheck miscibility() {
         return (components, fractions, kelvin) -> {
-            MiscibilityResult r = Miscibility.check(components, fractions, kelvin);
-            return new PhaseCheck.Verdict(r.splits(), r.model(), r.detail());
+            MiscibilityResult r;
+            try {
+                r = Miscibility.check(components, fractions, kelvin);
+            } catch (IllegalArgumentException e) {
+                // Missing data (e.g. no molar volume for the Flory–Huggins fallback): say so rather than guess.
+                return PhaseCheck.Verdict.notChecked(e.getMessage());
+            }
+            return new PhaseCheck.Verdict(true, r.splits(), r.model(), r.detail());
         };
     }
 }

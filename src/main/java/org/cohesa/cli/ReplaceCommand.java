@@ -171,7 +171,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
         m.put("boiling_point_c_max", bpMax);
         m.put("boiling_point_c_text", bpMin == null ? "-" : bpMin.equals(bpMax) ? Output.fmt(bpMin, 0) : Output.fmt(bpMin, 0) + "–" + Output.fmt(bpMax, 0));
         m.put("flash_point_c", flash);
-        m.put("ich_class", ich == null ? (ichUnknown ? "not listed" : null) : ich);
+        m.put("ich_class", ich == null ? (ichUnknown ? "not listed" : null) : ichUnknown ? ich + " + not listed" : ich);
         m.put("hazard_statements", new ArrayList<>(h));
         return m;
     }

@@ -77,6 +77,9 @@ public final class BlendDesigner {
             w.add(String.format(Locale.ROOT, "TWO LIQUID PHASES predicted at %.0f °C (%s): %s; not a usable blend as it stands",
                     req.kelvin() - 273.15, v.model(), v.detail()));
         }
+        if (v != null && !v.checked()) {
+            w.add("two-phase test NOT made (" + v.detail() + "): check miscibility in the lab before use");
+        }
         if (b.red() >= 1) {
             w.add(String.format(Locale.ROOT, "outside the target sphere (RED %.2f): not expected to dissolve the material", b.red()));
         }

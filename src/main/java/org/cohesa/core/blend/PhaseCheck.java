@@ -11,11 +11,16 @@ import org.cohesa.core.solvent.Solvent;
 public interface PhaseCheck {
 
     /**
-     * @param splits true when the blend separates into two liquid phases
-     * @param model  the model that decided, e.g. "UNIFAC (LLE, Magnussen 1981)"
-     * @param detail a sentence for the user
+     * @param checked false when the test could not be made (missing data); the blend is then not known to be one phase
+     * @param splits  true when the blend separates into two liquid phases
+     * @param model   the model that decided, e.g. "UNIFAC (LLE, Magnussen 1981)", or null when not checked
+     * @param detail  a sentence for the user
      */
-    record Verdict(boolean splits, String model, String detail) {
+    record Verdict(boolean checked, boolean splits, String model, String detail) {
+
+        public static Verdict notChecked(String why) {
+            return new Verdict(false, false, null, why);
+        }
     }
 
     /**

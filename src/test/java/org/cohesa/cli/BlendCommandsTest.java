@@ -1,0 +1,137 @@
+package org.cohesa.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The blend, replace and bench commands end to end on the bundled library. */
+class BlendCommandsTest {
+
+    @TempDir
+    Path dir;
+
+    private CliTestSupport.Result run(String... args) {
+        return CliTestSupport.run(dir.resolve("t.db"), args);
+    }
+
+    @Test
+    void hexaneWithMethanolIsFlaggedAsTwoPhase() {
+        // Common practice, no source: n-hexane and methanol are only partly miscible at room temperature.
+        // The target sits between them so the blend is the best answer geometrically.
+        CliTestSupport.Result r = run("blend", "--target", "15.4,10,10,6", "--include", "n-hexane,methanol", "--max-components", "2",
+                "--keep-two-phase", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode pair = null;
+        for (JsonNode b : r.json().get("blends")) {
+            if (b.get("components").size() == 2) {
+                pair = b;
+            }
+        }
+        assertTrue(pair != null, r.out());
+        assertTrue(pair.get("phase").get("splits").asBoolean());
+        assertTrue(pair.get("warnings").get(0).asText().startsWith("TWO LIQUID PHASES"), pair.toString());
+        // Without --keep-two-phase the pair is left out and counted.
+        CliTestSupport.Result dropped = run("blend", "--target", "15.4,10,10,6", "--include", "n-hexane,methanol", "--max-components", "2", "--json");
+        for (JsonNode b : dropped.json().get("blends")) {
+            assertEquals(1, b.get("components").size(), "no two-phase pair offered: " + b);
+        }
+        assertEquals(1, dropped.json().get("search").get("two_phase_left_out").asInt());
+    }
+
+    @Test
+    void blendOfTwoNonSolventsDissolvesNitrocellulose() {
+        // Common practice (from memory): collodion is nitrocellulose (pyroxylin) dissolved in diethyl ether with ethanol,
+        // neither of which dissolves it alone. Sphere: the library's nitrocellulose entry (memory of Hansen 2007, Table A.2).
+        CliTestSupport.Result r = run("blend", "--material", "nitrocellulose", "--include", "diethyl ether,ethanol",
+                "--max-components", "2", "--keep-two-phase", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode blends = r.json().get("blends");
+        JsonNode best = blends.get(0);
+        assertEquals(2, best.get("components").size(), "the blend beats either liquid alone: " + r.out());
+        assertTrue(best.get("red").asDouble() < 1, "the blend is inside the sphere");
+        assertFalse(best.get("phase").get("splits").asBoolean(), "ether and ethanol mix");
+        int singles = 0;
+        for (JsonNode b : blends) {
+            if (b.get("components").size() == 1) {
+                singles++;
+                assertTrue(b.get("red").asDouble() > 1, "each liquid alone is a non-solvent: " + b);
+            }
+        }
+        assertEquals(2, singles);
+    }
+
+    @Test
+    void blendTableRespectsConstraintsAndNamesWithCommas() {
+        CliTestSupport.Result r = run("blend", "--target", "18,9,8,7", "--exclude", "1,4-dioxane,toluene", "--no-cmr",
+                "--boiling-range", "60..160", "--min-flash-point", "0", "--max-ich-class", "2", "--fixed", "water:0.1",
+                "--max-components", "3", "--top", "5", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode blends = r.json().get("blends");
+        assertTrue(blends.size() > 0, r.out());
+        for (JsonNode b : blends) {
+            JsonNode first = b.get("components").get(0);
+            assertEquals("water", first.get("name").asText());
+            assertEquals(0.1, first.get("fraction").asDouble(), 1e-9);
+            for (JsonNode c : b.get("components")) {
+                String n = c.get("name").asText();
+                assertFalse(n.equals("1,4-dioxane") || n.equals("toluene"), n);
+            }
+            assertTrue(b.has("cautions") && b.get("cautions").size() > 0);
+        }
+        CliTestSupport.Result table = run("blend", "--target", "18,9,8,7", "--rank-by", "hazard", "--top", "3");
+        assertEquals(0, table.exitCode(), table.err());
+        assertTrue(table.out().contains("hazard score") && table.out().contains("Screening estimates"), table.out());
+    }
+
+    @Test
+    void replaceShowsTheOriginalBesideTheCandidates() {
+        CliTestSupport.Result r = run("replace", "toluene", "--max-components", "2", "--top", "4", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode j = r.json();
+        assertEquals("toluene", j.get("original").get("name").asText());
+        assertEquals(4.0, j.get("target").get("r0").asDouble(), 0);
+        for (JsonNode c : j.get("candidates")) {
+            for (JsonNode comp : c.get("components")) {
+                assertFalse(comp.get("name").asText().equals("toluene"), "the replaced solvent is not its own substitute");
+            }
+            assertTrue(c.has("ra_to_original") && c.has("flash_point_c") && c.has("hazard_statements") && c.has("ich_class"));
+        }
+        CliTestSupport.Result table = run("replace", "toluene", "--top", "3");
+        assertTrue(table.out().contains("in use"), table.out());
+    }
+
+    @Test
+    void badInputGivesOneErrorLineAndExitTwo() {
+        String[][] cases = {
+                {"blend", "--target", "18,9,8"},
+                {"blend", "--target", "18,9,8,7", "--max-components", "5"},
+                {"blend", "--target", "18,9,8,7", "--fixed", "water:1.5"},
+                {"blend", "--target", "18,9,8,7", "--exclude", "unobtainium"},
+                {"blend", "--target", "18,9,8,7", "--rank-by", "colour"},
+                {"blend", "--target", "18,9,8,7", "--boiling-range", "120..60"},
+                {"blend", "--target", "18,9,8,7", "--family", "nonsense"},
+                {"blend", "--material", "no such material"},
+                {"replace", "toluene", "--radius", "-1"},
+                {"bench", "blend", "--components", "9"},
+        };
+        for (String[] c : cases) {
+            CliTestSupport.Result r = run(c);
+            assertEquals(2, r.exitCode(), String.join(" ", c) + " → " + r.err());
+            assertTrue(r.err().startsWith("error:"), r.err());
+            assertEquals(1, r.err().strip().lines().count(), r.err());
+        }
+    }
+
+    @Test
+    void benchPrintsSubsetsAndMedian() {
+        CliTestSupport.Result r = run("bench", "blend", "--library-size", "30", "--components", "3", "--runs", "3", "--warmup", "1", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        assertEquals(30 + 435 + 4060, r.json().get("subsets").asLong(), "C(30,1)+C(30,2)+C(30,3)");
+        assertTrue(r.json().get("seconds_median").asDouble() >= 0);
+    }
+}
