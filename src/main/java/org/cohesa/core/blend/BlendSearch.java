@@ -101,6 +101,11 @@ public final class BlendSearch {
     private final double rho;
     private final int nFixed;
     private final boolean shortcut;
+    /** 1e-9 × the largest extent of the candidate points: |det| above flatScale·|n| means a proper tetrahedron. */
+    private final double flatScale;
+    /** Loosest fraction bounds over the candidates, widened by the barycentric tolerance (slab pre-test of quadruples). */
+    private final double slabLo;
+    private final double slabHi;
 
     private final AtomicReference<Cand> bound = new AtomicReference<>();
 
@@ -166,6 +171,19 @@ public final class BlendSearch {
         }
         costCap = constraints.maxCost() == null ? Double.NaN : (constraints.maxCost() - fixedCost) / s;
         shortcut = !settings.rankBy().isLinear();
+        double extent = 0;
+        for (int i = 0; i < n; i++) {
+            extent = Math.max(extent, Math.max(Math.abs(x[i] - tx), Math.max(Math.abs(y[i] - ty), Math.abs(z[i] - tz))));
+        }
+        flatScale = 1e-9 * 2 * Math.sqrt(3) * extent;
+        double minLo = Double.POSITIVE_INFINITY;
+        double maxHi = 0;
+        for (int i = 0; i < n; i++) {
+            minLo = Math.min(minLo, lo[i]);
+            maxHi = Math.max(maxHi, hi[i]);
+        }
+        slabLo = minLo - 1e-12;
+        slabHi = maxHi + 1e-12;
     }
 
     /**
@@ -545,7 +563,31 @@ public final class BlendSearch {
                     }
                     double tau2 = tau * tau * (1 + 1e-12);
                     double objCap = objectiveThreshold(w);
+                    // With a zero threshold only tetrahedra whose bounded part holds the target can enter. Then
+                    // λ_l = k3/det(l) must lie in [minLo, maxHi], and det(l) = n·P_l − n·P_i is linear in P_l: a
+                    // slab test of three multiplications rules out most l before any other work.
+                    boolean slab = tau2 == 0 && slabLo > 0;
+                    double sA = Double.NEGATIVE_INFINITY;
+                    double sB = Double.POSITIVE_INFINITY;
+                    if (slab) {
+                        double c0 = nx * x[i] + ny * y[i] + nz * z[i];
+                        if (k3 > 0) {
+                            sA = c0 + k3 / slabHi;
+                            sB = c0 + k3 / slabLo;
+                        } else if (k3 < 0) {
+                            sA = c0 + k3 / slabLo;
+                            sB = c0 + k3 / slabHi;
+                        } else {
+                            continue; // the target lies in the plane of i, j, k: λ_l = 0 < minLo for every l
+                        }
+                    }
                     for (int l = k + 1; l < n; l++) {
+                        if (slab) {
+                            double dl = nx * x[l] + ny * y[l] + nz * z[l];
+                            if (dl < sA || dl > sB) {
+                                continue;
+                            }
+                        }
                         if (objCap != Double.POSITIVE_INFINITY && objectiveLowerBound(i, j, k, l) > objCap) {
                             continue;
                         }
@@ -553,7 +595,9 @@ public final class BlendSearch {
                         double e3y = y[l] - y[i];
                         double e3z = z[l] - z[i];
                         double det = nx * e3x + ny * e3y + nz * e3z;
-                        if (!(det * det > 1e-18 * nNorm2 * (e3x * e3x + e3y * e3y + e3z * e3z))) {
+                        // Flatness test relative to the library's extent first (cheap), exact length only when close.
+                        if (!(Math.abs(det) > flatScale * nNorm)
+                                && !(det * det > 1e-18 * nNorm2 * (e3x * e3x + e3y * e3y + e3z * e3z))) {
                             evaluateAndOffer(4, i, j, k, l); // (nearly) flat tetrahedron: let the exact solver decide
                             continue;
                         }
