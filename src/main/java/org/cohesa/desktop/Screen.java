@@ -7,7 +7,8 @@ public enum Screen {
     LIBRARY("library", "Library"),
     TARGET("target", "Target"),
     DRYING("drying", "Drying"),
-    SPACE("space", "Parameter space");
+    SPACE("space", "Parameter space"),
+    RECORDS("register", "Register");
 
     private final String key;
     private final String title;

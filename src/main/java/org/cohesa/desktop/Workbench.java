@@ -29,6 +29,8 @@ import org.cohesa.desktop.common.TargetChoice;
 import org.cohesa.desktop.drying.DryingModel;
 import org.cohesa.desktop.drying.DryingView;
 import org.cohesa.desktop.library.LibraryModel;
+import org.cohesa.desktop.records.RecordsModel;
+import org.cohesa.desktop.records.RecordsView;
 import org.cohesa.desktop.library.LibraryView;
 import org.cohesa.desktop.space.Colouring;
 import org.cohesa.desktop.space.SpaceModel;
@@ -57,6 +59,7 @@ public final class Workbench {
     private final SpaceModel spaceModel;
     private final SpaceView spaceView;
     private final DryingModel dryingModel;
+    private final RecordsModel recordsModel;
 
     public Workbench(Session session, SceneAntialiasing antialiasing) {
         this.session = session;
@@ -71,6 +74,8 @@ public final class Workbench {
         dryingModel = new DryingModel(session);
         addScreen(Screen.DRYING, new DryingView(dryingModel).node());
         addScreen(Screen.SPACE, spaceView.node());
+        recordsModel = new RecordsModel(session);
+        addScreen(Screen.RECORDS, new RecordsView(recordsModel).node());
         tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         tabs.setId("screens");
         root.setTop(menus());
@@ -98,6 +103,10 @@ public final class Workbench {
         return libraryView;
     }
 
+    public RecordsModel recordsModel() {
+        return recordsModel;
+    }
+
     public DryingModel dryingModel() {
         return dryingModel;
     }
@@ -112,7 +121,7 @@ public final class Workbench {
 
     /** Loads the library off the FX thread; {@code then} runs on the FX thread once it is shown. */
     public void load(Runnable then) {
-        libraryModel.reload(then);
+        libraryModel.reload(() -> recordsModel.reload(then));
     }
 
     public void show(Screen s) {

@@ -33,6 +33,37 @@ class WorkflowTest {
     }
 
     @Test
+    void fitASphereFromTheDemoTestsAndSeeTheReport(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        // the invented demo series of the repository (demo-blends/resin-k17-tests.csv says it is invented)
+        java.nio.file.Path demo = java.nio.file.Path.of("demo-blends", "resin-k17-tests.csv");
+        org.junit.jupiter.api.Assumptions.assumeTrue(java.nio.file.Files.isRegularFile(demo), "demo series not found");
+        String csv = java.nio.file.Files.readString(demo);
+        robot.interact(() -> {
+            fx.workbench.show(Screen.TARGET);
+            robot.lookup("#fit-csv").queryAs(TextArea.class).setText(csv);
+            robot.lookup("#fit-name").queryAs(TextField.class).setText("Resin K-17 (invented)");
+            robot.lookup("#fit-run").queryAs(Button.class).fire();
+        });
+        fx.awaitJobs();
+        assertEquals("Resin K-17 (invented)", fx.session.target().name());
+        String report = robot.lookup("#fit-report").queryAs(TextArea.class).getText();
+        assertTrue(report.startsWith("Fitted sphere: δD"), report);
+        assertTrue(report.contains("Good liquids inside:"), report);
+
+        // a broken table is refused with every bad cell listed, and the target stays
+        robot.interact(() -> {
+            robot.lookup("#fit-csv").queryAs(TextArea.class).setText("liquid,score\nacetone,yes\nno such liquid,1\n");
+            robot.lookup("#fit-run").queryAs(Button.class).fire();
+        });
+        fx.awaitJobs();
+        report = robot.lookup("#fit-report").queryAs(TextArea.class).getText();
+        assertTrue(report.startsWith("The fit could not run"), report);
+        assertTrue(report.contains("line 2"), report);
+        assertEquals("Resin K-17 (invented)", fx.session.target().name());
+    }
+
+    @Test
     void pickAMaterialThenFollowABlendsDryingPath(FxRobot robot) throws Exception {
         fx.awaitLibrary();
         robot.interact(() -> fx.workbench.show(Screen.TARGET));
@@ -73,5 +104,27 @@ class WorkflowTest {
         assertNotNull(sub.getRoot().lookup("#blend-point"));
         Group links = (Group) sub.getRoot().lookup("#blend-links");
         assertEquals(2, links.getChildren().size(), "one line to each component");
+
+        // record the substitution: filed as a draft, approved after review, the register verifies
+        robot.interact(() -> {
+            fx.workbench.show(Screen.RECORDS);
+            fx.workbench.recordsModel().file(new org.cohesa.desktop.records.RecordsModel.Filing("demo enamel (invented)", null,
+                    "xylene", "acetone:0.5,toluene:0.5", "test of the register screen", "tester", true), null);
+        });
+        fx.awaitJobs();
+        @SuppressWarnings("unchecked")
+        javafx.scene.control.TableView<org.cohesa.core.records.SubstitutionRecord> records =
+                robot.lookup("#records-table").queryAs(javafx.scene.control.TableView.class);
+        assertEquals(1, records.getItems().size());
+        long id = records.getItems().get(0).id();
+        assertEquals(org.cohesa.core.records.RecordStatus.DRAFT, records.getItems().get(0).status());
+        robot.interact(() -> fx.workbench.recordsModel().changeStatus(id, org.cohesa.core.records.RecordStatus.IN_REVIEW, "tester", null, null));
+        fx.awaitJobs();
+        robot.interact(() -> fx.workbench.recordsModel().changeStatus(id, org.cohesa.core.records.RecordStatus.APPROVED, "lead", "ok", null));
+        fx.awaitJobs();
+        assertEquals(org.cohesa.core.records.RecordStatus.APPROVED, records.getItems().get(0).status());
+        robot.interact(() -> fx.workbench.recordsModel().verify(null));
+        fx.awaitJobs();
+        assertTrue(fx.session.jobs().messageProperty().get().startsWith("Register intact"), fx.session.jobs().messageProperty().get());
     }
 }

@@ -37,6 +37,7 @@ import org.cohesa.desktop.common.TargetChoice;
 public final class TargetView {
 
     private final TargetModel model;
+    private final FitModel fitModel;
     private final BorderPane root = new BorderPane();
     private final VBox side = new VBox(12);
     private final TableView<TargetModel.Ranked> table = new TableView<>();
@@ -44,6 +45,7 @@ public final class TargetView {
 
     public TargetView(TargetModel model) {
         this.model = model;
+        this.fitModel = new FitModel(model.session());
         root.setId("target-screen");
         GridPane form = new GridPane();
         form.setHgap(8);
@@ -69,8 +71,7 @@ public final class TargetView {
         formProblem.setVisible(false);
         VBox typed = new VBox(8, new Label("A sphere from a publication or your own fit:"), form, apply, formProblem);
         typed.setPadding(new Insets(8));
-        TitledPane typedPane = new TitledPane("Type in a sphere", typed);
-        typedPane.setCollapsible(false);
+        VBox typedPane = typed;
         typedPane.setId("target-typed");
 
         Label current = new Label();
@@ -79,7 +80,15 @@ public final class TargetView {
         current.setWrapText(true);
         current.textProperty().bind(Bindings.createStringBinding(() -> describe(model.session().target()),
                 model.session().targetProperty()));
-        side.getChildren().addAll(current, materialPicker(), typedPane);
+        javafx.scene.control.TabPane ways = new javafx.scene.control.TabPane(
+                new javafx.scene.control.Tab("Material", materialPicker()),
+                new javafx.scene.control.Tab("Fit your tests", fitPane()),
+                new javafx.scene.control.Tab("Type in", typedPane));
+        ways.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
+        ways.setId("target-ways");
+        ways.getTabs().get(1).setId("target-fit-tab");
+        VBox.setVgrow(ways, Priority.ALWAYS);
+        side.getChildren().addAll(current, ways);
         side.setPadding(new Insets(10));
         side.setPrefWidth(390);
         side.setMinWidth(300);
@@ -117,6 +126,16 @@ public final class TargetView {
         tableBar.setPadding(new Insets(8, 10, 8, 10));
         BorderPane right = new BorderPane(table);
         right.setTop(tableBar);
+        javafx.scene.control.TextArea report = new javafx.scene.control.TextArea();
+        report.setId("fit-report");
+        report.setEditable(false);
+        report.setWrapText(true);
+        report.getStyleClass().add("details");
+        report.textProperty().bind(fitModel.reportProperty());
+        report.visibleProperty().bind(fitModel.reportProperty().isNotEmpty());
+        report.managedProperty().bind(report.visibleProperty());
+        report.setPrefRowCount(12);
+        right.setBottom(report);
         root.setLeft(side);
         root.setCenter(right);
     }
@@ -134,7 +153,7 @@ public final class TargetView {
         javafx.scene.control.ListView<Material> list = new javafx.scene.control.ListView<>(filtered.sorted(
                 java.util.Comparator.comparing(m -> m.name().toLowerCase(java.util.Locale.ROOT))));
         list.setId("material-list");
-        list.setPrefHeight(260);
+        list.setPrefHeight(420);
         list.setCellFactory(v -> new javafx.scene.control.ListCell<>() {
             @Override
             protected void updateItem(Material m, boolean empty) {
@@ -156,10 +175,41 @@ public final class TargetView {
         note.setWrapText(true);
         VBox box = new VBox(6, find, list, use, note);
         box.setPadding(new Insets(8));
-        TitledPane pane = new TitledPane("Pick a material", box);
-        pane.setCollapsible(false);
-        pane.setId("target-materials");
-        return pane;
+        box.setId("target-materials");
+        return box;
+    }
+
+    private Node fitPane() {
+        javafx.scene.control.TextArea csv = new javafx.scene.control.TextArea();
+        csv.setId("fit-csv");
+        csv.textProperty().bindBidirectional(fitModel.csvProperty());
+        csv.setPrefRowCount(10);
+        csv.getStyleClass().add("details");
+        TextField name = new TextField();
+        name.setId("fit-name");
+        name.textProperty().bindBidirectional(fitModel.nameProperty());
+        Button load = new Button("_Load CSV…");
+        load.setOnAction(e -> {
+            Path f = Dialogs.openFile(root, "Load test results", "CSV files", "*.csv");
+            if (f != null) {
+                try {
+                    fitModel.csvProperty().set(java.nio.file.Files.readString(f, java.nio.charset.StandardCharsets.UTF_8));
+                } catch (java.io.IOException | RuntimeException ex) {
+                    model.session().jobs().complain(ErrorText.of(ex));
+                }
+            }
+        });
+        Button fit = new Button("_Fit sphere");
+        fit.setId("fit-run");
+        fit.setOnAction(e -> fitModel.fit(null));
+        Label help = new Label("One row per liquid: liquid (library name or NAME:FRACTION;NAME:FRACTION), score 1 dissolves, "
+                + "0 does not, between for partial; optional dD, dP, dH for liquids not in the library.");
+        help.setWrapText(true);
+        help.getStyleClass().add("hint");
+        Label nameLabel = new Label("Material name");
+        VBox box = new VBox(6, help, csv, new HBox(8, nameLabel, name), new HBox(8, load, fit));
+        box.setPadding(new Insets(8));
+        return box;
     }
 
     private void useMaterial(Material m) {

@@ -1,0 +1,131 @@
+package org.cohesa.desktop.target;
+
+import java.io.StringReader;
+import java.util.List;
+import java.util.Locale;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import org.cohesa.core.BadRowsException;
+import org.cohesa.core.RowError;
+import org.cohesa.core.solvent.SolventLibrary;
+import org.cohesa.core.target.FitOptions;
+import org.cohesa.core.target.FitResult;
+import org.cohesa.core.target.Interval;
+import org.cohesa.core.target.Misfit;
+import org.cohesa.core.target.NamedPoint;
+import org.cohesa.core.target.NextTest;
+import org.cohesa.core.target.SphereFitter;
+import org.cohesa.core.target.TestResult;
+import org.cohesa.desktop.common.Numbers;
+import org.cohesa.desktop.common.Session;
+import org.cohesa.desktop.common.TargetChoice;
+import org.cohesa.store.TestSeriesCsv;
+
+/**
+ * View-model of the fit on the target screen: the user's test results as CSV text (typed, pasted or loaded
+ * from a file; columns of {@link TestSeriesCsv}), the fit ({@link SphereFitter}) run off the FX thread, and
+ * its report (quality, misfits, confidence, next suggested tests). A successful fit becomes the target.
+ */
+public final class FitModel {
+
+    private final Session session;
+    private final StringProperty csv = new SimpleStringProperty("liquid,score\n");
+    private final StringProperty name = new SimpleStringProperty("my material (fit)");
+    private final ObjectProperty<FitResult> result = new SimpleObjectProperty<>();
+    private final StringProperty report = new SimpleStringProperty("");
+
+    public FitModel(Session session) {
+        this.session = session;
+    }
+
+    public StringProperty csvProperty() {
+        return csv;
+    }
+
+    public StringProperty nameProperty() {
+        return name;
+    }
+
+    public ObjectProperty<FitResult> resultProperty() {
+        return result;
+    }
+
+    public StringProperty reportProperty() {
+        return report;
+    }
+
+    public void fit(Runnable then) {
+        SolventLibrary library = new SolventLibrary(List.copyOf(session.solvents()));
+        String text = csv.get() == null ? "" : csv.get();
+        String label = name.get() == null || name.get().isBlank() ? "fitted sphere" : name.get().strip();
+        session.jobs().run("Fitting the sphere", p -> {
+            List<TestResult> results = TestSeriesCsv.read("test results", new StringReader(text), library);
+            List<NamedPoint> candidates = library.searchable().stream().map(s -> new NamedPoint(s.name(), s.hansen())).toList();
+            p.update(0.2, "Fitting " + results.size() + " test results (with bootstrap confidence)…");
+            return SphereFitter.fit(results, candidates, FitOptions.defaults(FitOptions.DEFAULT_SEED));
+        }, r -> {
+            result.set(r);
+            report.set(describe(r));
+            session.targetProperty().set(new TargetChoice(label, r.sphere(), "fit of " + r.results() + " test results"));
+            if (then != null) {
+                then.run();
+            }
+        }, err -> report.set("The fit could not run: " + err + detail(text, library)));
+    }
+
+    /** Every bad cell of the test table, re-read so the report can list them all. */
+    private static String detail(String text, SolventLibrary library) {
+        try {
+            TestSeriesCsv.read("test results", new StringReader(text), library);
+            return "";
+        } catch (BadRowsException e) {
+            StringBuilder b = new StringBuilder("\n");
+            for (RowError r : e.errors()) {
+                b.append("• ").append(r.describe()).append('\n');
+            }
+            return b.toString();
+        } catch (Exception e) {
+            return "";
+        }
+    }
+
+    static String describe(FitResult r) {
+        StringBuilder b = new StringBuilder();
+        var c = r.sphere().centre();
+        b.append(String.format(Locale.ROOT, "Fitted sphere: δD %.1f, δP %.1f, δH %.1f, R0 %.1f MPa½ from %d test results%n",
+                c.dD(), c.dP(), c.dH(), r.sphere().r0(), r.results()));
+        var q = r.quality();
+        b.append(String.format(Locale.ROOT, "Good liquids inside: %d of %d · bad liquids outside: %d of %d%n", q.goodInside(), q.goodTotal(),
+                q.badOutside(), q.badTotal()));
+        if (q.misfits().isEmpty()) {
+            b.append("No misfits: every result is on its expected side.\n");
+        } else {
+            b.append("Misfits (on the wrong side of the surface):\n");
+            for (Misfit m : q.misfits()) {
+                b.append("  ").append(m.name()).append(": score ").append(Numbers.two(m.score())).append(", RED ").append(Numbers.two(m.red()))
+                        .append('\n');
+            }
+        }
+        var conf = r.confidence();
+        if (conf != null) {
+            b.append(String.format(Locale.ROOT, "%.0f %% confidence (%d resamples): δD %s, δP %s, δH %s, R0 %s%n", conf.level() * 100,
+                    conf.resamples(), range(conf.dD()), range(conf.dP()), range(conf.dH()), range(conf.r0())));
+            for (String w : conf.warnings()) {
+                b.append("Warning: ").append(w).append('\n');
+            }
+        }
+        if (!r.nextTests().isEmpty()) {
+            b.append("Next tests that would tighten the fit most:\n");
+            for (NextTest t : r.nextTests()) {
+                b.append("  ").append(t.name()).append(" (RED ").append(Numbers.two(t.red())).append("): ").append(t.reason()).append('\n');
+            }
+        }
+        return b.toString();
+    }
+
+    private static String range(Interval i) {
+        return i == null ? "–" : String.format(Locale.ROOT, "%.1f–%.1f", i.low(), i.high());
+    }
+}
