@@ -21,7 +21,7 @@ import picocli.CommandLine.Option;
  * unit tests). Each workflow adds its own subcommand.
  */
 @Command(name = "bench", description = "Time the heavy computations on this machine (median of several runs).",
-        subcommands = {BenchCommand.Fit.class, BenchCommand.Dry.class, BenchBlendCommand.class})
+        subcommands = {BenchCommand.Fit.class, BenchCommand.Dry.class, BenchBlendCommand.class, BenchCommand.Hazards.class})
 public final class BenchCommand implements Runnable {
 
     @CommandLine.Spec
@@ -161,6 +161,65 @@ public final class BenchCommand implements Runnable {
             }
             TextTable tt = new TextTable("benchmark", "components", "model", "runs", "median ms", "min ms", "max ms");
             tt.row("dry to 95 %", b.size(), model, runs, Output.fmt(median * 1e3, 2), Output.fmt(sorted[0] * 1e3, 2),
+                    Output.fmt(sorted[n - 1] * 1e3, 2));
+            tt.print(out());
+            out().println("blend: " + b.describe() + "; " + Runtime.getRuntime().availableProcessors() + " cores");
+        }
+    }
+
+    /**
+     * {@code cohesa bench hazards}: one complete safety profile ({@link org.cohesa.core.safety.SafetyProfiler#profile} plus
+     * {@link org.cohesa.core.safety.Cautions#forProfile}) of a blend: activity model, blend flash point, bubble point,
+     * exposure, ICH, CHEM21 and cautions; the median goes into docs/performance.md.
+     */
+    @Command(name = "hazards", description = "Time one safety profile with its cautions (default: ethanol/ethyl acetate/water, UNIFAC, 25 °C).")
+    static final class Hazards extends CohesaSubcommand {
+
+        static final String DEFAULT_BLEND = "ethanol:0.3,ethyl acetate:0.3,water:0.4";
+
+        @Option(names = "--blend", paramLabel = "NAME:FRACTION,...", description = "Blend to time (default ${DEFAULT-VALUE}).")
+        String blend = DEFAULT_BLEND;
+        @Option(names = "--runs", description = "Timed runs (default ${DEFAULT-VALUE}).") int runs = 201;
+        @Option(names = "--warmup", description = "Untimed warm-up runs (default ${DEFAULT-VALUE}).") int warmup = 100;
+
+        @Override
+        protected void execute() {
+            if (runs < 1 || runs > 100_000) {
+                throw new org.cohesa.core.InvalidInputException("--runs", String.valueOf(runs), "must lie between 1 and 100000");
+            }
+            if (warmup < 0 || warmup > 100_000) {
+                throw new org.cohesa.core.InvalidInputException("--warmup", String.valueOf(warmup), "must lie between 0 and 100000");
+            }
+            org.cohesa.core.solvent.Blend b = ctx().library().resolveBlend("--blend", blend);
+            double kelvin = 298.15;
+            String model = org.cohesa.core.safety.SafetyProfiler.profile(b, kelvin).activityModel();
+            for (int i = 0; i < warmup; i++) {
+                org.cohesa.core.safety.Cautions.forProfile(org.cohesa.core.safety.SafetyProfiler.profile(b, kelvin));
+            }
+            double[] t = new double[runs];
+            for (int i = 0; i < runs; i++) {
+                long start = System.nanoTime();
+                org.cohesa.core.safety.Cautions.forProfile(org.cohesa.core.safety.SafetyProfiler.profile(b, kelvin));
+                t[i] = (System.nanoTime() - start) / 1e9;
+            }
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("benchmark", "hazards");
+            m.put("blend", b.describe());
+            m.put("components", b.size());
+            m.put("model", model);
+            m.put("warmup", warmup);
+            m.putAll(stats(t));
+            double[] sorted = t.clone();
+            Arrays.sort(sorted);
+            int n = sorted.length;
+            double median = n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
+            m.put("median_ms", Output.round(median * 1e3, 3));
+            if (json()) {
+                Output.json(out(), m);
+                return;
+            }
+            TextTable tt = new TextTable("benchmark", "components", "model", "runs", "median ms", "min ms", "max ms");
+            tt.row("safety profile + cautions", b.size(), model, runs, Output.fmt(median * 1e3, 2), Output.fmt(sorted[0] * 1e3, 2),
                     Output.fmt(sorted[n - 1] * 1e3, 2));
             tt.print(out());
             out().println("blend: " + b.describe() + "; " + Runtime.getRuntime().availableProcessors() + " cores");

@@ -58,6 +58,15 @@ class HazardsCommandTest {
     }
 
     @Test
+    void benchmarkRunsAndReportsItsMedian() {
+        CliTestSupport.Result r = run("bench", "hazards", "--runs", "3", "--warmup", "0", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        assertEquals(3, r.json().get("runs").asInt());
+        assertTrue(r.json().get("median_ms").asDouble() > 0);
+        assertEquals(2, run("bench", "hazards", "--runs", "0").exitCode());
+    }
+
+    @Test
     void badInputIsOneErrorLineAndExitCode2() {
         CliTestSupport.Result unknown = run("hazards", "--solvent", "unobtainium");
         assertEquals(2, unknown.exitCode());
