@@ -70,7 +70,8 @@ final class BlendView {
         return String.format(Locale.ROOT, "searched %d of %d library solvents (%d without Hansen parameters, %d left out by the constraints%s); "
                         + "%d subsets, %d solved exactly, the rest ruled out by bounds%s",
                 p.free().size(), p.librarySize(), p.withoutHansen(), leftOut, p.fixed().isEmpty() ? "" : ", " + p.fixed().size() + " fixed",
-                r.subsets(), r.solved(), r.droppedTwoPhase() > 0 ? "; " + r.droppedTwoPhase() + " two-phase blends left out (--keep-two-phase shows them)" : "");
+                r.subsets(), r.solved(), (r.droppedTwoPhase() > 0 ? "; " + r.droppedTwoPhase() + " two-phase blends left out (--keep-two-phase shows them)" : "")
+                        + (r.droppedFlashPoint() > 0 ? "; " + r.droppedFlashPoint() + " left out: blend flash point below the minimum" : ""));
     }
 
     static Map<String, Object> json(BlendSuggestion s) {
@@ -107,6 +108,8 @@ final class BlendView {
             phase.put("detail", s.phase().detail());
         }
         m.put("phase", phase);
+        m.put("flash_point_c", s.flashPointC() == null ? null : Output.round(s.flashPointC(), 1));
+        m.put("flash_point_basis", s.flashPointBasis());
         m.put("warnings", s.warnings());
         m.put("cautions", s.cautions());
         return m;
@@ -125,6 +128,7 @@ final class BlendView {
         m.put("subsets", r.subsets());
         m.put("solved_exactly", r.solved());
         m.put("two_phase_left_out", r.droppedTwoPhase());
+        m.put("below_blend_flash_point_left_out", r.droppedFlashPoint());
         return m;
     }
 

@@ -120,11 +120,11 @@ public final class ReplaceCommand extends CohesaSubcommand {
             Map<String, Object> p = row(null, b.components(), b.point(), sphere, original);
             t.row("#" + rank++, BlendView.describe(b), Output.fmt(b.point().dD(), 1), Output.fmt(b.point().dP(), 1), Output.fmt(b.point().dH(), 1),
                     Output.fmt((Double) p.get("ra_to_original"), 2), Output.fmt(b.red(), 3), p.get("boiling_point_c_text"),
-                    Output.fmt((Double) p.get("flash_point_c"), 0), p.get("ich_class"), String.join(" ", asStrings(p.get("hazard_statements"))),
+                    Output.fmt(s.flashPointC(), 0), p.get("ich_class"), String.join(" ", asStrings(p.get("hazard_statements"))),
                     BlendView.phaseText(s));
         }
         t.print(out());
-        out().println("For blends: bp is the range of the components, flash °C the lowest component flash point (the blend's own flash point can differ), ICH the worst component class.");
+        out().println("For blends: bp is the range of the components, flash °C the blend's computed flash point (Liaw et al. 2002; '-' when not flammable or unknown, see --json), ICH the worst component class.");
         BlendView.notes(out(), r.suggestions());
         out().println(BlendView.SCREENING);
     }
@@ -143,6 +143,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
             m.put("dP", point.dP());
             m.put("dH", point.dH());
             m.put("red", Output.round(sphere.red(point), 4));
+            m.put("flash_point_c", original.flashPointC());
         }
         m.put("ra_to_original", Output.round(original.hansen().distanceTo(point), 4));
         Double bpMin = null;
@@ -170,7 +171,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
         m.put("boiling_point_c_min", bpMin);
         m.put("boiling_point_c_max", bpMax);
         m.put("boiling_point_c_text", bpMin == null ? "-" : bpMin.equals(bpMax) ? Output.fmt(bpMin, 0) : Output.fmt(bpMin, 0) + "–" + Output.fmt(bpMax, 0));
-        m.put("flash_point_c", flash);
+        m.put("lowest_component_flash_point_c", flash);
         m.put("ich_class", ich == null ? (ichUnknown ? "not listed" : null) : ichUnknown ? ich + " + not listed" : ich);
         m.put("hazard_statements", new ArrayList<>(h));
         return m;

@@ -89,6 +89,18 @@ class BlendCommandsTest {
     }
 
     @Test
+    void minimumFlashPointHoldsForTheBlendItself() {
+        CliTestSupport.Result r = run("blend", "--target", "17,6,8,6", "--min-flash-point", "25", "--max-components", "2", "--top", "8", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.json().get("blends").size() > 0, r.out());
+        for (JsonNode b : r.json().get("blends")) {
+            JsonNode fp = b.get("flash_point_c");
+            assertTrue(fp.isNull() || fp.asDouble() >= 25, "blend flash point " + fp + " below the minimum: " + b);
+            assertTrue(b.get("flash_point_basis").asText().length() > 0);
+        }
+    }
+
+    @Test
     void replaceShowsTheOriginalBesideTheCandidates() {
         CliTestSupport.Result r = run("replace", "toluene", "--max-components", "2", "--top", "4", "--json");
         assertEquals(0, r.exitCode(), r.err());
@@ -99,7 +111,7 @@ class BlendCommandsTest {
             for (JsonNode comp : c.get("components")) {
                 assertFalse(comp.get("name").asText().equals("toluene"), "the replaced solvent is not its own substitute");
             }
-            assertTrue(c.has("ra_to_original") && c.has("flash_point_c") && c.has("hazard_statements") && c.has("ich_class"));
+            assertTrue(c.has("ra_to_original") && c.has("flash_point_c") && c.has("flash_point_basis") && c.has("hazard_statements") && c.has("ich_class"));
         }
         CliTestSupport.Result table = run("replace", "toluene", "--top", "3");
         assertTrue(table.out().contains("in use"), table.out());
