@@ -18,7 +18,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 /** {@code cohesa hazards}: the safety and compliance profile of one solvent or a blend. */
-@Command(name = "hazards", description = {
+@Command(name = "hazards", mixinStandardHelpOptions = true, description = {
         "Safety and compliance profile of a solvent or blend: flash point, GHS flammable-liquid category, UN packing group,",
         "hazard statements, CMR flags, saturated-vapour exposure, ICH Q3C(R8) class and the CHEM21 solvent-guide rank.",
         "Results are screening estimates: the supplier's SDS, local codes and your site's licensed safety professionals decide."})
@@ -29,7 +29,7 @@ public final class HazardsCommand extends CohesaSubcommand {
         String solvent;
 
         @Option(names = "--blend", paramLabel = "NAME:FRACTION,...", required = true,
-                description = "A blend by volume fractions, e.g. \"ethanol:0.4,water:0.6\" (fractions sum to 1; 40% also works).")
+                description = "A blend by volume fractions, e.g. \"ethanol:0.4,water:0.6\" (fractions sum to 1; 40%% also works).")
         String blend;
     }
 

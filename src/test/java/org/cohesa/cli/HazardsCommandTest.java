@@ -58,6 +58,14 @@ class HazardsCommandTest {
     }
 
     @Test
+    void helpDescribesTheCommand() {
+        CliTestSupport.Result r = run("hazards", "--help");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("--blend") && r.out().contains("screening estimates"), r.out());
+        assertFalse(r.err().contains("WARN"), r.err());
+    }
+
+    @Test
     void benchmarkRunsAndReportsItsMedian() {
         CliTestSupport.Result r = run("bench", "hazards", "--runs", "3", "--warmup", "0", "--json");
         assertEquals(0, r.exitCode(), r.err());
