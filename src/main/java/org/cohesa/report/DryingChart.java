@@ -45,6 +45,14 @@ final class DryingChart {
                         replaced ? RecordPdf.VERMILLION : RecordPdf.BLUE, replaced));
             }
         }
+        if (series.isEmpty()) {
+            List<String> notes = new ArrayList<>();
+            for (JsonNode s : drying.get("series")) {
+                notes.add(s.path("liquid").asText() + ": last to evaporate " + s.path("last_solvent").asText("?"));
+            }
+            l.paragraph("No RED along the path (no target sphere was given). " + String.join("; ", notes) + ".", 9, PdfLayout.INK);
+            return;
+        }
         double yMax = Math.ceil(maxRed * 1.1 * 4) / 4;
         l.ensure(HEIGHT + 60);
         float x0 = PdfLayout.LEFT + 34;

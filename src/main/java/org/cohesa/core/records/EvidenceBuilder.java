@@ -3,7 +3,9 @@ package org.cohesa.core.records;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.TreeMap;
@@ -36,6 +38,7 @@ public final class EvidenceBuilder {
     private TargetRef target;
     private Map<String, String> citations = Map.of();
     private final Map<String, JsonNode> extra = new LinkedHashMap<>();
+    private List<String> cautions = List.of(SCREENING_NOTE);
 
     public EvidenceBuilder(Blend replaced, Blend replacement, String appVersion) {
         this.replaced = Objects.requireNonNull(replaced, "replaced");
@@ -51,6 +54,19 @@ public final class EvidenceBuilder {
     /** Source key → full citation; only the keys the liquids use are copied into the snapshot. */
     public EvidenceBuilder citations(Map<String, String> keyToCitation) {
         this.citations = Map.copyOf(keyToCitation);
+        return this;
+    }
+
+    /**
+     * The caution sentences to file (e.g. from the safety workflow); they must end with a reminder that the
+     * results are screening estimates, else {@link #SCREENING_NOTE} is appended.
+     */
+    public EvidenceBuilder cautions(List<String> sentences) {
+        List<String> c = new ArrayList<>(sentences);
+        if (c.isEmpty() || !c.get(c.size() - 1).toLowerCase(java.util.Locale.ROOT).contains("screening estimate")) {
+            c.add(SCREENING_NOTE);
+        }
+        this.cautions = List.copyOf(c);
         return this;
     }
 
@@ -79,8 +95,8 @@ public final class EvidenceBuilder {
         root.set(Evidence.Sections.REPLACED, liquid(replaced));
         root.set(Evidence.Sections.REPLACEMENT, liquid(replacement));
         root.set(Evidence.Sections.COMPARISON, comparison());
-        ArrayNode cautions = root.putArray(Evidence.Sections.CAUTIONS);
-        cautions.add(SCREENING_NOTE);
+        ArrayNode cautionArray = root.putArray(Evidence.Sections.CAUTIONS);
+        cautions.forEach(cautionArray::add);
         extra.forEach(root::set);
         root.set(Evidence.Sections.DATA_SOURCES, sources());
         return Evidence.of(root);
