@@ -1,7 +1,7 @@
 package org.cohesa.cli;
 
 import org.cohesa.core.records.Evidence;
-import org.cohesa.core.records.EvidenceBuilder;
+import org.cohesa.core.records.EvidenceAssembler;
 import org.cohesa.core.records.RecordDraft;
 import org.cohesa.core.records.SubstitutionRecord;
 import org.cohesa.core.records.TargetRef;
@@ -53,19 +53,19 @@ public final class RecordAddCommand extends CohesaSubcommand {
         Blend from = RecordSupport.liquid(library, "--replaced", replaced);
         Blend to = RecordSupport.liquid(library, "--replacement", replacement);
         SourceCatalog catalog = SourceCatalog.bundled();
-        EvidenceBuilder evidence = new EvidenceBuilder(from, to, AppVersion.get()).citations(catalog.all());
         String targetText = null;
+        TargetRef targetRef = null;
         if (target != null && target.sphere != null) {
             var sphere = Targets.parseSphere("--target", target.sphere);
             targetText = target.sphere.strip();
-            evidence.target(new TargetRef("sphere entered by hand", sphere, "entered as " + targetText + " by " + author.strip() + " when filing"));
+            targetRef = new TargetRef("sphere entered by hand", sphere, "entered as " + targetText + " by " + author.strip() + " when filing");
         } else if (target != null && target.material != null) {
             Material m = ctx().materials().library().resolve("--material", target.material);
             targetText = m.name();
             String source = m.source() + catalog.citation(m.source()).map(c -> " — " + c).orElse("");
-            evidence.target(new TargetRef(m.name(), m.sphere(), source));
+            targetRef = new TargetRef(m.name(), m.sphere(), source);
         }
-        Evidence snapshot = evidence.build();
+        Evidence snapshot = EvidenceAssembler.assemble(from, to, targetRef, catalog.all(), AppVersion.get());
         RecordDraft draft = new RecordDraft(process, site, from.describe(), to.describe(), targetText, reason, snapshot);
         SubstitutionRecord r = new RecordRepository(ctx().database()).create(draft, author);
         if (json()) {

@@ -127,7 +127,7 @@ public final class RecordPdf {
                 ? "hash chain intact when printed (" + chain.events() + " events, head " + chain.headHash().substring(0, 16) + "…)"
                 : "HASH CHAIN BROKEN when printed: " + chain.firstProblem().map(p -> p.describe()).orElse("")});
         rows.add(new String[] {"Evidence taken with", "Cohesa " + ev.section(Evidence.Sections.APP_VERSION).map(JsonNode::asText).orElse("?")});
-        l.table(new float[] {0.22f, 0.78f}, rows, false, true, 9);
+        l.table(new float[] {0.22f, 0.78f}, rows, false, true, 8.6f);
     }
 
     private static String target(Evidence ev, String typed) {
@@ -158,12 +158,18 @@ public final class RecordPdf {
         ev.section(Evidence.Sections.COMPARISON).map(c -> c.get("ra_replacement_to_replaced")).filter(JsonNode::isNumber)
                 .ifPresent(ra -> rows.add(new String[] {"Ra between the two (MPa½)", "reference", n(ra, 2)}));
         rows.add(new String[] {"Flash point (°C)", flash(a, sa), flash(b, sb)});
-        rows.add(new String[] {"GHS flammable-liquid category", safetyText(sa, "ghs_flammable_category"), safetyText(sb, "ghs_flammable_category")});
+        rows.add(new String[] {"GHS flammable liquid; UN packing group", ghs(sa), ghs(sb)});
         rows.add(new String[] {"Boiling point (°C)", perComponent(a, "boiling_point_c"), perComponent(b, "boiling_point_c")});
         rows.add(new String[] {"Hazard statements", hazards(a), hazards(b)});
         rows.add(new String[] {"OEL TWA / STEL (ppm)", oels(a), oels(b)});
-        rows.add(new String[] {"ICH Q3C class", perComponent(a, "ich_class"), perComponent(b, "ich_class")});
-        l.table(new float[] {0.26f, 0.37f, 0.37f}, rows, true, true, 8.6f);
+        if (sa != null || sb != null) {
+            rows.add(new String[] {"Saturated vapour at 25 °C (× OEL)", exposure(sa), exposure(sb)});
+        }
+        rows.add(new String[] {"ICH Q3C class", ich(a, sa), ich(b, sb)});
+        if (sa != null || sb != null) {
+            rows.add(new String[] {"Solvent-guide rank (CHEM21)", safetyText(sa, "guide_rank"), safetyText(sb, "guide_rank")});
+        }
+        l.table(new float[] {0.26f, 0.37f, 0.37f}, rows, true, true, 8.2f);
     }
 
     /** "toluene", or "ethyl acetate 50 % + n-butyl acetate 50 %" for a blend (volume percent). */
@@ -199,13 +205,49 @@ public final class RecordPdf {
     }
 
     private static String flash(JsonNode liquid, JsonNode safety) {
-        if (safety != null && safety.get("flash_point_c") != null && safety.get("flash_point_c").isNumber()) {
-            return n(safety.get("flash_point_c"), 0) + (safety.has("flash_point_method") ? " (" + safety.get("flash_point_method").asText() + ")" : "");
+        if (safety != null && safety.path("flash_point_c").isNumber()) {
+            String status = safety.path("flash_point_status").asText();
+            return n(safety.get("flash_point_c"), 0) + (status.equals("computed") ? " (model estimate: Liaw 2002, "
+                    + safety.path("activity_model").asText() + ")" : " (closed cup, library)");
+        }
+        if (safety != null && safety.hasNonNull("flash_point_status") && !safety.path("flash_point_status").asText().equals("library")) {
+            return safety.path("flash_point_status").asText().replace('_', ' ');
         }
         if (liquid.get("flash_point_c") != null) {
             return n(liquid.get("flash_point_c"), 0) + " (closed cup, library)";
         }
         return perComponent(liquid, "flash_point_c");
+    }
+
+    private static String ghs(JsonNode safety) {
+        if (safety == null || !safety.hasNonNull("ghs_flammable_category")) {
+            return "not in this snapshot";
+        }
+        return safety.get("ghs_flammable_category").asText()
+                + "; " + (safety.hasNonNull("packing_group") ? "PG " + safety.get("packing_group").asText() : "not Class 3");
+    }
+
+    private static String exposure(JsonNode safety) {
+        if (safety == null || !safety.path("exposure_index").isNumber()) {
+            return "no OEL to compare";
+        }
+        return n(safety.get("exposure_index"), 0) + (safety.path("exposure_index_complete").asBoolean(true) ? "" : " (components without OEL left out)");
+    }
+
+    /** ICH Q3C class and Option 1 limit from the safety profile, else the class from the library. */
+    private static String ich(JsonNode liquid, JsonNode safety) {
+        if (safety == null || !safety.path("ich_q3c").isArray()) {
+            return perComponent(liquid, "ich_class");
+        }
+        List<String> parts = new ArrayList<>();
+        JsonNode lines = safety.get("ich_q3c");
+        for (JsonNode x : lines) {
+            String text = x.path("class").isNumber()
+                    ? "class " + x.get("class").asInt() + (x.path("limit_ppm").isNumber() ? ", " + n(x.get("limit_ppm"), 0) + " ppm" : "")
+                    : "not listed";
+            parts.add(lines.size() == 1 ? text : x.path("component").asText() + ": " + text);
+        }
+        return String.join("; ", parts);
     }
 
     private static String safetyText(JsonNode safety, String key) {
@@ -264,12 +306,13 @@ public final class RecordPdf {
         l.ensure(60 + 26f * r.history().size());
         l.heading("Status history");
         List<String[]> rows = new ArrayList<>();
-        rows.add(new String[] {"Step", "Event", "Status after", "By", "When", "Comment"});
+        rows.add(new String[] {"Step", "Event", "Status after", "By", "When (UTC)", "Comment"});
         for (StatusChange c : r.history()) {
-            rows.add(new String[] {String.valueOf(c.seq()), c.kind().replace('_', ' '), c.status().label().replace('_', ' '), c.by(), stamp(c.at()),
+            rows.add(new String[] {String.valueOf(c.seq()), c.kind().replace('_', ' '), c.status().label().replace('_', ' '), c.by(),
+                    stamp(c.at()).replace(" UTC", ""),
                     c.comment() == null ? "" : c.comment()});
         }
-        l.table(new float[] {0.07f, 0.14f, 0.13f, 0.16f, 0.17f, 0.33f}, rows, true, false, 8.6f);
+        l.table(new float[] {0.06f, 0.15f, 0.12f, 0.16f, 0.2f, 0.31f}, rows, true, false, 8.2f);
     }
 
     private static void cautions(PdfLayout l, Evidence ev) throws IOException {
@@ -278,21 +321,21 @@ public final class RecordPdf {
         if (texts.isEmpty()) {
             return;
         }
-        float size = 9;
+        float size = 8.2f;
+        float leading = size + 2.2f;
         List<String> lines = new ArrayList<>();
         for (String t : texts) {
-            lines.addAll(l.wrap(l.fonts.regular, size, t, PdfLayout.RIGHT - PdfLayout.LEFT - 20));
-            lines.add("");
+            lines.addAll(l.wrap(l.fonts.regular, size, "•  " + t, PdfLayout.RIGHT - PdfLayout.LEFT - 20));
         }
-        lines.remove(lines.size() - 1);
-        float h = lines.size() * (size + 2.6f) + 12;
+        float h = lines.size() * leading + 10;
         l.ensure(h + 40);
         l.heading("Cautions");
         l.fillRect(PdfLayout.LEFT, l.y - h, 3, h, VERMILLION);
-        float ty = l.y - 6 - size;
+        float ty = l.y - 5 - size;
         for (String line : lines) {
-            l.text(l.fonts.regular, size, PdfLayout.INK, PdfLayout.LEFT + 12, ty, line);
-            ty -= size + 2.6f;
+            boolean continuation = !line.startsWith("•");
+            l.text(l.fonts.regular, size, PdfLayout.INK, PdfLayout.LEFT + (continuation ? 21 : 12), ty, line);
+            ty -= leading;
         }
         l.y -= h + 6;
     }
@@ -303,11 +346,26 @@ public final class RecordPdf {
             return;
         }
         l.heading("Data sources");
-        List<String[]> rows = new ArrayList<>();
+        float size = 6.6f;
+        float width = PdfLayout.RIGHT - PdfLayout.LEFT;
         for (Map.Entry<String, JsonNode> e : (Iterable<Map.Entry<String, JsonNode>>) src::fields) {
-            rows.add(new String[] {e.getKey(), citation(e.getValue().asText())});
+            // one line per source: the key in bold, the citation cut to the line (the snapshot keeps it whole)
+            String key = e.getKey();
+            float keyWidth = l.width(l.fonts.bold, size, key + "  ");
+            String text = citation(e.getValue().asText());
+            while (text.length() > 20 && l.width(l.fonts.regular, size, text) > width - keyWidth) {
+                int cut = text.lastIndexOf(' ', text.length() - 8);
+                text = text.substring(0, cut > 20 ? cut : text.length() - 8).replaceAll("[ ,;:(—–-]+$", "") + " […]";
+                text = text.replace(" […] […]", " […]");
+            }
+            l.ensure(size + 4);
+            l.y -= size + 3;
+            l.text(l.fonts.bold, size, PdfLayout.INK, PdfLayout.LEFT, l.y, key);
+            l.text(l.fonts.regular, size, PdfLayout.INK, PdfLayout.LEFT + keyWidth, l.y, text);
         }
-        l.table(new float[] {0.2f, 0.8f}, rows, false, false, 6.8f);
+        l.y -= 4;
+        l.paragraph("Citations are shortened here; the full text is filed in the record's evidence (cohesa record show ID --json).",
+                6.6f, PdfLayout.MUTED);
     }
 
     private static void footers(PDDocument doc, PdfFonts fonts, SubstitutionRecord r, String lastEventHash, String appVersion) throws IOException {
@@ -341,19 +399,20 @@ public final class RecordPdf {
         cs.endText();
     }
 
-    /** A citation as plain text (the catalogue is Markdown), cut at a sentence end near 300 characters. */
+    /**
+     * A citation as plain text (the catalogue is Markdown), cut at a word near {@value #CITATION_CHARS} characters:
+     * enough to find the source; the full text stays in the record's evidence snapshot.
+     */
     static String citation(String markdown) {
         String plain = markdown.replace("**", "").replace("*", "").replace("`", "").strip();
-        if (plain.length() <= 300) {
+        if (plain.length() <= CITATION_CHARS) {
             return plain;
         }
-        int cut = plain.lastIndexOf(". ", 300);
-        if (cut < 120) {
-            cut = plain.lastIndexOf(' ', 280);
-            return plain.substring(0, cut) + " […]";
-        }
-        return plain.substring(0, cut + 1) + " […]";
+        int cut = plain.lastIndexOf(' ', CITATION_CHARS);
+        return plain.substring(0, cut > 60 ? cut : CITATION_CHARS).replaceAll("[,;:(—–-]+$", "") + " […]";
     }
+
+    private static final int CITATION_CHARS = 170;
 
     static String n(JsonNode v, int decimals) {
         if (v == null || v.isNull() || !v.isNumber()) {

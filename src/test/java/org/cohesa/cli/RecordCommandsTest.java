@@ -77,7 +77,16 @@ class RecordCommandsTest {
         assertEquals(2, ev.get("replacement").get("components").size());
         assertTrue(ev.get("data_sources").size() > 0);
         assertFalse(ev.get("app_version").asText().isBlank());
-        assertTrue(ev.get("cautions").get(0).asText().contains("safety data sheet"));
+        // the safety workflow's profile is filed: toluene, flash point 4 °C (IEC 60079-20-1) and boiling point 110.6 °C (CRC)
+        // → GHS Rev. 10 Table 2.6.1: flash point < 23 °C and initial boiling point > 35 °C = Category 2; UN packing group II
+        JsonNode safety = ev.get("safety").get("replaced");
+        assertEquals("Category 2", safety.get("ghs_flammable_category").asText());
+        assertEquals("II", safety.get("packing_group").asText());
+        assertTrue(safety.get("cmr").toString().contains("H361d"), safety.toString());
+        assertTrue(ev.get("safety").get("replacement").has("flash_point_c"), "a blend flash point is filed");
+        JsonNode cautions = ev.get("cautions");
+        assertTrue(cautions.size() > 1);
+        assertTrue(cautions.get(cautions.size() - 1).asText().contains("screening estimates"), cautions.toString());
     }
 
     @Test
@@ -165,7 +174,7 @@ class RecordCommandsTest {
             for (String fact : List.of("Record No. 1", "APPROVED", "Enamel thinner, line 2", "toluene", "ethyl acetate", "methanol",
                     "regulatory: reprotoxic aromatic", "M. Manager", "lab trials passed", "Q. Reviewer", "A. Chemist",
                     "1.38", // RED of toluene to (18, 9, 8, 7): √93.76 / 7 = 1.383 (Hansen 2007 Ra formula, see showJson test)
-                    "H225", "Ontario", "safety data sheet", "Data sources", "Status history", "Drying path")) {
+                    "H225", "Ontario", "Category 2", "screening estimates", "Data sources", "Status history", "Drying path")) {
                 assertTrue(text.contains(fact), "missing '" + fact + "' in\n" + text);
             }
             assertTrue(text.contains("δD") || text.contains("dD"), "the parameter names print");

@@ -1,0 +1,41 @@
+package org.cohesa.core.records;
+
+import java.util.Map;
+import org.cohesa.core.safety.SafetyProfile;
+import org.cohesa.core.safety.SafetyProfiler;
+import org.cohesa.core.solvent.Blend;
+
+/**
+ * Takes the whole evidence snapshot for a substitution from the workflows: liquids, target, Ra/RED
+ * ({@link EvidenceBuilder}), the safety profile and cautions of both liquids ({@code org.cohesa.core.safety}).
+ * A workflow that cannot describe a liquid leaves a note in its section instead of failing the filing.
+ */
+public final class EvidenceAssembler {
+
+    /** Temperature of the filed safety profile (exposure estimate), K: 25 °C, the usual reference. */
+    public static final double PROFILE_KELVIN = 298.15;
+
+    private EvidenceAssembler() {
+    }
+
+    /**
+     * @param target     the material that must stay dissolved, or null
+     * @param citations  source key → citation (the bundled catalogue)
+     * @param appVersion the program version, filed with the snapshot
+     */
+    public static Evidence assemble(Blend replaced, Blend replacement, TargetRef target, Map<String, String> citations, String appVersion) {
+        EvidenceBuilder b = new EvidenceBuilder(replaced, replacement, appVersion).citations(citations);
+        if (target != null) {
+            b.target(target);
+        }
+        try {
+            SafetyProfile a = SafetyProfiler.profile(replaced, PROFILE_KELVIN);
+            SafetyProfile z = SafetyProfiler.profile(replacement, PROFILE_KELVIN);
+            b.section(Evidence.Sections.SAFETY, SafetyEvidence.section(a, z));
+            b.cautions(SafetyEvidence.cautions(a, z));
+        } catch (IllegalArgumentException | IllegalStateException e) {
+            b.section(Evidence.Sections.SAFETY, CanonicalJson.object().put("note", "no safety profile: " + e.getMessage()));
+        }
+        return b.build();
+    }
+}
