@@ -16,12 +16,14 @@ import org.cohesa.core.records.Evidence;
  */
 final class DryingChart {
 
-    private static final float HEIGHT = 150;
+    private static final float HEIGHT = 100;
 
     private DryingChart() {
     }
 
     static void draw(PdfLayout l, Evidence ev) throws IOException {
+        // heading and chart stay together
+        l.ensure(HEIGHT + 80);
         l.heading("Drying path");
         JsonNode drying = ev.section(Evidence.Sections.DRYING).orElse(null);
         if (drying == null || !drying.path("series").isArray() || drying.path("series").isEmpty()) {
@@ -41,7 +43,8 @@ final class DryingChart {
             }
             if (!pts.isEmpty()) {
                 boolean replaced = Evidence.Sections.REPLACED.equals(s.path("liquid").asText());
-                series.add(new Series(s.path("liquid").asText() + ": " + s.path("notation").asText(), pts,
+                String name = ev.section(s.path("liquid").asText()).map(RecordPdf::liquidName).orElse(s.path("notation").asText());
+                series.add(new Series(s.path("liquid").asText() + ": " + name, pts,
                         replaced ? RecordPdf.VERMILLION : RecordPdf.BLUE, replaced));
             }
         }
@@ -53,15 +56,15 @@ final class DryingChart {
             l.paragraph("No RED along the path (no target sphere was given). " + String.join("; ", notes) + ".", 9, PdfLayout.INK);
             return;
         }
-        double yMax = Math.ceil(maxRed * 1.1 * 4) / 4;
-        l.ensure(HEIGHT + 60);
+        double yMax = Math.ceil(maxRed * 1.05 / 0.5) * 0.5;
+        int ticks = (int) Math.round(yMax / (yMax <= 2 ? 0.25 : 0.5));
         float x0 = PdfLayout.LEFT + 34;
         float x1 = PdfLayout.RIGHT - 150;
         float top = l.y - 6;
         float bottom = top - HEIGHT;
         // frame and grid
-        for (int i = 0; i <= 4; i++) {
-            double v = yMax * i / 4;
+        for (int i = 0; i <= ticks; i++) {
+            double v = yMax * i / ticks;
             float gy = (float) (bottom + HEIGHT * v / yMax);
             l.line(x0, gy, x1, gy, PdfLayout.SHADE, 0.6f);
             l.text(l.fonts.regular, 7, PdfLayout.MUTED, x0 - 24, gy - 2.5f, String.format(Locale.ROOT, "%.2f", v));
@@ -77,7 +80,8 @@ final class DryingChart {
         l.stream().setLineDashPattern(new float[] {4, 3}, 0);
         l.line(x0, oneY, x1, oneY, PdfLayout.INK, 0.8f);
         l.stream().setLineDashPattern(new float[] {}, 0);
-        l.text(l.fonts.regular, 7, PdfLayout.INK, x1 + 4, oneY - 2.5f, "RED = 1 (sphere surface)");
+        String surface = "RED = 1: sphere surface";
+        l.text(l.fonts.regular, 6.5f, PdfLayout.INK, x1 - l.width(l.fonts.regular, 6.5f, surface) - 3, oneY + 2.5f, surface);
         for (Series s : series) {
             l.stream().setStrokingColor(s.color);
             l.stream().setLineWidth(1.6f);
@@ -101,9 +105,13 @@ final class DryingChart {
         // axis titles and legend
         l.text(l.fonts.regular, 7.5f, PdfLayout.MUTED, x0, bottom - 23, "volume of the liquid evaporated");
         l.text(l.fonts.regular, 7.5f, PdfLayout.MUTED, x0 - 30, top + 5, "RED to target");
-        float ly = top - 30;
+        float ly = top - 8;
         for (Series s : series) {
+            if (s.dashed) {
+                l.stream().setLineDashPattern(new float[] {2, 2}, 0);
+            }
             l.line(x1 + 4, ly + 2.5f, x1 + 20, ly + 2.5f, s.color, 1.6f);
+            l.stream().setLineDashPattern(new float[] {}, 0);
             for (String line : l.wrap(l.fonts.regular, 7, s.label, 120)) {
                 l.text(l.fonts.regular, 7, PdfLayout.INK, x1 + 24, ly, line);
                 ly -= 9;
@@ -114,8 +122,10 @@ final class DryingChart {
         List<String> notes = new ArrayList<>();
         for (JsonNode s : drying.get("series")) {
             JsonNode at = s.get("leaves_sphere_at");
-            notes.add(s.path("liquid").asText() + ": " + (at == null || at.isNull() ? "stays inside the sphere to the end of the path"
-                    : "leaves the sphere after " + String.format(Locale.ROOT, "%.0f %%", at.doubleValue() * 100) + " has evaporated")
+            String path = at == null || at.isNull() ? "stays inside the sphere to the end of the path"
+                    : at.doubleValue() <= 0 ? "starts outside the sphere"
+                    : "leaves the sphere after " + String.format(Locale.ROOT, "%.0f %%", at.doubleValue() * 100) + " has evaporated";
+            notes.add(s.path("liquid").asText() + ": " + path
                     + (s.hasNonNull("last_solvent") ? "; last to evaporate: " + s.get("last_solvent").asText() : ""));
         }
         String model = drying.hasNonNull("model") ? "Model: " + drying.get("model").asText()

@@ -84,6 +84,16 @@ class RecordCommandsTest {
         assertEquals("II", safety.get("packing_group").asText());
         assertTrue(safety.get("cmr").toString().contains("H361d"), safety.toString());
         assertTrue(ev.get("safety").get("replacement").has("flash_point_c"), "a blend flash point is filed");
+        // the drying workflow's paths are filed for both liquids (25 °C, to 95 % evaporated)
+        JsonNode series = ev.get("drying").get("series");
+        assertEquals(2, series.size());
+        assertEquals("replaced", series.get(0).get("liquid").asText());
+        assertEquals("toluene", series.get(0).get("last_solvent").asText());
+        // a pure liquid keeps its parameters while it evaporates, so its RED stays that of the can (Hansen 2007 mixing rule)
+        for (JsonNode p : series.get(0).get("points")) {
+            assertEquals(Math.sqrt(93.76) / 7, p.get(1).asDouble(), 1e-6);
+        }
+        assertTrue(series.get(1).get("points").size() > 5);
         JsonNode cautions = ev.get("cautions");
         assertTrue(cautions.size() > 1);
         assertTrue(cautions.get(cautions.size() - 1).asText().contains("screening estimates"), cautions.toString());
@@ -174,7 +184,7 @@ class RecordCommandsTest {
             for (String fact : List.of("Record No. 1", "APPROVED", "Enamel thinner, line 2", "toluene", "ethyl acetate", "methanol",
                     "regulatory: reprotoxic aromatic", "M. Manager", "lab trials passed", "Q. Reviewer", "A. Chemist",
                     "1.38", // RED of toluene to (18, 9, 8, 7): √93.76 / 7 = 1.383 (Hansen 2007 Ra formula, see showJson test)
-                    "H225", "Ontario", "Category 2", "screening estimates", "Data sources", "Status history", "Drying path")) {
+                    "H225", "Ontario", "Category 2", "screening estimates", "Data sources", "Status history", "Drying path", "last to evaporate")) {
                 assertTrue(text.contains(fact), "missing '" + fact + "' in\n" + text);
             }
             assertTrue(text.contains("δD") || text.contains("dD"), "the parameter names print");
@@ -193,6 +203,7 @@ class RecordCommandsTest {
             assertEquals("M. Manager", rows.get(0).get("decided_by"));
             assertEquals("1,4-dioxane:0.3,water:0.7", rows.get(1).get("replaced"), "a name with commas survives as one quoted field");
             assertEquals("", rows.get(1).get("red_replaced"), "no target, no RED");
+            assertTrue(run("record", "show", "2", "--json").json().get("evidence").get("drying").get("note").asText().contains("no target"));
         }
     }
 

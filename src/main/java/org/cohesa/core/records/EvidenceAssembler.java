@@ -1,13 +1,17 @@
 package org.cohesa.core.records;
 
 import java.util.Map;
+import org.cohesa.core.drying.DryingPath;
+import org.cohesa.core.drying.DryingRequest;
+import org.cohesa.core.drying.DryingSimulator;
 import org.cohesa.core.safety.SafetyProfile;
 import org.cohesa.core.safety.SafetyProfiler;
 import org.cohesa.core.solvent.Blend;
 
 /**
  * Takes the whole evidence snapshot for a substitution from the workflows: liquids, target, Ra/RED
- * ({@link EvidenceBuilder}), the safety profile and cautions of both liquids ({@code org.cohesa.core.safety}).
+ * ({@link EvidenceBuilder}), the safety profile and cautions of both liquids ({@code org.cohesa.core.safety}) and,
+ * with a target, both liquids' drying paths at 25 °C to 95 % evaporated ({@code org.cohesa.core.drying} defaults).
  * A workflow that cannot describe a liquid leaves a note in its section instead of failing the filing.
  */
 public final class EvidenceAssembler {
@@ -35,6 +39,19 @@ public final class EvidenceAssembler {
             b.cautions(SafetyEvidence.cautions(a, z));
         } catch (IllegalArgumentException | IllegalStateException e) {
             b.section(Evidence.Sections.SAFETY, CanonicalJson.object().put("note", "no safety profile: " + e.getMessage()));
+        }
+        if (target != null) {
+            try {
+                DryingPath a = DryingSimulator.simulate(DryingRequest.of(replaced, target.sphere()));
+                DryingPath z = DryingSimulator.simulate(DryingRequest.of(replacement, target.sphere()));
+                b.section(Evidence.Sections.DRYING, DryingEvidence.section(a, z, replaced.describe(), replacement.describe(),
+                        DryingRequest.DEFAULT_KELVIN - 273.15));
+            } catch (IllegalArgumentException | IllegalStateException e) {
+                b.section(Evidence.Sections.DRYING, CanonicalJson.object().put("note", "no drying path: " + e.getMessage()));
+            }
+        } else {
+            b.section(Evidence.Sections.DRYING, CanonicalJson.object()
+                    .put("note", "No drying path: it is followed as RED to a target, and no target was given."));
         }
         return b.build();
     }
