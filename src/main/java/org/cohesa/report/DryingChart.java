@@ -16,14 +16,15 @@ import org.cohesa.core.records.Evidence;
  */
 final class DryingChart {
 
-    private static final float HEIGHT = 100;
+    private static final float NOMINAL_HEIGHT = 100;
 
     private DryingChart() {
     }
 
     static void draw(PdfLayout l, Evidence ev) throws IOException {
+        float height = NOMINAL_HEIGHT * l.scale;
         // heading and chart stay together
-        l.ensure(HEIGHT + 80);
+        l.ensure(height + 80);
         l.heading("Drying path");
         JsonNode drying = ev.section(Evidence.Sections.DRYING).orElse(null);
         if (drying == null || !drying.path("series").isArray() || drying.path("series").isEmpty()) {
@@ -61,11 +62,11 @@ final class DryingChart {
         float x0 = PdfLayout.LEFT + 34;
         float x1 = PdfLayout.RIGHT - 150;
         float top = l.y - 6;
-        float bottom = top - HEIGHT;
+        float bottom = top - height;
         // frame and grid
         for (int i = 0; i <= ticks; i++) {
             double v = yMax * i / ticks;
-            float gy = (float) (bottom + HEIGHT * v / yMax);
+            float gy = (float) (bottom + height * v / yMax);
             l.line(x0, gy, x1, gy, PdfLayout.SHADE, 0.6f);
             l.text(l.fonts.regular, 7, PdfLayout.MUTED, x0 - 24, gy - 2.5f, String.format(Locale.ROOT, "%.2f", v));
         }
@@ -74,9 +75,9 @@ final class DryingChart {
             l.line(gx, bottom, gx, bottom - 3, PdfLayout.MUTED, 0.6f);
             l.text(l.fonts.regular, 7, PdfLayout.MUTED, gx - 6, bottom - 12, pct + " %");
         }
-        l.strokeRect(x0, bottom, x1 - x0, HEIGHT, PdfLayout.RULE, 0.8f);
+        l.strokeRect(x0, bottom, x1 - x0, height, PdfLayout.RULE, 0.8f);
         // the sphere's surface
-        float oneY = (float) (bottom + HEIGHT / yMax);
+        float oneY = (float) (bottom + height / yMax);
         l.stream().setLineDashPattern(new float[] {4, 3}, 0);
         l.line(x0, oneY, x1, oneY, PdfLayout.INK, 0.8f);
         l.stream().setLineDashPattern(new float[] {}, 0);
@@ -91,7 +92,7 @@ final class DryingChart {
             boolean first = true;
             for (double[] p : s.points) {
                 float px = (float) (x0 + (x1 - x0) * Math.min(1, Math.max(0, p[0])));
-                float py = (float) (bottom + HEIGHT * Math.min(yMax, p[1]) / yMax);
+                float py = (float) (bottom + height * Math.min(yMax, p[1]) / yMax);
                 if (first) {
                     l.stream().moveTo(px, py);
                     first = false;

@@ -27,13 +27,16 @@ final class PdfLayout implements AutoCloseable {
 
     final PDDocument doc;
     final PdfFonts fonts;
+    /** Multiplies body text sizes; below 1 when a long record is set tighter to stay on two pages. */
+    final float scale;
     private final List<PDPage> pages = new ArrayList<>();
     private PDPageContentStream cs;
     float y;
 
-    PdfLayout(PDDocument doc, PdfFonts fonts) throws IOException {
+    PdfLayout(PDDocument doc, PdfFonts fonts, float scale) throws IOException {
         this.doc = doc;
         this.fonts = fonts;
+        this.scale = scale;
         newPage();
     }
 
@@ -121,7 +124,8 @@ final class PdfLayout implements AutoCloseable {
         y -= 8;
     }
 
-    void paragraph(String text, float size, Color color) throws IOException {
+    void paragraph(String text, float nominalSize, Color color) throws IOException {
+        float size = nominalSize * scale;
         for (String l : wrap(fonts.regular, size, text, RIGHT - LEFT)) {
             ensure(size + 3);
             y -= size + 2.5f;
@@ -155,9 +159,10 @@ final class PdfLayout implements AutoCloseable {
      * A ruled table. {@code widths} are fractions of the text width; the first row is the header when
      * {@code header} is true; cells in the first column are bold when {@code labelColumn} is true.
      */
-    void table(float[] widths, List<String[]> rows, boolean header, boolean labelColumn, float size) throws IOException {
+    void table(float[] widths, List<String[]> rows, boolean header, boolean labelColumn, float nominalSize) throws IOException {
+        float size = nominalSize * scale;
         float total = RIGHT - LEFT;
-        float pad = 3.5f;
+        float pad = 3.5f * scale;
         float leading = size + 2.6f;
         for (int r = 0; r < rows.size(); r++) {
             String[] row = rows.get(r);

@@ -54,10 +54,25 @@ public final class RecordPdf {
     /** @param systemFonts false forces the built-in font (to test the fallback) */
     public static void write(SubstitutionRecord r, String lastEventHash, ChainReport chain, String appVersion, Path file,
                              boolean systemFonts) throws IOException {
-        try (PDDocument doc = new PDDocument()) {
+        // a long record (many hazards, many sources) is set a little tighter rather than spill onto a third page
+        float[] scales = {1f, 0.92f, 0.85f};
+        for (int i = 0; i < scales.length; i++) {
+            try (PDDocument doc = render(r, lastEventHash, chain, appVersion, systemFonts, scales[i])) {
+                if (doc.getNumberOfPages() <= 2 || i == scales.length - 1) {
+                    doc.save(file.toFile());
+                    return;
+                }
+            }
+        }
+    }
+
+    private static PDDocument render(SubstitutionRecord r, String lastEventHash, ChainReport chain, String appVersion, boolean systemFonts,
+                                     float scale) throws IOException {
+        PDDocument doc = new PDDocument();
+        try {
             PdfFonts fonts = PdfFonts.load(doc, systemFonts);
             info(doc, r);
-            try (PdfLayout l = new PdfLayout(doc, fonts)) {
+            try (PdfLayout l = new PdfLayout(doc, fonts, scale)) {
                 title(l, r);
                 summary(l, r, chain);
                 liquids(l, r.evidence());
@@ -67,7 +82,10 @@ public final class RecordPdf {
                 sources(l, r.evidence());
             }
             footers(doc, fonts, r, lastEventHash, appVersion);
-            doc.save(file.toFile());
+            return doc;
+        } catch (IOException | RuntimeException e) {
+            doc.close();
+            throw e;
         }
     }
 
@@ -321,8 +339,8 @@ public final class RecordPdf {
         if (texts.isEmpty()) {
             return;
         }
-        float size = 8.2f;
-        float leading = size + 2.2f;
+        float size = 8.2f * l.scale;
+        float leading = size + 2.2f * l.scale;
         List<String> lines = new ArrayList<>();
         for (String t : texts) {
             lines.addAll(l.wrap(l.fonts.regular, size, "•  " + t, PdfLayout.RIGHT - PdfLayout.LEFT - 20));
@@ -346,7 +364,7 @@ public final class RecordPdf {
             return;
         }
         l.heading("Data sources");
-        float size = 6.6f;
+        float size = 6.6f * l.scale;
         float width = PdfLayout.RIGHT - PdfLayout.LEFT;
         for (Map.Entry<String, JsonNode> e : (Iterable<Map.Entry<String, JsonNode>>) src::fields) {
             // one line per source: the key in bold, the citation cut to the line (the snapshot keeps it whole)
@@ -359,7 +377,7 @@ public final class RecordPdf {
                 text = text.replace(" […] […]", " […]");
             }
             l.ensure(size + 4);
-            l.y -= size + 3;
+            l.y -= size + 2.5f * l.scale;
             l.text(l.fonts.bold, size, PdfLayout.INK, PdfLayout.LEFT, l.y, key);
             l.text(l.fonts.regular, size, PdfLayout.INK, PdfLayout.LEFT + keyWidth, l.y, text);
         }
