@@ -11,7 +11,7 @@ import picocli.CommandLine.ScopeType;
  * The {@code cohesa} command line. Exit codes: 0 success, 1 failure of the program or the database,
  * 2 bad input (unknown solvent, malformed number, bad file).
  */
-@Command(name = "cohesa", mixinStandardHelpOptions = true, versionProvider = CohesaCommand.Version.class,
+@Command(name = "cohesa", mixinStandardHelpOptions = true, scope = ScopeType.INHERIT, versionProvider = CohesaCommand.Version.class,
         description = "Choose solvents and blends with Hansen solubility parameters, screen them for safety, record substitutions.%n"
                 + "Results are screening estimates: the supplier's SDS, local codes and your site's licensed safety professionals decide.",
         exitCodeListHeading = "%nExit codes:%n",

@@ -18,7 +18,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 /** {@code cohesa hazards}: the safety and compliance profile of one solvent or a blend. */
-@Command(name = "hazards", mixinStandardHelpOptions = true, description = {
+@Command(name = "hazards", description = {
         "Safety and compliance profile of a solvent or blend: flash point, GHS flammable-liquid category, UN packing group,",
         "hazard statements, CMR flags, saturated-vapour exposure, ICH Q3C(R8) class and the CHEM21 solvent-guide rank.",
         "Results are screening estimates: the supplier's SDS, local codes and your site's licensed safety professionals decide."})

@@ -157,4 +157,15 @@ class FoundationCommandsTest {
         assertTrue(run("solvent", "toluene", "--json").json().get("price_per_litre").isNull());
         assertEquals(2, run("solvents", "price", "toluene", "-1").exitCode());
     }
+
+    @Test
+    void everyCommandAnswersHelp() {
+        for (String[] cmd : new String[][] {{"solvents", "--help"}, {"solvent", "--help"}, {"distance", "--help"}, {"cohesion", "--help"},
+                {"solvents", "import", "--help"}, {"hazards", "--help"}, {"blend", "--help"}, {"dry", "--help"}, {"fit", "--help"},
+                {"record", "add", "--help"}, {"bench", "blend", "--help"}}) {
+            Result r = run(cmd);
+            assertEquals(0, r.exitCode(), String.join(" ", cmd) + ": " + r.err());
+            assertTrue(r.out().contains("Usage: cohesa"), String.join(" ", cmd) + ": " + r.out());
+        }
+    }
 }
