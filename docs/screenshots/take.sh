@@ -14,6 +14,7 @@ shot() {   # shot NAME ARGS...
 target="--target=18.5,9,8,8"   # an invented demo sphere
 shot library --screen=library --select=toluene
 shot target --screen=target "$target"
+shot blends --screen=blends "$target" --search=3
 shot drying --screen=drying "$target" "--blend=acetone:0.3,n-butyl acetate:0.4,toluene:0.3"
 shot space-3d --screen=space --view=3d "$target" --select=toluene "--blend=acetone:0.3,n-butyl acetate:0.4,toluene:0.3"
 shot space-p-h --screen=space --view=p-h "$target" --select=toluene

@@ -90,7 +90,15 @@ public final class CohesaApp extends Application {
         if (opts.view() >= 0) {
             workbench.spaceView().showView(opts.view());
         }
-        if (opts.blend() != null) {
+        if (opts.search() > 0) {
+            workbench.blendModel().maxComponents.set(opts.search());
+            try {
+                workbench.blendModel().search(() -> finish(opts, scene));
+            } catch (RuntimeException e) {
+                System.err.println("error: " + ErrorText.of(e));
+                finish(opts, scene);
+            }
+        } else if (opts.blend() != null) {
             workbench.dryingModel().blendTextProperty().set(opts.blend());
             workbench.dryingModel().run(() -> finish(opts, scene), () -> finish(opts, scene));
         } else {

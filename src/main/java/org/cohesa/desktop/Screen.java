@@ -6,6 +6,7 @@ import java.util.Locale;
 public enum Screen {
     LIBRARY("library", "Library"),
     TARGET("target", "Target"),
+    BLENDS("blends", "Blend design"),
     DRYING("drying", "Drying"),
     SPACE("space", "Parameter space"),
     RECORDS("register", "Register");

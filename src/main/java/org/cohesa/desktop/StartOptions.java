@@ -12,17 +12,33 @@ import org.cohesa.core.hsp.SolubilitySphere;
  * {@code --view=3d|p-h|d-p|d-h|teas} (which plot on the parameter-space screen),
  * {@code --target=dD,dP,dH,R0} (start with this sphere), {@code --select=NAME} (select a solvent),
  * {@code --measure-frames=N} (rotate the 3D view with N points, print frame times, exit),
- * {@code --blend=NAME:FRACTION,...} (compute this blend's drying path and safety profile at start).
+ * {@code --blend=NAME:FRACTION,...} (compute this blend's drying path and safety profile at start),
+ * {@code --search=K} (run the blend search with up to K components against the target at start).
  */
 public record StartOptions(Path screenshot, Screen screen, int view, SolubilitySphere target, String select, int measurePoints,
-                           String blend) {
+                           String blend, int search) {
 
-    static final List<String> NAMES = List.of("screenshot", "screen", "view", "target", "select", "measure-frames", "blend");
+    static final List<String> NAMES = List.of("screenshot", "screen", "view", "target", "select", "measure-frames", "blend", "search");
     private static final List<String> VIEWS = List.of("3d", "p-h", "d-p", "d-h", "teas");
 
     /** True for an argument the desktop app understands (the launcher sends everything else to the command line). */
     public static boolean isDesktopOption(String arg) {
         return NAMES.stream().anyMatch(n -> arg.startsWith("--" + n + "="));
+    }
+
+    private static int search(String k) {
+        if (k == null) {
+            return 0;
+        }
+        try {
+            int v = Integer.parseInt(k.strip());
+            if (v >= 1 && v <= 4) {
+                return v;
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new InvalidInputException("--search", k, "give the most components, 1 to 4");
     }
 
     /** @throws InvalidInputException naming the bad option */
@@ -67,6 +83,6 @@ public record StartOptions(Path screenshot, Screen screen, int view, SolubilityS
                 throw new InvalidInputException("--measure-frames", named.get("measure-frames"), "give the number of points, 1 to 100000");
             }
         }
-        return new StartOptions(shot == null ? null : Path.of(shot), screen, view, target, named.get("select"), points, named.get("blend"));
+        return new StartOptions(shot == null ? null : Path.of(shot), screen, view, target, named.get("select"), points, named.get("blend"), search(named.get("search")));
     }
 }

@@ -26,6 +26,8 @@ import org.cohesa.desktop.common.Dialogs;
 import org.cohesa.desktop.common.Session;
 import org.cohesa.desktop.common.Settings;
 import org.cohesa.desktop.common.TargetChoice;
+import org.cohesa.desktop.blend.BlendModel;
+import org.cohesa.desktop.blend.BlendView;
 import org.cohesa.desktop.drying.DryingModel;
 import org.cohesa.desktop.drying.DryingView;
 import org.cohesa.desktop.library.LibraryModel;
@@ -60,6 +62,7 @@ public final class Workbench {
     private final SpaceView spaceView;
     private final DryingModel dryingModel;
     private final RecordsModel recordsModel;
+    private final BlendModel blendModel;
 
     public Workbench(Session session, SceneAntialiasing antialiasing) {
         this.session = session;
@@ -72,6 +75,8 @@ public final class Workbench {
         addScreen(Screen.LIBRARY, libraryView.node());
         addScreen(Screen.TARGET, targetView.node());
         dryingModel = new DryingModel(session);
+        blendModel = new BlendModel(session);
+        addScreen(Screen.BLENDS, new BlendView(blendModel, this::openDrying).node());
         addScreen(Screen.DRYING, new DryingView(dryingModel).node());
         addScreen(Screen.SPACE, spaceView.node());
         recordsModel = new RecordsModel(session);
@@ -101,6 +106,21 @@ public final class Workbench {
 
     public LibraryView libraryView() {
         return libraryView;
+    }
+
+    public BlendModel blendModel() {
+        return blendModel;
+    }
+
+    /** Shows a blend's drying path: the drying screen, computed at once. */
+    public void openDrying(org.cohesa.core.solvent.Blend b) {
+        dryingModel.blendTextProperty().set(b.describe());
+        show(Screen.DRYING);
+        try {
+            dryingModel.run(null);
+        } catch (RuntimeException ex) {
+            session.jobs().complain(org.cohesa.desktop.common.ErrorText.of(ex));
+        }
     }
 
     public RecordsModel recordsModel() {

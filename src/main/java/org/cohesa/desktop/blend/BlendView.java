@@ -1,0 +1,300 @@
+package org.cohesa.desktop.blend;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Consumer;
+import java.util.stream.Collectors;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.geometry.Insets;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.CheckBox;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.SelectionMode;
+import javafx.scene.control.Spinner;
+import javafx.scene.control.SplitPane;
+import javafx.scene.control.Tab;
+import javafx.scene.control.TabPane;
+import javafx.scene.control.TableCell;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableView;
+import javafx.scene.control.TextArea;
+import javafx.scene.control.TextField;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.VBox;
+import org.cohesa.core.blend.RankBy;
+import org.cohesa.core.solvent.Blend;
+import org.cohesa.core.solvent.BlendComponent;
+import org.cohesa.desktop.common.Columns;
+import org.cohesa.desktop.common.ErrorText;
+import org.cohesa.desktop.common.Numbers;
+import org.cohesa.desktop.common.SafetyText;
+import org.cohesa.desktop.common.TableTools;
+
+/**
+ * The blend-design screen: the constraints as a form, the ranked suggestions (parameters, RED, blend flash
+ * point, ICH classes, a caution badge, the phase test), the selected blend's full safety profile, and up to
+ * four blends compared side by side.
+ */
+public final class BlendView {
+
+    private final BlendModel model;
+    private final BorderPane root = new BorderPane();
+    private final TableView<BlendModel.Row> table = new TableView<>();
+    private final TextArea details = new TextArea();
+    private final TableView<List<String>> comparison = new TableView<>();
+    private final TabPane right = new TabPane();
+    private final Consumer<Blend> showDrying;
+
+    /** @param showDrying opens the drying screen for a blend */
+    public BlendView(BlendModel model, Consumer<Blend> showDrying) {
+        this.model = model;
+        this.showDrying = showDrying;
+        root.setId("blend-screen");
+        root.setLeft(form());
+        table.setId("blend-table");
+        table.setItems(model.rows());
+        table.getColumns().addAll(List.of(
+                Columns.<BlendModel.Row>number("#", r -> (double) r.rank(), 40, 0),
+                Columns.<BlendModel.Row>text("Blend (volume %)", r -> percentText(r.blend()), 250),
+                Columns.<BlendModel.Row>number("δD", r -> r.suggestion().blend().point().dD(), 52, 1),
+                Columns.<BlendModel.Row>number("δP", r -> r.suggestion().blend().point().dP(), 52, 1),
+                Columns.<BlendModel.Row>number("δH", r -> r.suggestion().blend().point().dH(), 52, 1),
+                Columns.<BlendModel.Row>number("RED", r -> r.suggestion().blend().red(), 56, 2),
+                Columns.<BlendModel.Row>number("Flash pt (°C)", r -> r.safety() == null ? null : r.safety().flashPoint().celsius(), 100, 0),
+                Columns.<BlendModel.Row>text("ICH", r -> ichText(r.blend()), 60),
+                cautionColumn(),
+                Columns.<BlendModel.Row>text("Phases", BlendView::phaseText, 110)));
+        table.setPlaceholder(new Label("Set a target, then Search: suggestions appear here, best first."));
+        table.getSelectionModel().setSelectionMode(SelectionMode.MULTIPLE);
+        TableTools.equip(table, () -> { });
+        table.getSelectionModel().setSelectionMode(SelectionMode.MULTIPLE);
+        model.rows().addListener((javafx.collections.ListChangeListener<BlendModel.Row>) ch -> {
+            if (!model.rows().isEmpty()) {
+                table.getSelectionModel().clearAndSelect(0);
+            }
+        });
+        table.getSelectionModel().selectedItemProperty().addListener((o, a, r) -> {
+            details.setText(r == null ? "" : describe(r));
+            if (r != null) {
+                model.session().selectedBlendProperty().set(r.blend());
+            }
+        });
+        details.setId("blend-details");
+        details.setEditable(false);
+        details.setWrapText(true);
+        details.getStyleClass().add("details");
+        Button drying = new Button("Show its _drying path");
+        drying.setId("blend-drying");
+        drying.disableProperty().bind(table.getSelectionModel().selectedItemProperty().isNull());
+        drying.setOnAction(e -> showDrying.accept(table.getSelectionModel().getSelectedItem().blend()));
+        Button compare = new Button("C_ompare selected (up to 4)");
+        compare.setId("blend-compare");
+        compare.setOnAction(e -> compareSelected());
+        VBox profile = new VBox(6, new HBox(8, drying, compare), details);
+        profile.setPadding(new Insets(6));
+        javafx.scene.layout.VBox.setVgrow(details, javafx.scene.layout.Priority.ALWAYS);
+        comparison.setId("blend-comparison");
+        comparison.setPlaceholder(new Label("Select up to four suggestions (Ctrl+click) and press Compare."));
+        TableTools.equip(comparison, () -> { });
+        right.getTabs().addAll(new Tab("Safety profile", profile), new Tab("Side by side", comparison));
+        right.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        right.getTabs().get(1).setId("blend-compare-tab");
+        SplitPane split = new SplitPane(table, right);
+        split.setDividerPositions(0.66);
+        root.setCenter(split);
+    }
+
+    public Node node() {
+        return root;
+    }
+
+    private Node form() {
+        GridPane g = new GridPane();
+        g.setHgap(8);
+        g.setVgap(6);
+        int row = 0;
+        Spinner<Integer> k = new Spinner<>(1, 4, model.maxComponents.get());
+        k.getValueFactory().valueProperty().bindBidirectional(model.maxComponents);
+        k.setId("blend-max-components");
+        k.setPrefWidth(80);
+        Spinner<Integer> top = new Spinner<>(1, 100, model.top.get());
+        top.getValueFactory().valueProperty().bindBidirectional(model.top);
+        top.setPrefWidth(80);
+        top.setEditable(true);
+        ComboBox<RankBy> rank = new ComboBox<>();
+        rank.getItems().setAll(RankBy.values());
+        rank.valueProperty().bindBidirectional(model.rankBy);
+        ComboBox<String> ich = new ComboBox<>();
+        ich.getItems().setAll("any", "2 or 3 (no class 1)", "3 only");
+        ich.valueProperty().bindBidirectional(model.maxIchClass);
+        CheckBox cmr = new CheckBox("Leave out carcinogens, mutagens, reprotoxics");
+        cmr.selectedProperty().bindBidirectional(model.noCmr);
+        g.addRow(row++, new Label("Most components"), k);
+        g.addRow(row++, new Label("Suggestions"), top);
+        g.addRow(row++, new Label("Then rank by"), rank);
+        g.addRow(row++, new Label("Include only (a;b)"), field(model.include, "blend-include"));
+        g.addRow(row++, new Label("Exclude (a;b)"), field(model.exclude, "blend-exclude"));
+        g.addRow(row++, new Label("Fixed (NAME:FRACTION)"), field(model.fixed, "blend-fixed"));
+        g.addRow(row++, new Label("Least fraction (%)"), field(model.minFractionPercent, "blend-min-fraction"));
+        g.addRow(row++, new Label("Boiling point from (°C)"), field(model.boilingMin, "blend-bp-min"));
+        g.addRow(row++, new Label("Boiling point to (°C)"), field(model.boilingMax, "blend-bp-max"));
+        g.addRow(row++, new Label("Least flash point (°C)"), field(model.minFlashPoint, "blend-min-flash"));
+        g.addRow(row++, new Label("ICH Q3C classes"), ich);
+        g.add(cmr, 0, row++, 2, 1);
+        g.addRow(row++, new Label("Highest cost per litre"), field(model.maxCost, "blend-max-cost"));
+        g.addRow(row++, new Label("Good up to RED"), field(model.redLimit, "blend-red-limit"));
+        g.addRow(row++, new Label("Temperature (°C)"), field(model.temperatureC, "blend-temperature"));
+        Button search = new Button("_Search blends");
+        search.setId("blend-search");
+        search.setDefaultButton(true);
+        search.setOnAction(e -> {
+            try {
+                model.search(null);
+            } catch (RuntimeException ex) {
+                model.session().jobs().complain(ErrorText.of(ex));
+            }
+        });
+        Label hint = new Label("Searches every 1- to 4-component subset of the library exactly; the status bar shows "
+                + "progress and a Cancel button. Two-phase blends are left out.");
+        hint.setWrapText(true);
+        hint.getStyleClass().add("hint");
+        Label target = new Label();
+        target.getStyleClass().add("headline");
+        target.setWrapText(true);
+        target.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(() -> model.session().target() == null
+                ? "No target: set one on the target screen." : "Target: " + model.session().target().name(), model.session().targetProperty()));
+        VBox box = new VBox(10, target, g, search, hint);
+        box.setPadding(new Insets(10));
+        box.setPrefWidth(360);
+        ScrollPane sp = new ScrollPane(box);
+        sp.setFitToWidth(true);
+        sp.setMinWidth(370);
+        return sp;
+    }
+
+    private static TextField field(javafx.beans.property.StringProperty p, String id) {
+        TextField tf = new TextField();
+        tf.setId(id);
+        tf.setPrefColumnCount(10);
+        tf.textProperty().bindBidirectional(p);
+        return tf;
+    }
+
+    private static TableColumn<BlendModel.Row, Integer> cautionColumn() {
+        TableColumn<BlendModel.Row, Integer> c = new TableColumn<>("Cautions");
+        c.setCellValueFactory(cd -> new ReadOnlyObjectWrapper<>(cd.getValue().safety() == null ? null
+                : SafetyText.cautions(cd.getValue().safety()).size() - 1));
+        c.setCellFactory(col -> new TableCell<>() {
+            @Override
+            protected void updateItem(Integer n, boolean empty) {
+                super.updateItem(n, empty);
+                setText(null);
+                setGraphic(null);
+                if (!empty) {
+                    Label badge = new Label(n == null ? "?" : "⚠ " + n);
+                    badge.getStyleClass().add("caution-badge");
+                    setGraphic(badge);
+                    setAlignment(Pos.CENTER);
+                }
+            }
+        });
+        c.setPrefWidth(80);
+        return c;
+    }
+
+    static String percentText(Blend b) {
+        return b.components().stream().map(c -> c.solvent().name() + " " + Math.round(c.fraction() * 100) + " %")
+                .collect(Collectors.joining(" + "));
+    }
+
+    static String ichText(Blend b) {
+        return b.components().stream().map(c -> c.solvent().ichClass() == null ? "–" : String.valueOf(c.solvent().ichClass()))
+                .collect(Collectors.joining(" "));
+    }
+
+    static String phaseText(BlendModel.Row r) {
+        var v = r.suggestion().phase();
+        if (v == null || !v.checked()) {
+            return r.blend().size() == 1 ? "single liquid" : "not checked";
+        }
+        return v.splits() ? "SPLITS" : "one phase";
+    }
+
+    static String describe(BlendModel.Row r) {
+        StringBuilder b = new StringBuilder();
+        var rb = r.suggestion().blend();
+        b.append("#").append(r.rank()).append("  ").append(percentText(r.blend())).append('\n');
+        b.append(String.format(Locale.ROOT, "δD %.1f  δP %.1f  δH %.1f MPa½  ·  Ra %.2f  ·  RED %.2f%n", rb.point().dD(), rb.point().dP(),
+                rb.point().dH(), rb.ra(), rb.red()));
+        var v = r.suggestion().phase();
+        if (v != null && v.detail() != null) {
+            b.append("Phases: ").append(v.detail()).append(v.model() == null ? "" : " (" + v.model() + ")").append('\n');
+        }
+        for (String w : r.suggestion().warnings()) {
+            b.append("Warning: ").append(w).append('\n');
+        }
+        b.append('\n');
+        if (r.safety() != null) {
+            b.append(SafetyText.describe(r.safety()));
+        } else {
+            b.append("No safety profile: ").append(r.safetyProblem()).append('\n');
+            r.suggestion().cautions().forEach(c -> b.append("• ").append(c).append('\n'));
+        }
+        return b.toString();
+    }
+
+    private void compareSelected() {
+        List<BlendModel.Row> sel = new ArrayList<>(table.getSelectionModel().getSelectedItems());
+        if (sel.isEmpty()) {
+            model.session().jobs().complain("Select one to four suggestions first (Ctrl+click).");
+            return;
+        }
+        if (sel.size() > 4) {
+            model.session().jobs().complain("Compare up to four blends at a time; the first four selected are shown.");
+            sel = sel.subList(0, 4);
+        }
+        model.compared().setAll(sel);
+        comparison.getColumns().clear();
+        TableColumn<List<String>, String> what = new TableColumn<>("");
+        what.setCellValueFactory(cd -> new ReadOnlyObjectWrapper<>(cd.getValue().get(0)));
+        what.setPrefWidth(150);
+        comparison.getColumns().add(what);
+        for (int i = 0; i < sel.size(); i++) {
+            int col = i + 1;
+            TableColumn<List<String>, String> c = new TableColumn<>("#" + sel.get(i).rank());
+            c.setCellValueFactory(cd -> new ReadOnlyObjectWrapper<>(cd.getValue().get(col)));
+            c.setPrefWidth(190);
+            comparison.getColumns().add(c);
+        }
+        List<List<String>> rows = new ArrayList<>();
+        rows.add(row("Blend", sel, r -> percentText(r.blend())));
+        rows.add(row("δD, δP, δH", sel, r -> String.format(Locale.ROOT, "%.1f, %.1f, %.1f", r.suggestion().blend().point().dD(),
+                r.suggestion().blend().point().dP(), r.suggestion().blend().point().dH())));
+        rows.add(row("RED", sel, r -> Numbers.two(r.suggestion().blend().red())));
+        rows.add(row("Flash point (°C)", sel, r -> r.safety() == null ? "" : Numbers.plain(r.safety().flashPoint().celsius())));
+        rows.add(row("GHS category", sel, r -> r.safety() == null || r.safety().ghs().category() == null ? "–" : String.valueOf(r.safety().ghs().category())));
+        rows.add(row("ICH classes", sel, r -> ichText(r.blend())));
+        rows.add(row("Guide rank", sel, r -> r.safety() == null || r.safety().guideRank() == null ? "" : r.safety().guideRank().label()));
+        rows.add(row("Exposure index", sel, r -> r.safety() == null ? "" : String.format(Locale.ROOT, "%.3g", r.safety().exposure().index())));
+        rows.add(row("H-statements", sel, r -> r.blend().components().stream().flatMap((BlendComponent c) -> c.solvent().hazardStatements().stream())
+                .distinct().sorted().collect(Collectors.joining(" "))));
+        rows.add(row("Cautions", sel, r -> r.safety() == null ? "" : String.valueOf(SafetyText.cautions(r.safety()).size() - 1)));
+        rows.add(row("Phases", sel, BlendView::phaseText));
+        comparison.getItems().setAll(rows);
+        right.getSelectionModel().select(1);
+    }
+
+    private static List<String> row(String label, List<BlendModel.Row> sel, java.util.function.Function<BlendModel.Row, String> f) {
+        List<String> r = new ArrayList<>();
+        r.add(label);
+        sel.forEach(x -> r.add(f.apply(x)));
+        return r;
+    }
+}
