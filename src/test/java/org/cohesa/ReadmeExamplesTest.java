@@ -20,7 +20,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * Every {@code java -jar target/cohesa.jar …} line in the README's bash blocks runs, in order, against one
+ * Every {@code java -jar target/cohesa.jar …} line in the bash blocks of the README and of the demo walk-throughs
+ * ({@code demo-blends/*.md}) runs, in order, against one
  * scratch database in a scratch folder (with a copy of demo-blends/), and must exit 0: the README cannot
  * promise a command that does not work.
  */
@@ -35,6 +36,11 @@ class ReadmeExamplesTest {
     void everyReadmeCommandRuns() throws Exception {
         List<List<String>> commands = commands(Files.readString(Path.of("README.md"), StandardCharsets.UTF_8));
         assertTrue(commands.size() >= 4, "the README should show command-line examples");
+        try (Stream<Path> demos = Files.list(Path.of("demo-blends"))) {
+            for (Path demo : demos.filter(p -> p.toString().endsWith(".md")).sorted().toList()) {
+                commands.addAll(commands(Files.readString(demo, StandardCharsets.UTF_8)));
+            }
+        }
         copyTree(Path.of("demo-blends"), work.resolve("demo-blends"));
         // one JVM for all examples, started in the scratch folder so relative output files land there
         Path script = work.resolve("examples.json");
