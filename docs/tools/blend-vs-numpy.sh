@@ -1,12 +1,12 @@
 #!/usr/bin/env bash
 # Side-by-side timing of the exact 3-component blend search against the numpy reference
 # (../shared/bench/ternary_ref.py), in one run on the same machine. Usage:
-#   bash bench/blend-vs-numpy.sh [LIBRARY_SIZE] [ROUNDS]
+#   bash docs/tools/blend-vs-numpy.sh [LIBRARY_SIZE] [ROUNDS]
 # Needs target/cohesa.jar (mvn -B -o -DskipTests package) and python3 with numpy.
 set -euo pipefail
 N="${1:-250}"
 ROUNDS="${2:-5}"
-HERE="$(cd "$(dirname "$0")/.." && pwd)"
+HERE="$(cd "$(dirname "$0")/../.." && pwd)"
 REF="${COHESA_NUMPY_REF:-$HERE/../shared/bench/ternary_ref.py}"
 PY="${PYTHON:-python3}"
 [ -f "$HERE/target/cohesa.jar" ] || { echo "error: build first: mvn -B -o -DskipTests package" >&2; exit 2; }
