@@ -45,8 +45,9 @@ public final class CohesaApp extends Application {
         settings = Settings.load(settingsFile);
         Session session = new Session(db);
         Thread.setDefaultUncaughtExceptionHandler((t, e) -> session.jobs().complain(ErrorText.of(e)));
-        // multisampling smooths the 3D edges; -Dcohesa.msaa=false turns it off on slow software renderers
-        boolean msaa = !"false".equalsIgnoreCase(System.getProperty("cohesa.msaa"));
+        // multisampling smooths the 3D edges but costs a software renderer (Mesa llvmpipe) six times the frame
+        // time (docs/performance.md): off by default, -Dcohesa.msaa=true turns it on for a real GPU
+        boolean msaa = "true".equalsIgnoreCase(System.getProperty("cohesa.msaa"));
         workbench = new Workbench(session, msaa ? SceneAntialiasing.BALANCED : SceneAntialiasing.DISABLED);
         boolean scripted = opts.screenshot() != null || opts.measurePoints() > 0;
         double w = scripted ? 1400 : settings.windowWidth;

@@ -90,11 +90,11 @@ public final class BlendView {
         details.setEditable(false);
         details.setWrapText(true);
         details.getStyleClass().add("details");
-        Button drying = new Button("Show its _drying path");
+        Button drying = new Button("_Drying path");
         drying.setId("blend-drying");
         drying.disableProperty().bind(table.getSelectionModel().selectedItemProperty().isNull());
         drying.setOnAction(e -> showDrying.accept(table.getSelectionModel().getSelectedItem().blend()));
-        Button compare = new Button("C_ompare selected (up to 4)");
+        Button compare = new Button("C_ompare (up to 4)");
         compare.setId("blend-compare");
         compare.setOnAction(e -> compareSelected());
         VBox profile = new VBox(6, new HBox(8, drying, compare), details);
