@@ -143,6 +143,10 @@ class WorkflowTest {
         assertEquals(1, records.getItems().size());
         long id = records.getItems().get(0).id();
         assertEquals(org.cohesa.core.records.RecordStatus.DRAFT, records.getItems().get(0).status());
+        // a record filed from the app carries the same evidence as one filed from the command line
+        org.cohesa.core.records.Evidence filed = records.getItems().get(0).evidence();
+        assertTrue(filed.section(org.cohesa.core.records.Evidence.Sections.SAFETY).isPresent(), filed.sections().toString());
+        assertTrue(filed.section(org.cohesa.core.records.Evidence.Sections.DRYING).isPresent(), filed.sections().toString());
         robot.interact(() -> fx.workbench.recordsModel().changeStatus(id, org.cohesa.core.records.RecordStatus.IN_REVIEW, "tester", null, null));
         fx.awaitJobs();
         robot.interact(() -> fx.workbench.recordsModel().changeStatus(id, org.cohesa.core.records.RecordStatus.APPROVED, "lead", "ok", null));

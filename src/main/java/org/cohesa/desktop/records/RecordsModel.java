@@ -9,7 +9,7 @@ import java.util.List;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.cohesa.core.records.ChainReport;
-import org.cohesa.core.records.EvidenceBuilder;
+import org.cohesa.core.records.EvidenceAssembler;
 import org.cohesa.core.records.RecordDraft;
 import org.cohesa.core.records.RecordEvent;
 import org.cohesa.core.records.RecordStatus;
@@ -65,22 +65,24 @@ public final class RecordsModel {
         });
     }
 
-    /** Files a record as a draft; the evidence is the parameters, distances and data sources at this moment. */
+    /** Files a record as a draft; the evidence is the parameters, distances, safety profiles, drying path and sources at this moment. */
     public void file(Filing f, java.util.function.Consumer<SubstitutionRecord> then) {
         SolventLibrary library = new SolventLibrary(List.copyOf(session.solvents()));
         TargetChoice target = f.withTarget() ? session.target() : null;
         session.jobs().run("Filing the record", p -> {
             Blend from = liquid(library, "replaced", f.replaced());
             Blend to = liquid(library, "replacement", f.replacement());
-            EvidenceBuilder evidence = new EvidenceBuilder(from, to, appVersion()).citations(SourceCatalog.bundled().all());
             String targetText = null;
+            TargetRef ref = null;
             if (target != null) {
                 var c = target.sphere().centre();
                 targetText = c.dD() + "," + c.dP() + "," + c.dH() + "," + target.sphere().r0();
-                evidence.target(new TargetRef(target.name(), target.sphere(), target.source()));
+                ref = new TargetRef(target.name(), target.sphere(), target.source());
             }
+            // the same evidence as the command line files: parameters, distances, safety profiles, drying path, sources
+            var evidence = EvidenceAssembler.assemble(from, to, ref, SourceCatalog.bundled().all(), appVersion());
             RecordDraft draft = new RecordDraft(f.process(), f.site(), from.describe(), to.describe(), targetText, f.reason(),
-                    evidence.build());
+                    evidence);
             try (Database db = session.openDatabase()) {
                 return new RecordRepository(db).create(draft, required("author", f.author()));
             }
