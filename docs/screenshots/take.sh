@@ -20,4 +20,15 @@ shot space-3d --screen=space --view=3d "$target" --select=toluene "--blend=aceto
 shot space-p-h --screen=space --view=p-h "$target" --select=toluene
 shot space-d-h --screen=space --view=d-h "$target" --select=toluene
 shot space-teas --screen=space --view=teas "$target" --select=toluene
+# the register, with two invented records filed from the command line first
+cli() { COHESA_HOME="$home" java -jar target/cohesa.jar "$@" >/dev/null; }
+cli record add --process "Alkyd enamel thinner, line 2 (invented demo)" --site "Larchmere Coatings (fictional)" \
+  --replaced toluene --replacement "n-butyl acetate:0.6,ethyl acetate:0.4" --reason "regulatory: reprotoxic aromatic (H361d)" \
+  --author "R. Formulator" --material "medium-oil alkyd"
+cli record review 1 --by "Q. Reviewer"
+cli record approve 1 --by "M. Manager" --comment "lab trials passed"
+cli record add --process "Extraction of OPL-114 (invented demo)" --site "Oakfield process lab (fictional)" \
+  --replaced dichloromethane --replacement "2-methyltetrahydrofuran:1" --reason "safety: suspected carcinogen (H351)" \
+  --author "P. Chemist" --target 17.8,7.5,7.0,7.0
+shot register --screen=register
 rm -rf "$home"
