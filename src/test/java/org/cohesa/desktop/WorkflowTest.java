@@ -51,6 +51,12 @@ class WorkflowTest {
         assertTrue(report.startsWith("Fitted sphere: δD"), report);
         assertTrue(report.contains("Good liquids inside:"), report);
 
+        // the fit is saved as the user's own material and appears in the material list
+        robot.interact(() -> robot.lookup("#fit-save").queryAs(Button.class).fire());
+        fx.awaitJobs();
+        assertTrue(fx.session.materials().stream().anyMatch(m -> m.name().equals("Resin K-17 (invented)") && m.userEntry()),
+                "saved material missing");
+
         // a broken table is refused with every bad cell listed, and the target stays
         robot.interact(() -> {
             robot.lookup("#fit-csv").queryAs(TextArea.class).setText("liquid,score\nacetone,yes\nno such liquid,1\n");

@@ -13,6 +13,8 @@ import org.cohesa.core.solvent.SolventLibrary;
 import org.cohesa.core.target.FitOptions;
 import org.cohesa.core.target.FitResult;
 import org.cohesa.core.target.Interval;
+import org.cohesa.core.target.Material;
+import org.cohesa.core.target.MaterialKind;
 import org.cohesa.core.target.Misfit;
 import org.cohesa.core.target.NamedPoint;
 import org.cohesa.core.target.NextTest;
@@ -21,6 +23,8 @@ import org.cohesa.core.target.TestResult;
 import org.cohesa.desktop.common.Numbers;
 import org.cohesa.desktop.common.Session;
 import org.cohesa.desktop.common.TargetChoice;
+import org.cohesa.store.Database;
+import org.cohesa.store.MaterialRepository;
 import org.cohesa.store.TestSeriesCsv;
 
 /**
@@ -73,6 +77,38 @@ public final class FitModel {
                 then.run();
             }
         }, err -> report.set("The fit could not run: " + err + detail(text, library)));
+    }
+
+    /**
+     * Saves the last fit as one of the user's own materials (the same record {@code cohesa fit --save} writes),
+     * so it can be picked again as a target and survives updates of the bundled library.
+     */
+    public void saveAsMaterial(Runnable then) {
+        FitResult r = result.get();
+        if (r == null) {
+            report.set(report.get() + "\nFit the sphere first, then save it.");
+            return;
+        }
+        String label = name.get() == null ? "" : name.get().strip();
+        session.jobs().run("Saving the fitted sphere", p -> {
+            if (label.isEmpty()) {
+                throw new org.cohesa.core.InvalidInputException("name", label, "give the material a name before saving it");
+            }
+            Material m = new Material(label, List.of(), MaterialKind.OTHER, r.sphere(), "fit of " + r.results() + " test results (Cohesa sphere fit, seed "
+                    + FitOptions.DEFAULT_SEED + ")", String.format(Locale.ROOT, "fitted from %d test results: %d/%d dissolving inside, %d/%d non-dissolving outside",
+                    r.results(), r.quality().goodInside(), r.quality().goodTotal(), r.quality().badOutside(), r.quality().badTotal()), true);
+            try (Database db = session.openDatabase()) {
+                MaterialRepository repo = new MaterialRepository(db);
+                repo.add(m);
+                return repo.all();
+            }
+        }, all -> {
+            session.materials().setAll(all);
+            session.jobs().say("Saved \"" + label + "\" as your own material.");
+            if (then != null) {
+                then.run();
+            }
+        }, err -> report.set(report.get() + "\nNot saved: " + err));
     }
 
     /** Every bad cell of the test table, re-read so the report can list them all. */

@@ -207,7 +207,11 @@ public final class TargetView {
         help.setWrapText(true);
         help.getStyleClass().add("hint");
         Label nameLabel = new Label("Material name");
-        VBox box = new VBox(6, help, csv, new HBox(8, nameLabel, name), new HBox(8, load, fit));
+        Button save = new Button("_Save as my material");
+        save.setId("fit-save");
+        save.disableProperty().bind(fitModel.resultProperty().isNull());
+        save.setOnAction(e -> fitModel.saveAsMaterial(null));
+        VBox box = new VBox(6, help, csv, new HBox(8, nameLabel, name), new HBox(8, load, fit, save));
         box.setPadding(new Insets(8));
         return box;
     }
