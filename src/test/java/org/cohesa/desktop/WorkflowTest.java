@@ -57,6 +57,26 @@ class WorkflowTest {
         assertTrue(fx.session.materials().stream().anyMatch(m -> m.name().equals("Resin K-17 (invented)") && m.userEntry()),
                 "saved material missing");
 
+        // a typed-in sphere: a bad field is named in the form, a good one is kept as the user's own material
+        robot.interact(() -> {
+            robot.lookup("#target-dd").queryAs(TextField.class).setText("abc");
+            robot.lookup("#target-keep").queryAs(Button.class).fire();
+        });
+        javafx.scene.control.Label problem = robot.lookup("#target-problem").queryAs(javafx.scene.control.Label.class);
+        assertTrue(problem.isVisible() && problem.getText().contains("δD"), problem.getText());
+        robot.interact(() -> {
+            robot.lookup("#target-name").queryAs(TextField.class).setText("house binder (invented)");
+            robot.lookup("#target-dd").queryAs(TextField.class).setText("18.2");
+            robot.lookup("#target-dp").queryAs(TextField.class).setText("6");
+            robot.lookup("#target-dh").queryAs(TextField.class).setText("5.5");
+            robot.lookup("#target-r0").queryAs(TextField.class).setText("7.5");
+            robot.lookup("#target-keep").queryAs(Button.class).fire();
+        });
+        fx.awaitJobs();
+        assertTrue(fx.session.materials().stream().anyMatch(m -> m.name().equals("house binder (invented)") && m.userEntry()),
+                "typed-in material missing");
+        assertEquals("house binder (invented)", fx.session.target().name());
+
         // a broken table is refused with every bad cell listed, and the target stays
         robot.interact(() -> {
             robot.lookup("#fit-csv").queryAs(TextArea.class).setText("liquid,score\nacetone,yes\nno such liquid,1\n");
@@ -66,7 +86,7 @@ class WorkflowTest {
         report = robot.lookup("#fit-report").queryAs(TextArea.class).getText();
         assertTrue(report.startsWith("The fit could not run"), report);
         assertTrue(report.contains("line 2"), report);
-        assertEquals("Resin K-17 (invented)", fx.session.target().name());
+        assertEquals("house binder (invented)", fx.session.target().name());
     }
 
     @Test

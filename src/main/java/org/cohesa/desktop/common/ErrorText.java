@@ -39,6 +39,8 @@ public final class ErrorText {
             return "The operation failed.";
         }
         String s = msg.strip();
-        return Character.toUpperCase(s.charAt(0)) + s.substring(1);
+        char first = s.charAt(0);
+        // only Latin letters: upper-casing δD would turn it into ΔD, which reads as a difference
+        return first >= 'a' && first <= 'z' ? Character.toUpperCase(first) + s.substring(1) : s;
     }
 }

@@ -84,6 +84,34 @@ public final class TargetModel {
         session.targetProperty().set(new TargetChoice(name.get().isBlank() ? "typed-in sphere" : name.get(), s, "typed in"));
     }
 
+    /**
+     * Keeps the typed-in sphere as one of the user's own materials (validated like {@link #applyTypedSphere})
+     * and makes it the target; the database write runs off the FX thread.
+     *
+     * @throws InvalidInputException naming the first bad field
+     */
+    public void saveTypedSphereAsMaterial(Runnable then) {
+        applyTypedSphere();
+        String label = name.get() == null ? "" : name.get().strip();
+        if (label.isEmpty() || label.equals("typed-in sphere")) {
+            throw new InvalidInputException("Name", label, "give the material a name of your own before keeping it");
+        }
+        SolubilitySphere sphere = session.target().sphere();
+        session.jobs().run("Saving " + label, p -> {
+            try (org.cohesa.store.Database db = session.openDatabase()) {
+                org.cohesa.store.MaterialRepository repo = new org.cohesa.store.MaterialRepository(db);
+                repo.add(new Material(label, List.of(), org.cohesa.core.target.MaterialKind.OTHER, sphere, "typed in by the user", null, true));
+                return repo.all();
+            }
+        }, all -> {
+            session.materials().setAll(all);
+            session.jobs().say("Kept \"" + label + "\" as your own material.");
+            if (then != null) {
+                then.run();
+            }
+        });
+    }
+
     /** Makes a library material the target (its published sphere, with its source). */
     public void useMaterial(Material m) {
         session.targetProperty().set(new TargetChoice(m.name(), m.sphere(), "material library, source: " + m.source()));

@@ -69,7 +69,10 @@ public final class TargetView {
         formProblem.setWrapText(true);
         formProblem.setManaged(false);
         formProblem.setVisible(false);
-        VBox typed = new VBox(8, new Label("A sphere from a publication or your own fit:"), form, apply, formProblem);
+        Button keep = new Button("_Keep as my material");
+        keep.setId("target-keep");
+        keep.setOnAction(e -> keepAsMaterial());
+        VBox typed = new VBox(8, new Label("A sphere from a publication or your own fit:"), form, new HBox(8, apply, keep), formProblem);
         typed.setPadding(new Insets(8));
         VBox typedPane = typed;
         typedPane.setId("target-typed");
@@ -242,6 +245,18 @@ public final class TargetView {
             formProblem.setVisible(false);
             formProblem.setManaged(false);
             model.session().jobs().say("Target set: " + describe(model.session().target()));
+        } catch (RuntimeException ex) {
+            formProblem.setText(ErrorText.of(ex));
+            formProblem.setVisible(true);
+            formProblem.setManaged(true);
+        }
+    }
+
+    private void keepAsMaterial() {
+        try {
+            model.saveTypedSphereAsMaterial(null);
+            formProblem.setVisible(false);
+            formProblem.setManaged(false);
         } catch (RuntimeException ex) {
             formProblem.setText(ErrorText.of(ex));
             formProblem.setVisible(true);
