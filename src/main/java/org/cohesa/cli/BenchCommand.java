@@ -46,6 +46,49 @@ public final class BenchCommand implements Runnable {
         return m;
     }
 
+    /** Refuses run counts outside the ranges every bench command accepts. */
+    static void requireRuns(int runs, int maxRuns, int warmup) {
+        if (runs < 1 || runs > maxRuns) {
+            throw new org.cohesa.core.InvalidInputException("--runs", String.valueOf(runs), "must lie between 1 and " + maxRuns);
+        }
+        if (warmup < 0 || warmup > 100_000) {
+            throw new org.cohesa.core.InvalidInputException("--warmup", String.valueOf(warmup), "must lie between 0 and 100000");
+        }
+    }
+
+    /** Runs {@code task} {@code warmup} times untimed, then {@code runs} times timed; the run times in seconds. */
+    static double[] time(int warmup, int runs, Runnable task) {
+        for (int i = 0; i < warmup; i++) {
+            task.run();
+        }
+        double[] t = new double[runs];
+        for (int i = 0; i < runs; i++) {
+            long start = System.nanoTime();
+            task.run();
+            t[i] = (System.nanoTime() - start) / 1e9;
+        }
+        return t;
+    }
+
+    /** Prints one blend benchmark (fields in {@code m} plus the statistics of {@code t}) as JSON or as a table row. */
+    static void reportBlendBench(CohesaSubcommand cmd, Map<String, Object> m, String label, org.cohesa.core.solvent.Blend b, String model,
+            double[] t) {
+        m.putAll(stats(t));
+        double[] sorted = t.clone();
+        Arrays.sort(sorted);
+        int n = sorted.length;
+        double median = n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
+        m.put("median_ms", Output.round(median * 1e3, 3));
+        if (cmd.json()) {
+            Output.json(cmd.out(), m);
+            return;
+        }
+        TextTable tt = new TextTable("benchmark", "components", "model", "runs", "median ms", "min ms", "max ms");
+        tt.row(label, b.size(), model, n, Output.fmt(median * 1e3, 2), Output.fmt(sorted[0] * 1e3, 2), Output.fmt(sorted[n - 1] * 1e3, 2));
+        tt.print(cmd.out());
+        cmd.out().println("blend: " + b.describe() + "; " + Runtime.getRuntime().availableProcessors() + " cores");
+    }
+
     /** {@code cohesa bench fit}: a sphere fit of N invented results with bootstrap resamples. */
     @Command(name = "fit", description = "Time a sphere fit: N invented test results (liquids drawn at random, scored against a known sphere) "
             + "with bootstrap resamples; prints the median of several runs after one warm-up run.")
@@ -68,13 +111,7 @@ public final class BenchCommand implements Runnable {
             }
             List<TestResult> data = invented(results, seed);
             FitOptions options = new FitOptions(seed, resamples, 12, 5);
-            SphereFitter.fit(data, List.of(), options);
-            double[] t = new double[runs];
-            for (int i = 0; i < runs; i++) {
-                long start = System.nanoTime();
-                SphereFitter.fit(data, List.of(), options);
-                t[i] = (System.nanoTime() - start) / 1e9;
-            }
+            double[] t = time(1, runs, () -> SphereFitter.fit(data, List.of(), options));
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("benchmark", "fit");
             m.put("results", results);
@@ -122,26 +159,13 @@ public final class BenchCommand implements Runnable {
 
         @Override
         protected void execute() {
-            if (runs < 1 || runs > 100_000) {
-                throw new org.cohesa.core.InvalidInputException("--runs", String.valueOf(runs), "must lie between 1 and 100000");
-            }
-            if (warmup < 0 || warmup > 100_000) {
-                throw new org.cohesa.core.InvalidInputException("--warmup", String.valueOf(warmup), "must lie between 0 and 100000");
-            }
+            requireRuns(runs, 100_000, warmup);
             org.cohesa.core.solvent.Blend b = ctx().library().resolveBlend("--blend", blend);
             org.cohesa.core.drying.DryingRequest req = new org.cohesa.core.drying.DryingRequest(b, null,
                     org.cohesa.core.drying.DryingRequest.DEFAULT_KELVIN, org.cohesa.core.drying.DryingRequest.DEFAULT_UNTIL, ideal,
                     org.cohesa.core.drying.DryingRequest.DEFAULT_STEP, false);
             String model = org.cohesa.core.drying.DryingSimulator.simulate(req).model();
-            for (int i = 0; i < warmup; i++) {
-                org.cohesa.core.drying.DryingSimulator.simulate(req);
-            }
-            double[] t = new double[runs];
-            for (int i = 0; i < runs; i++) {
-                long start = System.nanoTime();
-                org.cohesa.core.drying.DryingSimulator.simulate(req);
-                t[i] = (System.nanoTime() - start) / 1e9;
-            }
+            double[] t = time(warmup, runs, () -> org.cohesa.core.drying.DryingSimulator.simulate(req));
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("benchmark", "dry");
             m.put("blend", b.describe());
@@ -149,21 +173,7 @@ public final class BenchCommand implements Runnable {
             m.put("until", org.cohesa.core.drying.DryingRequest.DEFAULT_UNTIL);
             m.put("model", model);
             m.put("warmup", warmup);
-            m.putAll(stats(t));
-            double[] sorted = t.clone();
-            Arrays.sort(sorted);
-            int n = sorted.length;
-            double median = n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
-            m.put("median_ms", Output.round(median * 1e3, 3));
-            if (json()) {
-                Output.json(out(), m);
-                return;
-            }
-            TextTable tt = new TextTable("benchmark", "components", "model", "runs", "median ms", "min ms", "max ms");
-            tt.row("dry to 95 %", b.size(), model, runs, Output.fmt(median * 1e3, 2), Output.fmt(sorted[0] * 1e3, 2),
-                    Output.fmt(sorted[n - 1] * 1e3, 2));
-            tt.print(out());
-            out().println("blend: " + b.describe() + "; " + Runtime.getRuntime().availableProcessors() + " cores");
+            reportBlendBench(this, m, "dry to 95 %", b, model, t);
         }
     }
 
@@ -184,45 +194,19 @@ public final class BenchCommand implements Runnable {
 
         @Override
         protected void execute() {
-            if (runs < 1 || runs > 100_000) {
-                throw new org.cohesa.core.InvalidInputException("--runs", String.valueOf(runs), "must lie between 1 and 100000");
-            }
-            if (warmup < 0 || warmup > 100_000) {
-                throw new org.cohesa.core.InvalidInputException("--warmup", String.valueOf(warmup), "must lie between 0 and 100000");
-            }
+            requireRuns(runs, 100_000, warmup);
             org.cohesa.core.solvent.Blend b = ctx().library().resolveBlend("--blend", blend);
             double kelvin = 298.15;
             String model = org.cohesa.core.safety.SafetyProfiler.profile(b, kelvin).activityModel();
-            for (int i = 0; i < warmup; i++) {
-                org.cohesa.core.safety.Cautions.forProfile(org.cohesa.core.safety.SafetyProfiler.profile(b, kelvin));
-            }
-            double[] t = new double[runs];
-            for (int i = 0; i < runs; i++) {
-                long start = System.nanoTime();
-                org.cohesa.core.safety.Cautions.forProfile(org.cohesa.core.safety.SafetyProfiler.profile(b, kelvin));
-                t[i] = (System.nanoTime() - start) / 1e9;
-            }
+            double[] t = time(warmup, runs,
+                    () -> org.cohesa.core.safety.Cautions.forProfile(org.cohesa.core.safety.SafetyProfiler.profile(b, kelvin)));
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("benchmark", "hazards");
             m.put("blend", b.describe());
             m.put("components", b.size());
             m.put("model", model);
             m.put("warmup", warmup);
-            m.putAll(stats(t));
-            double[] sorted = t.clone();
-            Arrays.sort(sorted);
-            int n = sorted.length;
-            double median = n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
-            m.put("median_ms", Output.round(median * 1e3, 3));
-            if (json()) {
-                Output.json(out(), m);
-                return;
-            }
-            TextTable tt = new TextTable("benchmark", "components", "model", "runs", "median ms", "min ms", "max ms");
-            tt.row("safety profile + cautions", b.size(), model, runs, Output.fmt(median * 1e3, 2), Output.fmt(sorted[0] * 1e3, 2),
-                    Output.fmt(sorted[n - 1] * 1e3, 2));
-            tt.print(out());
-            out().println("blend: " + b.describe() + "; " + Runtime.getRuntime().availableProcessors() + " cores");
+            reportBlendBench(this, m, "safety profile + cautions", b, model, t);
         }
     }
 }
