@@ -144,14 +144,7 @@ public final class SolventRepository {
 
     /** The SHA-256 of the bundled table the database was last built from, if any. */
     public Optional<String> bundledHash() {
-        try (PreparedStatement ps = db.connection().prepareStatement("SELECT value FROM meta WHERE key = ?")) {
-            ps.setString(1, BUNDLED_HASH_KEY);
-            try (ResultSet rs = ps.executeQuery()) {
-                return rs.next() ? Optional.of(rs.getString(1)) : Optional.empty();
-            }
-        } catch (SQLException e) {
-            throw new StoreException("cannot read metadata: " + e.getMessage(), e);
-        }
+        return MetaTable.get(db.connection(), BUNDLED_HASH_KEY);
     }
 
     /**
@@ -186,12 +179,7 @@ public final class SolventRepository {
                     insert(c, s, "bundled");
                 }
             }
-            try (PreparedStatement ps = c.prepareStatement("INSERT INTO meta (key, value) VALUES (?, ?)"
-                    + " ON CONFLICT (key) DO UPDATE SET value = excluded.value")) {
-                ps.setString(1, BUNDLED_HASH_KEY);
-                ps.setString(2, hash);
-                ps.executeUpdate();
-            }
+            MetaTable.put(c, BUNDLED_HASH_KEY, hash);
             return null;
         });
         return true;

@@ -21,7 +21,7 @@ import org.cohesa.core.hsp.HansenParameters;
  * T in K; γ dimensionless. The second expression is the exact composition derivative of the first,
  * so the model obeys the Gibbs–Duhem relation.
  */
-public final class FloryHuggins implements ActivityModel {
+public final class FloryHuggins extends LogGammaModel {
 
     public static final String NAME = "Flory–Huggins (Hansen, Lindvig 2002)";
 
@@ -68,15 +68,6 @@ public final class FloryHuggins implements ActivityModel {
     @Override
     public int size() {
         return n;
-    }
-
-    @Override
-    public double[] gamma(double[] x, double kelvin) {
-        double[] ln = lnGamma(x, kelvin);
-        for (int i = 0; i < n; i++) {
-            ln[i] = Math.exp(ln[i]);
-        }
-        return ln;
     }
 
     @Override

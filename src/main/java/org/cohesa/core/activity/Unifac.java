@@ -26,7 +26,7 @@ import java.util.TreeSet;
  * construction; Ψ and the pure-component ln Γₖ⁽ⁱ⁾ are cached for the last temperature, because the
  * drying ODE and the stability test evaluate γ thousands of times at one temperature.
  */
-public final class Unifac implements ActivityModel {
+public final class Unifac extends LogGammaModel {
 
     private final String name;
     private final String note;
@@ -138,15 +138,6 @@ public final class Unifac implements ActivityModel {
     @Override
     public int size() {
         return n;
-    }
-
-    @Override
-    public double[] gamma(double[] x, double kelvin) {
-        double[] ln = lnGamma(x, kelvin);
-        for (int i = 0; i < n; i++) {
-            ln[i] = Math.exp(ln[i]);
-        }
-        return ln;
     }
 
     @Override
