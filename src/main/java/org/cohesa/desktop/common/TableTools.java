@@ -72,6 +72,20 @@ public final class TableTools {
     }
 
     /** Writes the header and every row of the table, as shown (sorted, filtered), to {@code file} as CSV. */
+    /** Asks where to save, writes the table as CSV and reports the outcome in the status bar. */
+    public static void exportWithDialog(javafx.scene.Node owner, TableView<?> table, String title, String suggestedName, Jobs jobs) {
+        Path file = Dialogs.saveFile(owner, title, suggestedName, "CSV files", "*.csv");
+        if (file == null) {
+            return;
+        }
+        try {
+            writeCsv(table, file);
+            jobs.say("Exported " + table.getItems().size() + " rows to " + file);
+        } catch (IOException | RuntimeException ex) {
+            jobs.complain(ErrorText.of(ex));
+        }
+    }
+
     public static void writeCsv(TableView<?> table, Path file) throws IOException {
         List<List<String>> rows = cells(table, true);
         try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {

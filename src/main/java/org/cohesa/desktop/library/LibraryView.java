@@ -25,7 +25,6 @@ import org.cohesa.core.solvent.Solvent;
 import org.cohesa.core.target.Material;
 import org.cohesa.desktop.common.Columns;
 import org.cohesa.desktop.common.Dialogs;
-import org.cohesa.desktop.common.ErrorText;
 import org.cohesa.desktop.common.Numbers;
 import org.cohesa.desktop.common.TableTools;
 
@@ -175,16 +174,7 @@ public final class LibraryView {
     }
 
     private void exportTable(TableView<?> t, String suggested) {
-        Path file = Dialogs.saveFile(root, "Export the table to CSV", suggested, "CSV files", "*.csv");
-        if (file == null) {
-            return;
-        }
-        try {
-            TableTools.writeCsv(t, file);
-            model.session().jobs().say("Exported " + t.getItems().size() + " rows to " + file);
-        } catch (java.io.IOException | RuntimeException ex) {
-            model.session().jobs().complain(ErrorText.of(ex));
-        }
+        TableTools.exportWithDialog(root, t, "Export the table to CSV", suggested, model.session().jobs());
     }
 
     private Solvent selected() {
@@ -257,16 +247,7 @@ public final class LibraryView {
     }
 
     private void exportCsv() {
-        Path file = Dialogs.saveFile(root, "Export the table to CSV", "cohesa-solvents.csv", "CSV files", "*.csv");
-        if (file == null) {
-            return;
-        }
-        try {
-            TableTools.writeCsv(table, file);
-            model.session().jobs().say("Exported " + table.getItems().size() + " rows to " + file);
-        } catch (java.io.IOException | RuntimeException ex) {
-            model.session().jobs().complain(ErrorText.of(ex));
-        }
+        exportTable(table, "cohesa-solvents.csv");
     }
 
     private static Button button(String text, String id, javafx.event.EventHandler<javafx.event.ActionEvent> action) {

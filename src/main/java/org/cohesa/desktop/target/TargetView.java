@@ -274,16 +274,7 @@ public final class TargetView {
     }
 
     private void exportCsv() {
-        Path file = Dialogs.saveFile(root, "Export the ranking to CSV", "cohesa-ranking.csv", "CSV files", "*.csv");
-        if (file == null) {
-            return;
-        }
-        try {
-            TableTools.writeCsv(table, file);
-            model.session().jobs().say("Exported " + table.getItems().size() + " rows to " + file);
-        } catch (java.io.IOException | RuntimeException ex) {
-            model.session().jobs().complain(ErrorText.of(ex));
-        }
+        TableTools.exportWithDialog(root, table, "Export the ranking to CSV", "cohesa-ranking.csv", model.session().jobs());
     }
 
     private static TextField field(String id, javafx.beans.property.StringProperty p, int cols) {
