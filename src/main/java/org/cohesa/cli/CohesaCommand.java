@@ -1,5 +1,20 @@
 package org.cohesa.cli;
 
+import org.cohesa.cli.bench.BenchCommand;
+import org.cohesa.cli.blend.BlendCommand;
+import org.cohesa.cli.blend.ReplaceCommand;
+import org.cohesa.cli.drying.DryCommand;
+import org.cohesa.cli.formulas.CohesionCommand;
+import org.cohesa.cli.formulas.DistanceCommand;
+import org.cohesa.cli.library.BackupCommand;
+import org.cohesa.cli.library.MaterialCommand;
+import org.cohesa.cli.library.MaterialsCommand;
+import org.cohesa.cli.library.SolventCommand;
+import org.cohesa.cli.library.SolventsCommand;
+import org.cohesa.cli.records.RecordCommand;
+import org.cohesa.cli.safety.HazardsCommand;
+import org.cohesa.cli.target.FitCommand;
+
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import picocli.CommandLine;

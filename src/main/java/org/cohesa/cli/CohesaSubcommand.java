@@ -19,11 +19,11 @@ public abstract class CohesaSubcommand implements Callable<Integer> {
         return ((CohesaCommand) spec.root().userObject()).context();
     }
 
-    protected PrintWriter out() {
+    public PrintWriter out() {
         return spec.commandLine().getOut();
     }
 
-    protected boolean json() {
+    public boolean json() {
         return jsonOption.enabled();
     }
 

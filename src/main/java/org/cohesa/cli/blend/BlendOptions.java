@@ -1,0 +1,248 @@
+package org.cohesa.cli.blend;
+
+import org.cohesa.cli.Args;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import org.cohesa.core.InvalidInputException;
+import org.cohesa.core.blend.BlendConstraints;
+import org.cohesa.core.blend.BlendSearch;
+import org.cohesa.core.blend.RankBy;
+import org.cohesa.core.solvent.BlendComponent;
+import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.solvent.SolventLibrary;
+import picocli.CommandLine.Option;
+
+/** The constraint and ranking options shared by {@code blend} and {@code replace}. */
+public final class BlendOptions {
+
+    @Option(names = "--max-components", paramLabel = "1..4", description = "Most components per blend, fixed ones included (default ${DEFAULT-VALUE}).")
+    String maxComponents = "3";
+
+    @Option(names = "--include", paramLabel = "NAMES", description = "Use only these solvents (repeat or separate with commas).")
+    List<String> include = new ArrayList<>();
+
+    @Option(names = "--exclude", paramLabel = "NAMES", description = "Never use these solvents (repeat or separate with commas).")
+    List<String> exclude = new ArrayList<>();
+
+    @Option(names = "--family", paramLabel = "FAMILIES", description = "Use only these chemical families, e.g. ester,alcohol.")
+    List<String> family = new ArrayList<>();
+
+    @Option(names = "--exclude-family", paramLabel = "FAMILIES", description = "Never use these chemical families.")
+    List<String> excludeFamily = new ArrayList<>();
+
+    @Option(names = "--fixed", paramLabel = "NAME:FRACTION", description = "Keep this solvent at this volume fraction in every blend (repeatable), e.g. water:0.2.")
+    List<String> fixed = new ArrayList<>();
+
+    @Option(names = "--min-fraction", paramLabel = "F", description = "Least volume fraction of any added component (default ${DEFAULT-VALUE}).")
+    String minFraction = String.valueOf(BlendConstraints.DEFAULT_MIN_FRACTION);
+
+    @Option(names = "--max-fraction", paramLabel = "F", description = "Largest volume fraction of any added component (default ${DEFAULT-VALUE}).")
+    String maxFraction = "1";
+
+    @Option(names = "--fraction-range", paramLabel = "NAME:MIN..MAX", description = "Volume-fraction range of one solvent when it is used (repeatable).")
+    List<String> fractionRange = new ArrayList<>();
+
+    @Option(names = "--boiling-range", paramLabel = "C..C", description = "Normal boiling point window, °C (either end may be left open, e.g. 60..).")
+    String boilingRange;
+
+    @Option(names = "--min-flash-point", paramLabel = "C", description = "Least closed-cup flash point of every component, °C.")
+    String minFlashPoint;
+
+    @Option(names = "--max-ich-class", paramLabel = "N", description = "Worst ICH Q3C class accepted (class 1 is the worst concern): 2 leaves out class 1, 3 leaves out classes 1 and 2.")
+    String maxIchClass;
+
+    @Option(names = "--no-cmr", description = "Leave out carcinogens, mutagens and reproductive toxicants (H340, H350, H360).")
+    boolean noCmr;
+
+    @Option(names = "--max-cost", paramLabel = "X", description = "Largest blend price per litre (uses your entered prices; solvents without a price are left out).")
+    String maxCost;
+
+    @Option(names = "--rank-by", paramLabel = "KEY", description = "Secondary key after RED: red, hazard, cost, components, evaporation (default ${DEFAULT-VALUE}).")
+    String rankBy = "red";
+
+    @Option(names = "--red-limit", paramLabel = "RED", description = "RED up to which a blend counts as good; the secondary key chooses among those (default ${DEFAULT-VALUE}).")
+    String redLimit = "0.9";
+
+    @Option(names = "--top", paramLabel = "N", description = "How many suggestions (default ${DEFAULT-VALUE}).")
+    String top = "10";
+
+    @Option(names = "--temperature", paramLabel = "C", description = "Temperature of the two-phase test, °C (default ${DEFAULT-VALUE}).")
+    String temperature = "25";
+
+    @Option(names = "--keep-two-phase", description = "Show blends predicted to split into two liquid phases (with a warning) instead of leaving them out.")
+    boolean keepTwoPhase;
+
+    int maxComponents() {
+        int k = Args.integer("--max-components", maxComponents);
+        if (k < 1 || k > BlendSearch.MAX_COMPONENTS) {
+            throw new InvalidInputException("--max-components", maxComponents, "must be 1, 2, 3 or 4");
+        }
+        return k;
+    }
+
+    int top() {
+        int n = Args.integer("--top", top);
+        if (n < 1 || n > 1000) {
+            throw new InvalidInputException("--top", top, "must be 1 to 1000");
+        }
+        return n;
+    }
+
+    RankBy rankBy() {
+        return RankBy.parse("--rank-by", rankBy);
+    }
+
+    double redLimit() {
+        double r = Args.number("--red-limit", redLimit);
+        if (!(r > 0) || r > 10) {
+            throw new InvalidInputException("--red-limit", redLimit, "must be above 0 and at most 10");
+        }
+        return r;
+    }
+
+    double kelvin() {
+        double c = Args.number("--temperature", temperature);
+        if (c < -100 || c > 200) {
+            throw new InvalidInputException("--temperature", temperature, "must lie between −100 and 200 °C");
+        }
+        return c + 273.15;
+    }
+
+    /** Builds the constraints, resolving names against the library; {@code alsoExclude} is left out too (the replaced solvent). */
+    BlendConstraints constraints(SolventLibrary lib, Solvent alsoExclude) {
+        List<Solvent> inc = lib.resolveList("--include", include);
+        List<Solvent> exc = new ArrayList<>(lib.resolveList("--exclude", exclude));
+        if (alsoExclude != null && !exc.contains(alsoExclude)) {
+            exc.add(alsoExclude);
+        }
+        Set<String> fams = families(lib, "--family", family);
+        Set<String> excFams = families(lib, "--exclude-family", excludeFamily);
+        List<BlendComponent> fixedComponents = new ArrayList<>();
+        for (String f : fixed) {
+            int colon = f.lastIndexOf(':');
+            if (colon <= 0) {
+                throw new InvalidInputException("--fixed", f, "write NAME:FRACTION, e.g. water:0.2");
+            }
+            Solvent s = lib.resolve("--fixed", f.substring(0, colon).strip());
+            double frac = fraction("--fixed", f, f.substring(colon + 1).strip());
+            if (frac <= 0 || frac >= 1) {
+                throw new InvalidInputException("--fixed", f, "the fraction must lie between 0 and 1 (exclusive)");
+            }
+            if (fixedComponents.stream().anyMatch(c -> c.solvent().equals(s))) {
+                throw new InvalidInputException("--fixed", f, s.name() + " is fixed twice");
+            }
+            if (exc.contains(s)) {
+                throw new InvalidInputException("--fixed", f, s.name() + " is also excluded");
+            }
+            fixedComponents.add(new BlendComponent(s, frac));
+        }
+        double fixedSum = fixedComponents.stream().mapToDouble(BlendComponent::fraction).sum();
+        if (fixedSum >= 1 - 1e-9) {
+            throw new InvalidInputException("--fixed", String.join(" ", fixed), "fixed fractions must leave room for the search (they sum to " + fixedSum + ")");
+        }
+        double min = fraction("--min-fraction", minFraction, minFraction);
+        double max = fraction("--max-fraction", maxFraction, maxFraction);
+        if (min >= 1) {
+            throw new InvalidInputException("--min-fraction", minFraction, "must be below 1");
+        }
+        if (max <= 0 || max < min) {
+            throw new InvalidInputException("--max-fraction", maxFraction, "must be above 0 and not below --min-fraction " + minFraction);
+        }
+        Map<Solvent, double[]> ranges = new LinkedHashMap<>();
+        for (String r : fractionRange) {
+            int colon = r.lastIndexOf(':');
+            String[] mm = colon > 0 ? r.substring(colon + 1).split("\\.\\.", -1) : new String[0];
+            if (mm.length != 2) {
+                throw new InvalidInputException("--fraction-range", r, "write NAME:MIN..MAX, e.g. ethanol:0.1..0.4");
+            }
+            Solvent s = lib.resolve("--fraction-range", r.substring(0, colon).strip());
+            double lo = fraction("--fraction-range", r, mm[0].strip());
+            double hi = fraction("--fraction-range", r, mm[1].strip());
+            if (lo > hi) {
+                throw new InvalidInputException("--fraction-range", r, "MIN is above MAX");
+            }
+            ranges.put(s, new double[] {lo, hi});
+        }
+        Double bpMin = null;
+        Double bpMax = null;
+        if (boilingRange != null) {
+            String[] parts = boilingRange.split("\\.\\.", -1);
+            if (parts.length != 2 || (parts[0].isBlank() && parts[1].isBlank())) {
+                throw new InvalidInputException("--boiling-range", boilingRange, "write MIN..MAX in °C, e.g. 60..120 (an end may be open: 60..)");
+            }
+            bpMin = parts[0].isBlank() ? null : Args.number("--boiling-range", parts[0].strip());
+            bpMax = parts[1].isBlank() ? null : Args.number("--boiling-range", parts[1].strip());
+            if (bpMin != null && bpMax != null && bpMin > bpMax) {
+                throw new InvalidInputException("--boiling-range", boilingRange, "the lower end is above the upper end");
+            }
+        }
+        Double flash = minFlashPoint == null ? null : Args.number("--min-flash-point", minFlashPoint);
+        Integer ich = null;
+        if (maxIchClass != null) {
+            ich = Args.integer("--max-ich-class", maxIchClass);
+            if (ich < 1 || ich > 3) {
+                throw new InvalidInputException("--max-ich-class", maxIchClass, "ICH Q3C classes are 1, 2 and 3");
+            }
+        }
+        Double cost = null;
+        if (maxCost != null) {
+            cost = Args.number("--max-cost", maxCost);
+            if (cost < 0) {
+                throw new InvalidInputException("--max-cost", maxCost, "must be ≥ 0");
+            }
+        }
+        try {
+            return new BlendConstraints(inc, exc, fams, excFams, fixedComponents, min, max, ranges, bpMin, bpMax, flash, ich, noCmr, cost);
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException("constraints", String.join(" ", fixed), e.getMessage());
+        }
+    }
+
+    private static Set<String> families(SolventLibrary lib, String field, List<String> values) {
+        Set<String> known = new LinkedHashSet<>();
+        lib.all().forEach(s -> {
+            if (s.family() != null) {
+                known.add(s.family().toLowerCase(Locale.ROOT));
+            }
+        });
+        Set<String> out = new LinkedHashSet<>();
+        for (String v : values) {
+            for (String f : v.split(",")) {
+                String k = f.strip().toLowerCase(Locale.ROOT);
+                if (k.isEmpty()) {
+                    continue;
+                }
+                if (!known.contains(k)) {
+                    throw new InvalidInputException(field, f.strip(), "no solvent of that family in the library; families: " + String.join(", ", known));
+                }
+                out.add(k);
+            }
+        }
+        return out;
+    }
+
+    /** A fraction written as 0.2 or 20%. */
+    static double fraction(String field, String whole, String text) {
+        String t = text.strip();
+        boolean pct = t.endsWith("%");
+        double v;
+        try {
+            v = Double.parseDouble(pct ? t.substring(0, t.length() - 1) : t);
+        } catch (NumberFormatException e) {
+            throw new InvalidInputException(field, whole, "'" + text + "' is not a fraction (write 0.2 or 20%)");
+        }
+        if (pct) {
+            v /= 100;
+        }
+        if (!(v >= 0 && v <= 1)) {
+            throw new InvalidInputException(field, whole, "a fraction must lie between 0 and 1, got " + text);
+        }
+        return v;
+    }
+}

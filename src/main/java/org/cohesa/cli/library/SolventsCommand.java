@@ -1,0 +1,216 @@
+package org.cohesa.cli.library;
+
+import org.cohesa.cli.CohesaSubcommand;
+import org.cohesa.cli.Output;
+import org.cohesa.cli.TextTable;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.cohesa.core.BadRowsException;
+import org.cohesa.core.InvalidInputException;
+import org.cohesa.core.RowError;
+import org.cohesa.core.solvent.Solvent;
+import org.cohesa.store.SolventCsv;
+import org.cohesa.store.SolventFields;
+import org.cohesa.store.SourceCatalog;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code cohesa solvents [TEXT]}: search the library; subcommands manage the user's own entries. */
+@Command(name = "solvents", description = "List or search the solvent library by name, synonym or CAS.",
+        subcommands = {SolventsCommand.Add.class, SolventsCommand.Import.class, SolventsCommand.Export.class,
+                SolventsCommand.Remove.class, SolventsCommand.Price.class})
+public final class SolventsCommand extends CohesaSubcommand {
+
+    @Parameters(arity = "0..1", paramLabel = "TEXT", description = "Part of a name, synonym or CAS number.")
+    String text;
+
+    @Option(names = "--mine", description = "Only your own entries.")
+    boolean mine;
+
+    @Override
+    protected void execute() {
+        List<Solvent> hits = ctx().library().search(text).stream().filter(s -> !mine || s.userEntry()).toList();
+        if (json()) {
+            SourceCatalog cat = SourceCatalog.bundled();
+            Output.json(out(), hits.stream().map(s -> SolventView.json(s, cat)).toList());
+            return;
+        }
+        TextTable t = new TextTable("name", "CAS", "dD", "dP", "dH", "Vm", "bp °C", "flash °C", "ICH", "origin");
+        for (Solvent s : hits) {
+            t.row(s.name(), s.cas(), s.hasHansen() ? Output.fmt(s.hansen().dD(), 1) : "-",
+                    s.hasHansen() ? Output.fmt(s.hansen().dP(), 1) : "-", s.hasHansen() ? Output.fmt(s.hansen().dH(), 1) : "-",
+                    Output.fmt(s.effectiveMolarVolume(), 1), Output.fmt(s.boilingPointC(), 1), Output.fmt(s.flashPointC(), 1),
+                    s.ichClass(), s.userEntry() ? "yours" : "bundled");
+        }
+        t.print(out());
+        out().println(hits.size() + " of " + ctx().library().size() + " solvents");
+    }
+
+    /** {@code cohesa solvents add}: a user entry from options. */
+    @Command(name = "add", description = "Add your own solvent. Any column of the CSV format can be set with --set column=value.")
+    static final class Add extends CohesaSubcommand {
+        @Option(names = "--name", required = true, description = "Name as chemists write it.") String name;
+        @Option(names = "--cas", description = "CAS number.") String cas;
+        @Option(names = "--dD", description = "δD, MPa^½.") String dD;
+        @Option(names = "--dP", description = "δP, MPa^½.") String dP;
+        @Option(names = "--dH", description = "δH, MPa^½.") String dH;
+        @Option(names = "--molar-volume", description = "cm³/mol.") String molarVolume;
+        @Option(names = "--boiling-point", description = "°C.") String boilingPoint;
+        @Option(names = "--flash-point", description = "closed cup, °C.") String flashPoint;
+        @Option(names = "--price", description = "Price per litre, any currency.") String price;
+        @Option(names = "--set", paramLabel = "COLUMN=VALUE", description = "Any other column, e.g. --set hazard_statements=\"H225 H319\".")
+        Map<String, String> set = new LinkedHashMap<>();
+
+        @Override
+        protected void execute() {
+            Map<String, String> row = new LinkedHashMap<>();
+            row.put("name", name);
+            put(row, "cas", cas);
+            put(row, "dD", dD);
+            put(row, "dP", dP);
+            put(row, "dH", dH);
+            put(row, "molar_volume", molarVolume);
+            put(row, "boiling_point_c", boilingPoint);
+            put(row, "flash_point_c", flashPoint);
+            put(row, "price_per_litre", price);
+            for (Map.Entry<String, String> e : set.entrySet()) {
+                if (!SolventFields.EXPORT_COLUMNS.contains(e.getKey())) {
+                    throw new InvalidInputException("--set", e.getKey() + "=" + e.getValue(), "unknown column '" + e.getKey() + "'");
+                }
+                row.put(e.getKey(), e.getValue());
+            }
+            List<RowError> errors = new ArrayList<>();
+            Solvent s = SolventFields.fromRow(row, 1, true, errors);
+            if (s == null) {
+                RowError e = errors.get(0);
+                throw new InvalidInputException(option(e.column()), e.value(), e.reason());
+            }
+            ctx().solvents().add(s);
+            if (json()) {
+                Output.json(out(), SolventView.json(ctx().library().resolve("name", s.name()), SourceCatalog.bundled()));
+            } else {
+                out().println("added " + s.name() + (s.hasHansen() ? "" : " (no Hansen parameters: left out of searches)"));
+            }
+        }
+
+        private static void put(Map<String, String> row, String col, String v) {
+            if (v != null) {
+                row.put(col, v);
+            }
+        }
+
+        private static String option(String column) {
+            return switch (column) {
+                case "molar_volume" -> "--molar-volume";
+                case "boiling_point_c" -> "--boiling-point";
+                case "flash_point_c" -> "--flash-point";
+                case "price_per_litre" -> "--price";
+                case "name", "cas", "dD", "dP", "dH" -> "--" + column;
+                default -> column;
+            };
+        }
+    }
+
+    /** {@code cohesa solvents import FILE}: all rows or none. */
+    @Command(name = "import", description = "Import your own solvents from a CSV file (columns as in 'solvents export'). Any bad row: nothing is imported and every bad cell is listed.")
+    static final class Import extends CohesaSubcommand {
+        @Parameters(paramLabel = "FILE") Path file;
+
+        @Override
+        protected void execute() throws IOException {
+            List<Solvent> rows;
+            try (Reader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+                rows = SolventCsv.read(file.toString(), r, true);
+            } catch (NoSuchFileException e) {
+                throw new InvalidInputException("FILE", file.toString(), "no such file");
+            } catch (java.nio.charset.MalformedInputException e) {
+                throw new BadRowsException(file.toString(), List.of(new RowError(0, "-", "-", "not UTF-8 text")));
+            }
+            ctx().solvents().importAll(rows);
+            if (json()) {
+                Output.json(out(), Map.of("imported", rows.size(), "names", rows.stream().map(Solvent::name).toList()));
+            } else {
+                out().println("imported " + rows.size() + " solvents from " + file);
+            }
+        }
+    }
+
+    /** {@code cohesa solvents export FILE}. */
+    @Command(name = "export", description = "Write solvents to a CSV file that 'solvents import' reads back.")
+    static final class Export extends CohesaSubcommand {
+        @Parameters(paramLabel = "FILE") Path file;
+        @Option(names = "--mine", description = "Only your own entries (default: the whole library).") boolean mine;
+
+        @Override
+        protected void execute() throws IOException {
+            List<Solvent> all = ctx().library().all().stream().filter(s -> !mine || s.userEntry()).toList();
+            Path tmp = file.toAbsolutePath().resolveSibling(file.getFileName() + ".part");
+            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
+                SolventCsv.write(w, all);
+            }
+            Files.move(tmp, file, java.nio.file.StandardCopyOption.REPLACE_EXISTING, java.nio.file.StandardCopyOption.ATOMIC_MOVE);
+            if (json()) {
+                Output.json(out(), Map.of("exported", all.size(), "file", file.toString()));
+            } else {
+                out().println("exported " + all.size() + " solvents to " + file);
+            }
+        }
+    }
+
+    /** {@code cohesa solvents remove NAME}. */
+    @Command(name = "remove", description = "Remove one of your own solvents.")
+    static final class Remove extends CohesaSubcommand {
+        @Parameters(paramLabel = "NAME") String name;
+
+        @Override
+        protected void execute() {
+            String resolved = ctx().library().resolve("NAME", name).name();
+            ctx().solvents().remove(name);
+            if (json()) {
+                Output.json(out(), Map.of("removed", resolved));
+            } else {
+                out().println("removed " + resolved);
+            }
+        }
+    }
+
+    /** {@code cohesa solvents price NAME PRICE}: the user's price, used by cost constraints. */
+    @Command(name = "price", description = "Set your price per litre for a solvent (any currency; 'none' clears it).")
+    static final class Price extends CohesaSubcommand {
+        @Parameters(index = "0", paramLabel = "NAME") String name;
+        @Parameters(index = "1", paramLabel = "PRICE") String price;
+
+        @Override
+        protected void execute() {
+            Double p = null;
+            if (!price.equalsIgnoreCase("none")) {
+                try {
+                    p = Double.parseDouble(price);
+                } catch (NumberFormatException e) {
+                    throw new InvalidInputException("PRICE", price, "not a number");
+                }
+            }
+            ctx().solvents().setPrice(name, p);
+            String resolved = ctx().library().resolve("NAME", name).name();
+            if (json()) {
+                Map<String, Object> m = new LinkedHashMap<>();
+                m.put("name", resolved);
+                m.put("price_per_litre", p);
+                Output.json(out(), m);
+            } else {
+                out().println(resolved + ": price per litre " + (p == null ? "cleared" : Output.fmt(p, 2)));
+            }
+        }
+    }
+}

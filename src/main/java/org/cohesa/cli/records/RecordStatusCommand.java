@@ -1,0 +1,43 @@
+package org.cohesa.cli.records;
+
+import org.cohesa.cli.CohesaSubcommand;
+import org.cohesa.cli.Output;
+
+import org.cohesa.core.InvalidInputException;
+import org.cohesa.core.records.RecordStatus;
+import org.cohesa.core.records.SubstitutionRecord;
+import org.cohesa.store.RecordRepository;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * Shared body of review / approve / reject: one status step, refused when illegal. The subclasses only
+ * name the step; a decision (approve, reject) needs a comment, taking a draft into review does not.
+ */
+abstract class RecordStatusCommand extends CohesaSubcommand {
+
+    @Parameters(paramLabel = "ID", description = "Record number.")
+    String id;
+
+    @Option(names = "--by", required = true, paramLabel = "NAME", description = "Who takes this step.")
+    String by;
+
+    @Option(names = "--comment", paramLabel = "TEXT", description = "Why (required to approve or reject).")
+    String comment;
+
+    protected abstract RecordStatus next();
+
+    @Override
+    protected void execute() {
+        long recordId = RecordSupport.parseId(id);
+        if (next() != RecordStatus.IN_REVIEW && (comment == null || comment.isBlank())) {
+            throw new InvalidInputException("--comment", String.valueOf(comment), "a decision needs a comment saying why");
+        }
+        SubstitutionRecord r = new RecordRepository(ctx().database()).changeStatus(recordId, next(), by, comment);
+        if (json()) {
+            Output.json(out(), RecordView.json(r, false));
+            return;
+        }
+        out().println("Record " + r.id() + " is now " + r.status().label() + " (" + by.strip() + ").");
+    }
+}

@@ -1,0 +1,221 @@
+package org.cohesa.cli.safety;
+
+import org.cohesa.cli.CohesaSubcommand;
+import org.cohesa.cli.Output;
+import org.cohesa.cli.TextTable;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.cohesa.core.safety.Cautions;
+import org.cohesa.core.safety.IchQ3c;
+import org.cohesa.core.safety.SafetyProfile;
+import org.cohesa.core.safety.SafetyProfiler;
+import org.cohesa.core.safety.SolventGuide;
+import org.cohesa.core.safety.VapourExposure;
+import org.cohesa.core.solvent.Blend;
+import org.cohesa.core.solvent.SolventLibrary;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** {@code cohesa hazards}: the safety and compliance profile of one solvent or a blend. */
+@Command(name = "hazards", description = {
+        "Safety and compliance profile of a solvent or blend: flash point, GHS flammable-liquid category, UN packing group,",
+        "hazard statements, CMR flags, saturated-vapour exposure, ICH Q3C(R8) class and the CHEM21 solvent-guide rank.",
+        "Results are screening estimates: the supplier's SDS, local codes and your site's licensed safety professionals decide."})
+public final class HazardsCommand extends CohesaSubcommand {
+
+    static final class Liquid {
+        @Option(names = "--solvent", paramLabel = "NAME", required = true, description = "One solvent (name, synonym or CAS number).")
+        String solvent;
+
+        @Option(names = "--blend", paramLabel = "NAME:FRACTION,...", required = true,
+                description = "A blend by volume fractions, e.g. \"ethanol:0.4,water:0.6\" (fractions sum to 1; 40%% also works).")
+        String blend;
+    }
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    Liquid liquid;
+
+    @Option(names = "--temperature", paramLabel = "C", defaultValue = "25",
+            description = "Liquid temperature for the vapour-exposure estimate, °C (default ${DEFAULT-VALUE}).")
+    double temperature;
+
+    @Option(names = "--ideal", description = "Use the ideal solution (activity coefficients = 1) on purpose, e.g. for comparison; the output names it.")
+    boolean ideal;
+
+    @Override
+    protected void execute() {
+        double celsius = temperature;
+        SolventLibrary lib = ctx().library();
+        Blend blend = liquid.solvent != null ? Blend.pure(lib.resolve("--solvent", liquid.solvent)) : lib.resolveBlend("--blend", liquid.blend);
+        SafetyProfile p = SafetyProfiler.profile(blend, celsius + 273.15, ideal);
+        List<String> cautions = Cautions.forProfile(p);
+        if (json()) {
+            Output.json(out(), json(p, cautions));
+        } else {
+            print(p, cautions);
+        }
+    }
+
+    static Map<String, Object> json(SafetyProfile p, List<String> cautions) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("liquid", p.blend().describe());
+        m.put("temperature_c", Output.round(p.temperatureC(), 2));
+        m.put("flash_point_c", Output.round(p.flashPoint().celsius(), 1));
+        m.put("flash_point_status", p.flashPoint().status().name().toLowerCase(Locale.ROOT));
+        m.put("flash_point_model", p.flashPoint().model());
+        m.put("flash_point_notes", p.flashPoint().detail());
+        m.put("initial_boiling_point_c", Output.round(p.initialBoilingPointC(), 1));
+        m.put("initial_boiling_point_basis", p.initialBoilingPointBasis());
+        m.put("ghs_flammable_category", p.ghs().category());
+        m.put("ghs_basis", p.ghs().basis() + " (GHS Rev. 10, Table 2.6.1)");
+        m.put("packing_group", p.packingGroup());
+        List<Map<String, Object>> hs = new ArrayList<>();
+        for (SafetyProfile.HazardLine h : p.hazardStatements()) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("code", h.code());
+            e.put("text", h.text());
+            List<Map<String, Object>> carriers = new ArrayList<>();
+            for (SafetyProfile.Carrier c : h.carriers()) {
+                carriers.add(Map.of("name", c.name(), "volume_percent", Output.round(c.volumePercent(), 2)));
+            }
+            e.put("components", carriers);
+            hs.add(e);
+        }
+        m.put("hazard_statements", hs);
+        List<Map<String, Object>> cmr = new ArrayList<>();
+        for (SafetyProfile.CmrEntry c : p.cmr()) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("name", c.component());
+            e.put("effect", c.effect());
+            e.put("code", c.code());
+            e.put("category", c.category());
+            e.put("volume_percent", Output.round(c.volumePercent(), 2));
+            cmr.add(e);
+        }
+        m.put("cmr", cmr);
+        m.put("aspiration_hazard", p.aspirationHazards());
+        m.put("peroxide_formers", p.peroxideFormers());
+        Double index = p.exposure().anyCounted() ? Output.round(p.exposure().index(), 3) : null;
+        m.put("exposure_index", index);
+        m.put("exposure_index_complete", p.exposure().complete());
+        m.put("vapour_hazard_ratio", index);
+        m.put("activity_model", p.activityModel());
+        List<Map<String, Object>> ex = new ArrayList<>();
+        for (VapourExposure.Component c : p.exposure().components()) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("name", c.name());
+            e.put("saturated_vapour_ppm", Output.round(c.saturatedPpm(), 1));
+            e.put("twa_ppm", c.twaPpm());
+            e.put("stel_ppm", c.stelPpm());
+            e.put("limit_used", c.limitKind());
+            e.put("jurisdiction", c.jurisdiction());
+            e.put("skin", c.skin());
+            e.put("ratio", Output.round(c.ratio(), 3));
+            e.put("status", c.status());
+            ex.add(e);
+        }
+        m.put("exposure", ex);
+        m.put("exposure_notes", p.exposure().notes());
+        List<Map<String, Object>> ich = new ArrayList<>();
+        for (SafetyProfile.IchLine l : p.ich()) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("name", l.component());
+            e.put("class", l.entry() == null ? null : l.entry().solventClass());
+            e.put("pde_mg_per_day", l.entry() == null ? null : l.entry().pdeMgPerDay());
+            e.put("limit_ppm", l.entry() == null ? null : l.entry().limitPpm());
+            e.put("basis", l.entry() == null ? "not listed in the guideline" : l.entry().fromMemory() ? "from memory" : "R8 addition, confirmed from a published summary");
+            ich.add(e);
+        }
+        m.put("ich_q3c", ich);
+        m.put("ich_q3c_version", IchQ3c.VERSION);
+        m.put("guide_rank", p.guideRank().label());
+        m.put("guide_method", SolventGuide.METHOD + (p.isPure() ? "" : "; blend = least favourable component (our rule)"));
+        List<Map<String, Object>> g = new ArrayList<>();
+        for (SafetyProfile.GuideLine l : p.guide()) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("name", l.component());
+            e.put("safety", l.scores().safety());
+            e.put("health", l.scores().health());
+            e.put("environment", l.scores().environment());
+            e.put("rank", l.scores().rank().label());
+            e.put("notes", l.scores().notes());
+            g.add(e);
+        }
+        m.put("guide_scores", g);
+        m.put("cautions", cautions);
+        return m;
+    }
+
+    private void print(SafetyProfile p, List<String> cautions) {
+        var o = out();
+        o.println("Safety profile of " + (p.isPure() ? p.components().get(0).name() : p.blend().describe() + " (volume fractions)"));
+        o.println();
+        String fp = p.flashPoint().celsius() == null ? switch (p.flashPoint().status()) {
+            case NOT_FLAMMABLE -> "none (not flammable in our data)";
+            case NONE_BELOW_BOILING -> "none below the boiling point";
+            default -> "unknown";
+        } : Output.fmt(p.flashPoint().celsius(), 1) + " °C";
+        TextTable t = new TextTable("item", "value", "basis");
+        t.row("flash point", fp, p.flashPoint().model());
+        for (String d : p.flashPoint().detail()) {
+            t.row("", "", d);
+        }
+        t.row("initial boiling point", p.initialBoilingPointC() == null ? "unknown" : Output.fmt(p.initialBoilingPointC(), 1) + " °C", p.initialBoilingPointBasis());
+        t.row("GHS flammable liquid", p.ghs().category() == null ? "not classified" : "Category " + p.ghs().category(), p.ghs().basis() + " (GHS Rev. 10)");
+        t.row("UN packing group", p.packingGroup() == null ? "not Class 3" : p.packingGroup(), "UN Model Regulations Rev. 23, 2.3.2.6");
+        boolean waterOnly = p.exposure().components().stream().allMatch(c -> c.status().startsWith("water"));
+        String index = waterOnly ? "not applicable (water)" : !p.exposure().anyCounted() ? "unknown (no limit known)"
+                : Output.fmt(p.exposure().index(), 2) + (p.exposure().complete() ? "" : " (lower bound)");
+        t.row(p.isPure() ? "vapour hazard ratio" : "mixture exposure index", index,
+                String.format(Locale.ROOT, "saturated vapour at %.1f °C / OEL, additive (ACGIH mixtures formula)", p.temperatureC()));
+        t.row("activity model", p.activityModel() == null ? "none" : p.activityModel(), "");
+        t.row("solvent guide rank", p.guideRank().label(), "CHEM21 (Prat et al. 2016)" + (p.isPure() ? "" : "; least favourable component"));
+        t.print(o);
+
+        o.println();
+        o.println("Hazard statements (component, % by volume):");
+        if (p.hazardStatements().isEmpty()) {
+            o.println("  none in our data");
+        }
+        for (SafetyProfile.HazardLine h : p.hazardStatements()) {
+            StringBuilder who = new StringBuilder();
+            for (SafetyProfile.Carrier c : h.carriers()) {
+                who.append(who.length() == 0 ? "" : ", ").append(c.name()).append(' ').append(Output.fmt(c.volumePercent(), 0)).append('%');
+            }
+            o.println("  " + h.code() + "  " + h.text() + "  [" + who + "]");
+        }
+
+        o.println();
+        TextTable ex = new TextTable("component", "vapour ppm", "limit ppm", "kind", "jurisdiction", "skin", "ratio", "status");
+        for (VapourExposure.Component c : p.exposure().components()) {
+            ex.row(c.name(), Output.fmt(c.saturatedPpm(), 0), Output.fmt(c.limitPpm(), 1), c.limitKind(), c.jurisdiction(), c.skin() ? "yes" : "no",
+                    Output.fmt(c.ratio(), 2), c.status());
+        }
+        ex.print(o);
+        p.exposure().notes().forEach(n -> o.println("  note: " + n));
+
+        o.println();
+        TextTable ich = new TextTable("component", "ICH class", "PDE mg/day", "limit ppm", "basis", "CHEM21 S/H/E", "rank");
+        for (int i = 0; i < p.ich().size(); i++) {
+            SafetyProfile.IchLine l = p.ich().get(i);
+            SolventGuide.Scores s = p.guide().get(i).scores();
+            ich.row(l.component(), l.entry() == null ? "not listed" : l.entry().solventClass(), l.entry() == null ? null : Output.fmt(l.entry().pdeMgPerDay(), 1),
+                    l.entry() == null ? null : Output.fmt(l.entry().limitPpm(), 0),
+                    l.entry() == null ? "" : l.entry().fromMemory() ? "from memory" : "R8 summary",
+                    s.safety() + "/" + s.health() + "/" + s.environment(), s.rank().label());
+        }
+        ich.print(o);
+        o.println("  " + IchQ3c.VERSION + "; " + SolventGuide.METHOD);
+
+        o.println();
+        o.println("Cautions:");
+        for (String c : cautions) {
+            o.println("  - " + c);
+        }
+    }
+}
