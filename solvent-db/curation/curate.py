@@ -17,23 +17,27 @@ import os
 import re
 import sys
 
+sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
+import structure_columns  # noqa: E402  (SMILES and families columns)
+import vapour  # noqa: E402  (vapour-pressure correlation columns)
+
 HERE = os.path.dirname(os.path.abspath(__file__))
 DB_DIR = os.path.dirname(HERE)
 REPO = os.path.dirname(DB_DIR)
 
 COLUMNS = [
-    "name", "synonyms", "cas", "formula", "family",
+    "name", "synonyms", "cas", "formula", "smiles", "family", "families",
     "molar_mass", "density", "molar_volume",
     "dD", "dP", "dH",
     "boiling_point_c", "melting_point_c", "flash_point_c", "autoignition_c", "lfl_pct", "ufl_pct",
-    "antoine_a", "antoine_b", "antoine_c", "antoine_tmin_k", "antoine_tmax_k",
+    *vapour.VP_COLUMNS,
     "hvap_kj_mol",
     "oel_twa_ppm", "oel_stel_ppm", "oel_ceiling_ppm", "oel_skin", "oel_jurisdiction",
     "hazard_statements", "peroxide_former", "ich_class",
     "unifac_groups",
-    "src_identity", "src_molar_mass", "src_density", "src_hsp", "src_boiling_point",
+    "src_identity", "src_smiles", "src_molar_mass", "src_density", "src_hsp", "src_boiling_point",
     "src_melting_point", "src_flash_point", "src_autoignition", "src_flammability_limits",
-    "src_antoine", "src_hvap", "src_oel", "src_hazard_statements", "src_peroxide_former",
+    "src_vapour_pressure", "src_hvap", "src_oel", "src_hazard_statements", "src_peroxide_former",
     "src_ich", "src_unifac",
     "note",
 ]
@@ -67,8 +71,6 @@ ICH_CONFIRMED_R8 = {"96-47-9", "5614-37-9", "75-65-0"}
 # toxicological data", no PDE) is therefore written into the note, not the ich_class column.
 # Set to True once the model accepts 4.
 ICH_WRITE_CLASS_4 = False
-# Antoine fits whose value at the normal boiling point is off by more than this are dropped.
-ANTOINE_MAX_DEV_AT_TB = 0.05
 
 
 # The note text that marks a solvent without a flash point because it does not burn in the standard tests.
@@ -242,7 +244,8 @@ def main(argv):
 
     alshehri = by_cas(p("alshehri-hansen-solubility-parameters.tsv"))
     schrier = by_cas(p("schrier-hansen-solubility-parameters.tsv"))
-    antoine = by_cas(p("antoine-collection-poling.tsv"))
+    vapour_tables = vapour.load_tables(ref)
+    structures = structure_columns.read_structures()
     hvap = by_cas(p("crc-handbook-heat-of-vaporization.tsv"))
     phys = by_cas(p("physical-constants-of-organic-compounds.csv"))
     iec = by_cas(p("iec-60079-20-1-2010.tsv"))
@@ -276,6 +279,7 @@ def main(argv):
         r["synonyms"] = m["synonyms"]
         r["cas"] = cas
         r["family"] = m["family"]
+        structure_columns.fill_families(r, m)
 
         # identity and formula
         pub = ids.get(cas)
@@ -288,6 +292,7 @@ def main(argv):
             formula = hill(parse_formula(m["formula"])) if m["formula"] else ""
             r["src_identity"] = "memory-identity"
         r["formula"] = formula
+        structure_columns.fill_smiles(r, cas, pub, structures, notes)
         crc_formula = hvap.get(cas, [None, None, ""])[2]
         if formula and crc_formula and hill(parse_formula(crc_formula)) != formula:
             raise SystemExit(f"{cas}: formula {formula} disagrees with CRC {crc_formula}")
@@ -405,19 +410,8 @@ def main(argv):
                     r["src_flammability_limits"] = key
                     break
 
-        # Antoine (log10 P/Pa = A - B/(T/K + C)), checked against the normal boiling point
-        if cas in antoine:
-            a, b, c, tmin, tmax = (antoine[cas][i].strip() for i in range(2, 7))
-            ok = True
-            if tb is not None and float(tmin) <= tb <= float(tmax):
-                p_tb = 10 ** (float(a) - float(b) / (tb + float(c)))
-                if abs(p_tb / 101325.0 - 1) > ANTOINE_MAX_DEV_AT_TB:
-                    ok = False
-                    notes.append(f"Poling Antoine fit dropped: gives {p_tb:.0f} Pa at the boiling point")
-            if ok:
-                r["antoine_a"], r["antoine_b"], r["antoine_c"] = a, b, c
-                r["antoine_tmin_k"], r["antoine_tmax_k"] = tmin, tmax
-                r["src_antoine"] = "poling-2000-antoine"
+        # vapour pressure: one correlation per solvent, checked against the normal boiling point (curation/vapour.py)
+        r.update(vapour.choose(cas, tb, vapour_tables, notes))
 
         # enthalpy of vaporisation at 25 °C (kJ/mol)
         if cas in hvap and num(hvap[cas][5]) is not None:
@@ -514,17 +508,17 @@ def coverage_table(rows):
                 keys[r[col]] = keys.get(r[col], 0) + 1
     lines += ["", "Values per source key:", "", "| source key | values |", "|---|---:|"]
     lines += [f"| `{k}` | {keys[k]} |" for k in sorted(keys)]
-    # Solvents without Antoine constants, so that the drying and blend flash-point code knows the gaps: with a
-    # boiling point and ΔHvap the app can only estimate the vapour pressure (Clausius–Clapeyron), without them
-    # it has none.
-    for title, want_estimate in (("without Antoine constants, vapour pressure only estimated from the boiling "
-                                  "point and ΔHvap (Clausius–Clapeyron)", True),
-                                 ("without any vapour-pressure data (no Antoine constants, no boiling point "
+    # Solvents without a stored vapour-pressure correlation, so that the drying and blend flash-point code knows
+    # the gaps: with a boiling point and ΔHvap the app can only estimate the vapour pressure at run time
+    # (Clausius–Clapeyron), without them it has none.
+    for title, want_estimate in (("without a vapour-pressure correlation, vapour pressure only estimated at run time "
+                                  "from the boiling point and ΔHvap (Clausius–Clapeyron)", True),
+                                 ("without any vapour-pressure data (no correlation, no boiling point "
                                   "and ΔHvap pair)", False)):
         by_family = {}
         for r in rows:
             estimate = bool(r["boiling_point_c"] and r["hvap_kj_mol"])
-            if not r["antoine_a"] and estimate == want_estimate:
+            if not r["vp_equation"] and estimate == want_estimate:
                 by_family.setdefault(r["family"], []).append(r["name"])
         lines += ["", f"Solvents {title}: {sum(map(len, by_family.values()))}", "",
                   "| family | solvents |", "|---|---|"]

@@ -64,7 +64,33 @@ public final class Migrations {
                     "CREATE TRIGGER record_event_append_only_update BEFORE UPDATE ON record_event"
                             + " BEGIN SELECT RAISE(ABORT, 'substitution record events are append-only'); END",
                     "CREATE TRIGGER record_event_append_only_delete BEFORE DELETE ON record_event"
-                            + " BEGIN SELECT RAISE(ABORT, 'substitution record events are append-only'); END")));
+                            + " BEGIN SELECT RAISE(ABORT, 'substitution record events are append-only'); END")),
+            new Migration(5, "solvent model: SMILES, every family, and a general vapour-pressure correlation replacing the Antoine columns",
+                    List.of(
+                    "ALTER TABLE solvent ADD COLUMN smiles TEXT",
+                    "ALTER TABLE solvent ADD COLUMN families TEXT",
+                    "ALTER TABLE solvent ADD COLUMN vp_equation TEXT",
+                    "ALTER TABLE solvent ADD COLUMN vp_c1 REAL",
+                    "ALTER TABLE solvent ADD COLUMN vp_c2 REAL",
+                    "ALTER TABLE solvent ADD COLUMN vp_c3 REAL",
+                    "ALTER TABLE solvent ADD COLUMN vp_c4 REAL",
+                    "ALTER TABLE solvent ADD COLUMN vp_c5 REAL",
+                    "ALTER TABLE solvent ADD COLUMN vp_tmin_k REAL",
+                    "ALTER TABLE solvent ADD COLUMN vp_tmax_k REAL",
+                    "ALTER TABLE solvent ADD COLUMN vp_tc_k REAL",
+                    "ALTER TABLE solvent ADD COLUMN vp_pc_pa REAL",
+                    // the user's Antoine constants become an antoine-log10 correlation, their source key moves along
+                    "UPDATE solvent SET vp_equation = 'antoine-log10', vp_c1 = antoine_a, vp_c2 = antoine_b, vp_c3 = antoine_c,"
+                            + " vp_tmin_k = antoine_tmin_k, vp_tmax_k = antoine_tmax_k WHERE antoine_a IS NOT NULL",
+                    "UPDATE solvent SET sources = json_remove(json_set(sources, '$.vapour_pressure', json_extract(sources, '$.antoine')), '$.antoine')"
+                            + " WHERE json_valid(sources) AND json_extract(sources, '$.antoine') IS NOT NULL",
+                    "ALTER TABLE solvent DROP COLUMN antoine_a",
+                    "ALTER TABLE solvent DROP COLUMN antoine_b",
+                    "ALTER TABLE solvent DROP COLUMN antoine_c",
+                    "ALTER TABLE solvent DROP COLUMN antoine_tmin_k",
+                    "ALTER TABLE solvent DROP COLUMN antoine_tmax_k",
+                    // rebuild the bundled rows from the shipped table on the next start, with the new columns filled
+                    "DELETE FROM meta WHERE key = 'bundled_solvents_sha256'")));
 
     private Migrations() {
     }

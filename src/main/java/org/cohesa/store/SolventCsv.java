@@ -46,6 +46,7 @@ public final class SolventCsv {
                 throw new BadRowsException(source, errors);
             }
             Set<String> known = new HashSet<>(SolventFields.EXPORT_COLUMNS);
+            known.addAll(SolventFields.LEGACY_COLUMNS);
             for (String h : header) {
                 if (!known.contains(h)) {
                     errors.add(new RowError(1, h, h, "unknown column; known columns are those of 'cohesa solvents export'"));

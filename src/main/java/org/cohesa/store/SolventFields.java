@@ -13,6 +13,7 @@ import org.cohesa.core.solvent.ExposureLimit;
 import org.cohesa.core.solvent.FireData;
 import org.cohesa.core.solvent.Solvent;
 import org.cohesa.core.solvent.UnifacAssignment;
+import org.cohesa.core.solvent.VapourCorrelation;
 
 /**
  * The one definition of a solvent's fields as text: the CSV columns of {@code solvent-db/solvents.csv},
@@ -22,17 +23,27 @@ public final class SolventFields {
 
     /** Value columns, in file order. */
     public static final List<String> VALUES = List.of(
-            "name", "synonyms", "cas", "formula", "family",
+            "name", "synonyms", "cas", "formula", "smiles", "family", "families",
             "molar_mass", "density", "molar_volume", "dD", "dP", "dH",
             "boiling_point_c", "melting_point_c", "flash_point_c", "autoignition_c", "lfl_pct", "ufl_pct",
-            "antoine_a", "antoine_b", "antoine_c", "antoine_tmin_k", "antoine_tmax_k",
+            "vp_equation", "vp_c1", "vp_c2", "vp_c3", "vp_c4", "vp_c5", "vp_tmin_k", "vp_tmax_k", "vp_tc_k", "vp_pc_pa",
             "hvap_kj_mol", "oel_twa_ppm", "oel_stel_ppm", "oel_ceiling_ppm", "oel_skin", "oel_jurisdiction",
             "hazard_statements", "peroxide_former", "ich_class", "unifac_groups");
 
     /** Property groups that carry a source key; the CSV column is {@code src_} + group. */
     public static final List<String> SOURCE_GROUPS = List.of(
-            "identity", "molar_mass", "density", "hsp", "boiling_point", "melting_point", "flash_point", "autoignition",
-            "flammability_limits", "antoine", "hvap", "oel", "hazard_statements", "peroxide_former", "ich", "unifac");
+            "identity", "smiles", "molar_mass", "density", "hsp", "boiling_point", "melting_point", "flash_point", "autoignition",
+            "flammability_limits", "vapour_pressure", "hvap", "oel", "hazard_statements", "peroxide_former", "ich", "unifac");
+
+    /** The vapour-pressure coefficient columns c1…c5 (their meaning depends on {@code vp_equation}, see solvent-db/README.md). */
+    public static final List<String> VP_COEFFICIENTS = List.of("vp_c1", "vp_c2", "vp_c3", "vp_c4", "vp_c5");
+
+    /**
+     * Older columns still accepted in user files (schema before version 5): the Antoine log10/Pa/K constants and their
+     * source key. They are read as an {@code antoine-log10} correlation and never written.
+     */
+    public static final List<String> LEGACY_COLUMNS = List.of(
+            "antoine_a", "antoine_b", "antoine_c", "antoine_tmin_k", "antoine_tmax_k", "src_antoine");
 
     /** Columns of a user export: values, price, sources, note. */
     public static final List<String> EXPORT_COLUMNS;
@@ -48,6 +59,7 @@ public final class SolventFields {
     private static final List<String> NUMERIC = List.of(
             "molar_mass", "density", "molar_volume", "dD", "dP", "dH",
             "boiling_point_c", "melting_point_c", "flash_point_c", "autoignition_c", "lfl_pct", "ufl_pct",
+            "vp_c1", "vp_c2", "vp_c3", "vp_c4", "vp_c5", "vp_tmin_k", "vp_tmax_k", "vp_tc_k", "vp_pc_pa",
             "antoine_a", "antoine_b", "antoine_c", "antoine_tmin_k", "antoine_tmax_k",
             "hvap_kj_mol", "oel_twa_ppm", "oel_stel_ppm", "oel_ceiling_ppm", "price_per_litre");
 
@@ -93,22 +105,7 @@ public final class SolventFields {
             errors.add(new RowError(line, "melting_point_c", c.raw("melting_point_c"), "melting point must be below the boiling point " + bp));
         }
         FireData fire = new FireData(c.number("flash_point_c"), c.number("autoignition_c"), c.percent("lfl_pct"), c.percent("ufl_pct"));
-        Antoine antoine = null;
-        Double a = c.number("antoine_a");
-        Double b = c.number("antoine_b");
-        Double cc = c.number("antoine_c");
-        Double tmin = c.positive("antoine_tmin_k");
-        Double tmax = c.positive("antoine_tmax_k");
-        int antoineCount = (a == null ? 0 : 1) + (b == null ? 0 : 1) + (cc == null ? 0 : 1) + (tmin == null ? 0 : 1) + (tmax == null ? 0 : 1);
-        if (antoineCount == 5) {
-            if (tmax <= tmin) {
-                errors.add(new RowError(line, "antoine_tmax_k", c.raw("antoine_tmax_k"), "must be above antoine_tmin_k " + tmin));
-            } else {
-                antoine = new Antoine(a, b, cc, tmin, tmax);
-            }
-        } else if (antoineCount != 0 && errors.size() == before) {
-            errors.add(new RowError(line, "antoine_a..antoine_tmax_k", c.raw("antoine_a"), "give all five Antoine values or none"));
-        }
+        VapourCorrelation vapour = vapourCorrelation(c, line, errors, before);
         Double hvap = c.positive("hvap_kj_mol");
         ExposureLimit oel = new ExposureLimit(c.positive("oel_twa_ppm"), c.positive("oel_stel_ppm"), c.positive("oel_ceiling_ppm"),
                 c.flag("oel_skin"), c.text("oel_jurisdiction"));
@@ -150,13 +147,18 @@ public final class SolventFields {
                 sources.put(g, s);
             }
         }
+        if (!sources.containsKey("vapour_pressure") && c.text("src_antoine") != null) {
+            sources.put("vapour_pressure", c.text("src_antoine"));
+        }
         if (errors.size() > before) {
             return null;
         }
         List<String> synonyms = c.text("synonyms") == null ? List.of()
                 : Arrays.stream(c.text("synonyms").split(";")).map(String::strip).filter(x -> !x.isEmpty()).toList();
-        return new Solvent(name, synonyms, cas, c.text("formula"), c.text("family"), mm, rho, vm,
-                hspCount == 3 ? new HansenParameters(dD, dP, dH) : null, bp, mp, fire, antoine, hvap, oel, hazards, peroxide,
+        List<String> families = c.text("families") == null ? List.of()
+                : Arrays.stream(c.text("families").split(";")).map(String::strip).filter(x -> !x.isEmpty()).toList();
+        return new Solvent(name, synonyms, cas, c.text("formula"), c.text("smiles"), c.text("family"), families, mm, rho, vm,
+                hspCount == 3 ? new HansenParameters(dD, dP, dH) : null, bp, mp, fire, vapour, hvap, oel, hazards, peroxide,
                 ich, unifac, price, sources, c.text("note"), userEntry);
     }
 
@@ -167,7 +169,9 @@ public final class SolventFields {
         r.put("synonyms", String.join(";", s.synonyms()));
         r.put("cas", text(s.cas()));
         r.put("formula", text(s.formula()));
+        r.put("smiles", text(s.smiles()));
         r.put("family", text(s.family()));
+        r.put("families", String.join(";", s.families()));
         r.put("molar_mass", num(s.molarMass()));
         r.put("density", num(s.density()));
         r.put("molar_volume", num(s.molarVolume()));
@@ -181,12 +185,15 @@ public final class SolventFields {
         r.put("autoignition_c", num(s.fire().autoignitionC()));
         r.put("lfl_pct", num(s.fire().lflPct()));
         r.put("ufl_pct", num(s.fire().uflPct()));
-        Antoine a = s.antoine();
-        r.put("antoine_a", a == null ? "" : num(a.a()));
-        r.put("antoine_b", a == null ? "" : num(a.b()));
-        r.put("antoine_c", a == null ? "" : num(a.c()));
-        r.put("antoine_tmin_k", a == null ? "" : num(a.tminK()));
-        r.put("antoine_tmax_k", a == null ? "" : num(a.tmaxK()));
+        VapourCorrelation vp = s.vapourPressure();
+        r.put("vp_equation", vp == null ? "" : vp.equation());
+        for (int i = 0; i < VP_COEFFICIENTS.size(); i++) {
+            r.put(VP_COEFFICIENTS.get(i), vp == null ? "" : num(vp.coefficients().get(i)));
+        }
+        r.put("vp_tmin_k", vp == null ? "" : num(vp.tminK()));
+        r.put("vp_tmax_k", vp == null ? "" : num(vp.tmaxK()));
+        r.put("vp_tc_k", vp == null ? "" : num(vp.tcK()));
+        r.put("vp_pc_pa", vp == null ? "" : num(vp.pcPa()));
         r.put("hvap_kj_mol", num(s.hvapKjPerMol()));
         r.put("oel_twa_ppm", num(s.exposure().twaPpm()));
         r.put("oel_stel_ppm", num(s.exposure().stelPpm()));
@@ -201,8 +208,74 @@ public final class SolventFields {
         for (String g : SOURCE_GROUPS) {
             r.put("src_" + g, text(s.sources().get(g)));
         }
+        if (vp != null && r.get("src_vapour_pressure").isEmpty() && vp.source() != null) {
+            r.put("src_vapour_pressure", vp.source());
+        }
         r.put("note", text(s.note()));
         return r;
+    }
+
+    /**
+     * The vapour-pressure correlation of a row: the {@code vp_*} columns, or the older five Antoine columns of a user
+     * file. Every problem is added to {@code errors}; returns null when the row gives none or has errors.
+     */
+    private static VapourCorrelation vapourCorrelation(Cells c, long line, List<RowError> errors, int before) {
+        String source = c.text("src_vapour_pressure") != null ? c.text("src_vapour_pressure") : c.text("src_antoine");
+        List<String> legacy = List.of("antoine_a", "antoine_b", "antoine_c", "antoine_tmin_k", "antoine_tmax_k");
+        List<String> modern = new ArrayList<>(VP_COEFFICIENTS);
+        modern.addAll(List.of("vp_tmin_k", "vp_tmax_k", "vp_tc_k", "vp_pc_pa"));
+        boolean anyLegacy = legacy.stream().anyMatch(col -> c.text(col) != null);
+        boolean anyModern = c.text("vp_equation") != null || modern.stream().anyMatch(col -> c.text(col) != null);
+        if (anyLegacy && anyModern) {
+            errors.add(new RowError(line, "antoine_a", c.raw("antoine_a"),
+                    "give the vapour pressure either as vp_equation and vp_* columns or as the older antoine_* columns, not both"));
+            return null;
+        }
+        if (anyLegacy) {
+            Double a = c.number("antoine_a");
+            Double b = c.number("antoine_b");
+            Double cc = c.number("antoine_c");
+            Double tmin = c.positive("antoine_tmin_k");
+            Double tmax = c.positive("antoine_tmax_k");
+            int count = (a == null ? 0 : 1) + (b == null ? 0 : 1) + (cc == null ? 0 : 1) + (tmin == null ? 0 : 1) + (tmax == null ? 0 : 1);
+            if (errors.size() > before) {
+                return null;
+            }
+            if (count != 5) {
+                errors.add(new RowError(line, "antoine_a..antoine_tmax_k", c.raw("antoine_a"), "give all five Antoine values or none"));
+                return null;
+            }
+            if (tmax <= tmin) {
+                errors.add(new RowError(line, "antoine_tmax_k", c.raw("antoine_tmax_k"), "must be above antoine_tmin_k " + tmin));
+                return null;
+            }
+            return new Antoine(a, b, cc, tmin, tmax, source);
+        }
+        if (!anyModern) {
+            return null;
+        }
+        List<Double> coefficients = new ArrayList<>();
+        for (String col : VP_COEFFICIENTS) {
+            coefficients.add(c.number(col));
+        }
+        Double tmin = c.positive("vp_tmin_k");
+        Double tmax = c.positive("vp_tmax_k");
+        Double tc = c.positive("vp_tc_k");
+        Double pc = c.positive("vp_pc_pa");
+        if (errors.size() > before) {
+            return null;
+        }
+        String equation = c.text("vp_equation");
+        if (equation == null) {
+            errors.add(new RowError(line, "vp_equation", "", "name the equation of the vp_* coefficients (e.g. antoine-log10, dippr-101, wagner-2.5-5)"));
+            return null;
+        }
+        try {
+            return VapourCorrelation.of(equation, coefficients, tmin, tmax, tc, pc, source);
+        } catch (IllegalArgumentException e) {
+            errors.add(new RowError(line, "vp_equation", equation, e.getMessage()));
+            return null;
+        }
     }
 
     /** CAS check digit: the last digit equals Σ(i·dᵢ) mod 10 over the other digits, counted from the right. */

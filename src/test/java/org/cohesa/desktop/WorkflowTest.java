@@ -111,7 +111,7 @@ class WorkflowTest {
             fx.workbench.show(Screen.BLENDS);
             fx.workbench.blendModel().maxComponents.set(2);
             fx.workbench.blendModel().top.set(5);
-            // the plant's own solvents (each has Antoine constants in the library, so the drying path can be computed)
+            // the plant's own solvents (each has a vapour-pressure correlation in the library, so the drying path can be computed)
             robot.lookup("#blend-include").queryAs(TextField.class).setText(
                     "acetone;ethanol;toluene;ethyl acetate;n-butyl acetate;1-butanol;2-propanol;methyl ethyl ketone;tetrahydrofuran");
             robot.lookup("#blend-search").queryAs(Button.class).fire();
@@ -126,7 +126,7 @@ class WorkflowTest {
         assertTrue(first.suggestion().blend().red() < 1, "the best suggestion lies inside the target sphere");
         for (var r : blends.getItems()) {
             assertTrue(r.blend().size() <= 2);
-            assertTrue(r.blend().components().stream().allMatch(c -> c.solvent().antoine() != null), "only the included solvents");
+            assertTrue(r.blend().components().stream().allMatch(c -> c.solvent().vapourPressure() != null), "only the included solvents");
             assertTrue(r.blend().components().stream().noneMatch(c -> c.solvent().isCmr()), "CMR solvents are left out by default");
         }
         robot.interact(() -> blends.getSelectionModel().clearAndSelect(0));

@@ -73,6 +73,7 @@ class BundledDataCrossCheckTest {
 
     static {
         GROUP_PRIMARY.put("identity", "cas");
+        GROUP_PRIMARY.put("smiles", "smiles");
         GROUP_PRIMARY.put("molar_mass", "molar_mass");
         GROUP_PRIMARY.put("density", "density");
         GROUP_PRIMARY.put("hsp", "dD");
@@ -81,7 +82,7 @@ class BundledDataCrossCheckTest {
         GROUP_PRIMARY.put("flash_point", "flash_point_c");
         GROUP_PRIMARY.put("autoignition", "autoignition_c");
         GROUP_PRIMARY.put("flammability_limits", "lfl_pct");
-        GROUP_PRIMARY.put("antoine", "antoine_a");
+        GROUP_PRIMARY.put("vapour_pressure", "vp_equation");
         GROUP_PRIMARY.put("hvap", "hvap_kj_mol");
         GROUP_PRIMARY.put("oel", "oel_jurisdiction");
         GROUP_PRIMARY.put("hazard_statements", "hazard_statements");
@@ -428,7 +429,7 @@ class BundledDataCrossCheckTest {
         Map<String, List<String>> poling = byCas("antoine-collection-poling.tsv");
         List<String> bad = new ArrayList<>();
         for (Map<String, String> r : rows) {
-            if (!r.get("src_antoine").equals("poling-2000-antoine")) {
+            if (!r.get("src_vapour_pressure").equals("poling-2000-antoine")) {
                 continue;
             }
             List<String> t = poling.get(r.get("cas"));
@@ -436,7 +437,10 @@ class BundledDataCrossCheckTest {
                 bad.add(r.get("name") + ": cites Poling, which has no row for " + r.get("cas"));
                 continue;
             }
-            String[] cols = {"antoine_a", "antoine_b", "antoine_c", "antoine_tmin_k", "antoine_tmax_k"};
+            if (!r.get("vp_equation").equals("antoine-log10")) {
+                bad.add(r.get("name") + ": Poling's table is log10 Antoine, vp_equation is '" + r.get("vp_equation") + "'");
+            }
+            String[] cols = {"vp_c1", "vp_c2", "vp_c3", "vp_tmin_k", "vp_tmax_k"};
             for (int i = 0; i < cols.length; i++) {
                 if (Double.parseDouble(t.get(i + 2).strip()) != num(r, cols[i])) {
                     bad.add(r.get("name") + " " + cols[i] + ": " + r.get(cols[i]) + " vs " + t.get(i + 2));
@@ -445,8 +449,8 @@ class BundledDataCrossCheckTest {
             Double tb = num(r, "boiling_point_c");
             if (tb != null) {
                 double tk = tb + 273.15;
-                if (tk >= num(r, "antoine_tmin_k") && tk <= num(r, "antoine_tmax_k")) {
-                    double p = Math.pow(10, num(r, "antoine_a") - num(r, "antoine_b") / (tk + num(r, "antoine_c")));
+                if (tk >= num(r, "vp_tmin_k") && tk <= num(r, "vp_tmax_k")) {
+                    double p = Math.pow(10, num(r, "vp_c1") - num(r, "vp_c2") / (tk + num(r, "vp_c3")));
                     if (Math.abs(p / 101325.0 - 1) > 0.05) {
                         bad.add(r.get("name") + ": Antoine gives " + Math.round(p) + " Pa at Tb " + tb + " °C");
                     }

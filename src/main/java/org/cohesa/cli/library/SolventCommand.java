@@ -52,7 +52,8 @@ public final class SolventCommand extends CohesaSubcommand {
 
     static String sourceGroup(String column) {
         return switch (column) {
-            case "name", "synonyms", "cas", "formula", "family" -> "identity";
+            case "name", "synonyms", "cas", "formula", "family", "families" -> "identity";
+            case "smiles" -> "smiles";
             case "molar_mass" -> "molar_mass";
             case "density", "molar_volume" -> "density";
             case "dD", "dP", "dH" -> "hsp";
@@ -66,7 +67,7 @@ public final class SolventCommand extends CohesaSubcommand {
             case "peroxide_former" -> "peroxide_former";
             case "ich_class" -> "ich";
             case "unifac_groups" -> "unifac";
-            default -> column.startsWith("antoine") ? "antoine" : column.startsWith("oel") ? "oel" : column;
+            default -> column.startsWith("vp_") ? "vapour_pressure" : column.startsWith("oel") ? "oel" : column;
         };
     }
 }

@@ -19,6 +19,8 @@ public final class SolventView {
             String v = row.get(col);
             if (col.equals("synonyms")) {
                 m.put(col, s.synonyms());
+            } else if (col.equals("families")) {
+                m.put(col, s.families());
             } else if (col.equals("hazard_statements")) {
                 m.put(col, s.hazardStatements());
             } else if (col.equals("oel_skin")) {

@@ -18,7 +18,7 @@ public final class Evaporation {
     private Evaporation() {
     }
 
-    /** Vapour pressure at 25 °C in kPa, or 0 when the library has neither Antoine constants nor Tb and ΔHvap (treated as non-volatile). */
+    /** Vapour pressure at 25 °C in kPa, or 0 when the library has no vapour-pressure correlation nor Tb and ΔHvap (treated as non-volatile). */
     public static double vapourPressureKpa(Solvent s) {
         return VapourPressure.of(s).map(v -> v.pressurePa(T25) / 1000.0).orElse(0.0);
     }

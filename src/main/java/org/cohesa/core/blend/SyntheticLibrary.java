@@ -42,7 +42,7 @@ public final class SyntheticLibrary {
             List<String> hz = HAZARD_SETS.get(rnd.nextInt(HAZARD_SETS.size()));
             double bp = 40 + 180 * rnd.nextDouble();
             double price = Math.round((1 + 20 * rnd.nextDouble()) * 100) / 100.0;
-            out.add(new Solvent(String.format("synthetic-%04d", i + 1), List.of(), null, null, FAMILIES.get(rnd.nextInt(FAMILIES.size())), 100.0, 0.9,
+            out.add(new Solvent(String.format("synthetic-%04d", i + 1), List.of(), null, null, null, FAMILIES.get(rnd.nextInt(FAMILIES.size())), null, 100.0, 0.9,
                     100.0 + 50 * rnd.nextDouble(), new HansenParameters(d, p, h), bp, null,
                     new org.cohesa.core.solvent.FireData(bp - 60, null, null, null), null, null, null, hz, false,
                     1 + rnd.nextInt(3), null, price, Map.of(), "invented for benchmarks and checks", false));

@@ -37,7 +37,7 @@ public final class EvaporationRates {
     /** n-Butyl acetate molar volume, cm³/mol: 116.16 / 0.8825 g/cm³ (density, CRC Handbook 95th ed., 2014). */
     public static final double BUAC_MOLAR_VOLUME = 116.16 / 0.8825;
     /** n-Butyl acetate Antoine constants, Pa and K (Poling, Prausnitz, O'Connell 2000, appendix A). */
-    public static final Antoine BUAC_ANTOINE = new Antoine(9.5, 1596.7, -43.85, 301.0, 424.11);
+    public static final Antoine BUAC_ANTOINE = new Antoine(9.5, 1596.7, -43.85, 301.0, 424.11, "poling-2000-antoine");
 
     private final double[] c;
     private final List<String> notes;
@@ -58,7 +58,7 @@ public final class EvaporationRates {
         for (int i = 0; i < c.length; i++) {
             Solvent s = solvents.get(i);
             VapourPressure vp = VapourPressure.of(s).orElseThrow(() -> new InvalidInputException("blend", s.name(),
-                    "no vapour pressure in the library (neither Antoine constants nor boiling point with ΔHvap)"));
+                    "no vapour pressure in the library (no vapour-pressure correlation, nor boiling point with ΔHvap)"));
             if (s.molarMass() == null || s.effectiveMolarVolume() == null) {
                 throw new InvalidInputException("blend", s.name(), "the library lacks its molar mass or molar volume");
             }

@@ -74,7 +74,7 @@ public final class BlendFlashPoint {
             }
             if (a == null) {
                 throw new IllegalArgumentException(names.get(i) + " has a flash point but the library has no vapour-pressure data for it"
-                        + " (neither Antoine constants nor boiling point and enthalpy of vaporisation)");
+                        + " (no vapour-pressure correlation, nor boiling point and enthalpy of vaporisation)");
             }
             anyFlammable = true;
             pAtFlash[i] = a.pressurePa(fp);

@@ -102,9 +102,10 @@ public final class SafetyProfiler {
             if (s.boilingPointC() != null) {
                 ibp = s.boilingPointC();
                 ibpBasis = "normal boiling point from the library";
-            } else if (s.antoine() != null && s.antoine().isValidAt(s.antoine().temperatureAtPressure(VapourLiquid.ATMOSPHERE_PA), 5)) {
-                ibp = s.antoine().temperatureAtPressure(VapourLiquid.ATMOSPHERE_PA) - 273.15;
-                ibpBasis = "temperature where the Antoine vapour pressure reaches 101.325 kPa";
+            } else if (s.vapourPressure() != null && !s.vapourPressure().isEstimate()
+                    && s.vapourPressure().isValidAt(s.vapourPressure().temperatureAtPressure(VapourLiquid.ATMOSPHERE_PA), 5)) {
+                ibp = s.vapourPressure().temperatureAtPressure(VapourLiquid.ATMOSPHERE_PA) - 273.15;
+                ibpBasis = "temperature where the vapour pressure (" + s.vapourPressure().equationName() + ") reaches 101.325 kPa";
             } else {
                 ibp = null;
                 ibpBasis = "unknown: no boiling point or usable vapour-pressure equation in the library";

@@ -13,7 +13,9 @@ import org.cohesa.core.hsp.HansenParameters;
  * @param synonyms          other names and abbreviations
  * @param cas               CAS registry number, or null
  * @param formula           Hill formula, or null
- * @param family            chemical family key, e.g. "ester"
+ * @param smiles            SMILES of the structure, or null (source key in {@code sources} under "smiles")
+ * @param family            primary chemical family key, e.g. "ester"
+ * @param families          every chemical family that applies, the primary one first (e.g. ["glycol_ether", "ester"])
  * @param molarMass         g/mol
  * @param density           g/cm³ at 20–25 °C
  * @param molarVolume       cm³/mol
@@ -21,7 +23,7 @@ import org.cohesa.core.hsp.HansenParameters;
  * @param boilingPointC     normal boiling point, °C
  * @param meltingPointC     melting point, °C
  * @param fire              flash point, autoignition, flammability limits
- * @param antoine           vapour-pressure equation, or null
+ * @param vapourPressure    vapour-pressure correlation (published equation or stored estimate), or null
  * @param hvapKjPerMol      enthalpy of vaporisation at 25 °C, kJ/mol
  * @param exposure          occupational exposure limits
  * @param hazardStatements  GHS H-codes, e.g. ["H225", "H361d"]
@@ -38,7 +40,9 @@ public record Solvent(
         List<String> synonyms,
         String cas,
         String formula,
+        String smiles,
         String family,
+        List<String> families,
         Double molarMass,
         Double density,
         Double molarVolume,
@@ -46,7 +50,7 @@ public record Solvent(
         Double boilingPointC,
         Double meltingPointC,
         FireData fire,
-        Antoine antoine,
+        VapourCorrelation vapourPressure,
         Double hvapKjPerMol,
         ExposureLimit exposure,
         List<String> hazardStatements,
@@ -64,6 +68,19 @@ public record Solvent(
         }
         name = name.strip();
         synonyms = List.copyOf(Objects.requireNonNullElse(synonyms, List.of()));
+        smiles = smiles == null || smiles.isBlank() ? null : smiles.strip();
+        family = family == null || family.isBlank() ? null : family.strip();
+        families = Objects.requireNonNullElse(families, List.<String>of()).stream()
+                .filter(f -> f != null && !f.isBlank()).map(String::strip).distinct().toList();
+        if (family == null && !families.isEmpty()) {
+            family = families.get(0);
+        } else if (family != null && !families.contains(family)) {
+            families = java.util.stream.Stream.concat(java.util.stream.Stream.of(family), families.stream()).toList();
+        } else if (family != null && !families.get(0).equals(family)) {
+            String primary = family;
+            families = java.util.stream.Stream.concat(java.util.stream.Stream.of(primary),
+                    families.stream().filter(f -> !f.equals(primary))).toList();
+        }
         hazardStatements = List.copyOf(Objects.requireNonNullElse(hazardStatements, List.of()));
         fire = Objects.requireNonNullElse(fire, FireData.NONE);
         exposure = Objects.requireNonNullElse(exposure, ExposureLimit.NONE);
@@ -81,6 +98,11 @@ public record Solvent(
     /** True when the solvent has Hansen parameters and so can take part in searches. */
     public boolean hasHansen() {
         return hansen != null;
+    }
+
+    /** True when {@code familyKey} is one of the solvent's families (primary or not). */
+    public boolean inFamily(String familyKey) {
+        return families.contains(familyKey);
     }
 
     /** Flash point (closed cup), °C, or null. */
@@ -103,15 +125,15 @@ public record Solvent(
 
     /** A copy with another price (user data). */
     public Solvent withPricePerLitre(Double price) {
-        return new Solvent(name, synonyms, cas, formula, family, molarMass, density, molarVolume, hansen, boilingPointC,
-                meltingPointC, fire, antoine, hvapKjPerMol, exposure, hazardStatements, peroxideFormer, ichClass, unifac,
+        return new Solvent(name, synonyms, cas, formula, smiles, family, families, molarMass, density, molarVolume, hansen, boilingPointC,
+                meltingPointC, fire, vapourPressure, hvapKjPerMol, exposure, hazardStatements, peroxideFormer, ichClass, unifac,
                 price, sources, note, userEntry);
     }
 
     /** A copy marked as a user entry or as bundled data. */
     public Solvent withUserEntry(boolean user) {
-        return new Solvent(name, synonyms, cas, formula, family, molarMass, density, molarVolume, hansen, boilingPointC,
-                meltingPointC, fire, antoine, hvapKjPerMol, exposure, hazardStatements, peroxideFormer, ichClass, unifac,
+        return new Solvent(name, synonyms, cas, formula, smiles, family, families, molarMass, density, molarVolume, hansen, boilingPointC,
+                meltingPointC, fire, vapourPressure, hvapKjPerMol, exposure, hazardStatements, peroxideFormer, ichClass, unifac,
                 pricePerLitre, sources, note, user);
     }
 

@@ -86,7 +86,7 @@ public final class SpaceModel {
             HansenParameters h = b.hansen();
             HansenParameters p = new HansenParameters(Math.max(0, h.dD() + jitter(rnd)), Math.max(0, h.dP() + jitter(rnd)),
                     Math.max(0, h.dH() + jitter(rnd)));
-            out.add(new Solvent("invented test point " + (i + 1), List.of(), null, null, b.family(), null, null, null, p,
+            out.add(new Solvent("invented test point " + (i + 1), List.of(), null, null, null, b.family(), null, null, null, null, p,
                     null, null, null, null, null, null, b.hazardStatements(), false, b.ichClass(), null, null, null,
                     "invented for the frame-time measurement", false));
         }

@@ -42,7 +42,7 @@ class ModelsTest {
 
     @Test
     void noModelForALiquidWithNeitherGroupsNorHansen() {
-        Solvent bare = new Solvent("mystery liquid", null, null, null, null, null, null, 100.0, null, null, null, null, null,
+        Solvent bare = new Solvent("mystery liquid", null, null, null, null, null, null, null, null, 100.0, null, null, null, null, null,
                 null, null, null, false, null, null, null, null, null, true);
         InvalidInputException e = assertThrows(InvalidInputException.class,
                 () -> ActivityModels.choose(List.of(bare, BundledLiquids.get("water")), false));
@@ -104,8 +104,8 @@ class ModelsTest {
     }
 
     private static Solvent withoutGroups(Solvent s) {
-        return new Solvent(s.name(), s.synonyms(), s.cas(), s.formula(), s.family(), s.molarMass(), s.density(), s.molarVolume(),
-                s.hansen(), s.boilingPointC(), s.meltingPointC(), s.fire(), s.antoine(), s.hvapKjPerMol(), s.exposure(),
+        return new Solvent(s.name(), s.synonyms(), s.cas(), s.formula(), s.smiles(), s.family(), s.families(), s.molarMass(), s.density(), s.molarVolume(),
+                s.hansen(), s.boilingPointC(), s.meltingPointC(), s.fire(), s.vapourPressure(), s.hvapKjPerMol(), s.exposure(),
                 s.hazardStatements(), s.peroxideFormer(), s.ichClass(), null, s.pricePerLitre(), s.sources(), s.note(), s.userEntry());
     }
 }

@@ -166,8 +166,8 @@ class DryingSimulatorTest {
     @Test
     void fallbackModelIsNamed() {
         Solvent toluene = BundledLiquids.get("toluene");
-        Solvent noGroups = new Solvent("toluene (no groups)", null, null, null, null, toluene.molarMass(), toluene.density(),
-                toluene.molarVolume(), toluene.hansen(), toluene.boilingPointC(), null, null, toluene.antoine(), null, null, null, false,
+        Solvent noGroups = new Solvent("toluene (no groups)", null, null, null, null, null, null, toluene.molarMass(), toluene.density(),
+                toluene.molarVolume(), toluene.hansen(), toluene.boilingPointC(), null, null, toluene.vapourPressure(), null, null, null, false,
                 null, null, null, null, null, true);
         Blend b = new Blend(List.of(new BlendComponent(noGroups, 0.5), new BlendComponent(BundledLiquids.get("ethanol"), 0.5)));
         DryingPath p = DryingSimulator.simulate(DryingRequest.of(b, null));
@@ -180,7 +180,7 @@ class DryingSimulatorTest {
         InvalidInputException hot = assertThrows(InvalidInputException.class, () -> DryingSimulator.simulate(
                 new DryingRequest(blend("acetone:0.5,toluene:0.5"), null, 273.15 + 70, 0.9, false, 0.05, false)));
         assertEquals("temperature", hot.field());
-        Solvent bare = new Solvent("no vapour pressure", null, null, null, null, 100.0, 1.0, 100.0, HansenParameters.of(17, 5, 5),
+        Solvent bare = new Solvent("no vapour pressure", null, null, null, null, null, null, 100.0, 1.0, 100.0, HansenParameters.of(17, 5, 5),
                 null, null, null, null, null, null, null, false, null, null, null, null, null, true);
         Blend b = new Blend(List.of(new BlendComponent(bare, 0.5), new BlendComponent(BundledLiquids.get("toluene"), 0.5)));
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> DryingSimulator.simulate(DryingRequest.of(b, null)));

@@ -19,8 +19,8 @@ import org.junit.jupiter.api.Test;
  */
 class BlendFlashPointTest {
 
-    static final Antoine ETHANOL = new Antoine(10.33675, 1648.22, -42.232, 276.5, 369.54);
-    static final Antoine WATER = new Antoine(10.11564, 1687.537, -42.98, 273.2, 473.2);
+    static final Antoine ETHANOL = new Antoine(10.33675, 1648.22, -42.232, 276.5, 369.54, "poling-2000-antoine");
+    static final Antoine WATER = new Antoine(10.11564, 1687.537, -42.98, 273.2, 473.2, "poling-2000-antoine");
     static final double ETHANOL_FP_K = 12.0 + 273.15; // IEC 60079-20-1:2010, ethanol 12 °C
     static final VapourPressure ETHANOL_P = curve("ethanol", ETHANOL);
     static final VapourPressure WATER_P = curve("water", WATER);

@@ -24,14 +24,14 @@ final class TestSolvents {
 
     /** A solvent with only what the CHEM21 scoring reads (inputs named at each call site). */
     static Solvent guideInput(String name, String cas, String family, Double bpC, Double fpC, Double aitC, boolean peroxide, String hazards) {
-        return new Solvent(name, List.of(), cas, null, family, null, null, null, null, bpC, null,
+        return new Solvent(name, List.of(), cas, null, null, family, null, null, null, null, null, bpC, null,
                 new FireData(fpC, aitC, null, null), null, null, ExposureLimit.NONE,
                 hazards.isBlank() ? List.of() : Arrays.asList(hazards.split(" ")), peroxide, null, UnifacAssignment.NONE, null, Map.of(), null, false);
     }
 
     /** A solvent for vapour–liquid computations. */
     static Solvent vle(String name, String cas, double molarVolume, Double fpC, Antoine antoine, ExposureLimit limit, String hazards) {
-        return new Solvent(name, List.of(), cas, null, "test", null, null, molarVolume, null, null, null,
+        return new Solvent(name, List.of(), cas, null, null, "test", null, null, null, molarVolume, null, null, null,
                 new FireData(fpC, null, null, null), antoine, null, limit,
                 hazards.isBlank() ? List.of() : Arrays.asList(hazards.split(" ")), false, null, UnifacAssignment.NONE, null, Map.of(), null, false);
     }

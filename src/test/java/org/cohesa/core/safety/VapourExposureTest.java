@@ -15,7 +15,7 @@ import org.junit.jupiter.api.Test;
 class VapourExposureTest {
 
     // Poling et al. 2000 Antoine for toluene, as in antoine-collection-poling.tsv
-    static final Antoine TOLUENE = new Antoine(9.05043, 1327.62, -55.525, 286.44, 409.61);
+    static final Antoine TOLUENE = new Antoine(9.05043, 1327.62, -55.525, 286.44, 409.61, "poling-2000-antoine");
 
     @Test
     void additiveFormulaWorkedExample() {

@@ -12,7 +12,7 @@ import org.junit.jupiter.api.Test;
 class SolventLibraryTest {
 
     static Solvent solvent(String name, String cas, List<String> synonyms, double dD, double dP, double dH) {
-        return new Solvent(name, synonyms, cas, null, null, null, null, null, HansenParameters.of(dD, dP, dH), null, null,
+        return new Solvent(name, synonyms, cas, null, null, null, null, null, null, null, HansenParameters.of(dD, dP, dH), null, null,
                 null, null, null, null, List.of(), false, null, null, null, null, null, false);
     }
 
