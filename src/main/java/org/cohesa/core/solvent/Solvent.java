@@ -3,6 +3,7 @@ package org.cohesa.core.solvent;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import org.cohesa.core.TextLimits;
 import org.cohesa.core.hsp.HansenParameters;
 
 /**
@@ -59,10 +60,7 @@ public record Solvent(
         boolean userEntry) {
 
     public Solvent {
-        if (name == null || name.isBlank()) {
-            throw new IllegalArgumentException("name is required");
-        }
-        name = name.strip();
+        name = TextLimits.name("name", name);
         synonyms = List.copyOf(Objects.requireNonNullElse(synonyms, List.of()));
         hazardStatements = List.copyOf(Objects.requireNonNullElse(hazardStatements, List.of()));
         fire = Objects.requireNonNullElse(fire, FireData.NONE);
