@@ -83,6 +83,10 @@ public final class CohesaCommand implements Runnable {
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        // 1e400 parses as Infinity and NaN as a number; neither is a value anyone means
+        CommandLine.ITypeConverter<Double> finite = CohesaCommand::finiteNumber;
+        cl.registerConverter(Double.class, finite);
+        cl.registerConverter(double.class, finite);
         cl.setParameterExceptionHandler(ErrorHandling::onParameterError);
         cl.setExecutionExceptionHandler(ErrorHandling::onExecutionError);
         return cl;
@@ -101,6 +105,18 @@ public final class CohesaCommand implements Runnable {
             out.flush();
             err.flush();
         }
+    }
+
+    private static Double finiteNumber(String text) {
+        try {
+            double d = Double.parseDouble(text.strip());
+            if (Double.isFinite(d)) {
+                return d;
+            }
+        } catch (NumberFormatException e) {
+            throw new CommandLine.TypeConversionException("'" + text + "' is not a double");
+        }
+        throw new CommandLine.TypeConversionException("'" + text + "' is not a finite number");
     }
 
     public static void main(String[] args) {

@@ -102,7 +102,7 @@ class FoundationCommandsTest {
 
         r = run("distance", "--solvent", "toluene");
         assertEquals(2, r.exitCode());
-        assertTrue(r.err().startsWith("error: Missing required option: '--target"), r.err());
+        assertTrue(r.err().startsWith("error: --target is required (see cohesa distance --help)"), r.err());
         assertFalse(r.err().contains("Exception"), r.err());
     }
 

@@ -1,16 +1,17 @@
 package org.cohesa.cli.drying;
 
 import org.cohesa.cli.Args;
+import org.cohesa.cli.OutputFile;
 import org.cohesa.cli.CohesaSubcommand;
 import org.cohesa.cli.Output;
 import org.cohesa.cli.Targets;
 import org.cohesa.cli.TextTable;
 
+import java.io.IOException;
+import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.drying.DryingPath;
 import org.cohesa.core.drying.DryingRequest;
@@ -21,6 +22,7 @@ import org.cohesa.core.drying.TailSuggestion;
 import org.cohesa.core.hsp.SolubilitySphere;
 import org.cohesa.core.solvent.Blend;
 import org.cohesa.core.solvent.SolventLibrary;
+import org.cohesa.report.png.DryingPlot;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -52,8 +54,17 @@ public final class DryCommand extends CohesaSubcommand {
     @Option(names = "--ideal", description = "Ideal solution (γ = 1) instead of UNIFAC, to compare.")
     boolean ideal;
 
+    @Option(names = "--csv", paramLabel = "FILE", description = "Also write the path as CSV (one row per point, units in the header).")
+    Path csv;
+
+    @Option(names = "--png", paramLabel = "FILE", description = "Also draw the path as a PNG plot (composition and, with a target, RED).")
+    Path png;
+
+    @Option(names = "--overwrite", description = "Replace an existing --csv or --png file.")
+    boolean overwrite;
+
     @Override
-    protected void execute() {
+    protected void execute() throws IOException {
         SolventLibrary library = ctx().library();
         Blend b = library.resolveBlend("--blend", blend);
         SolubilitySphere sphere = null;
@@ -71,6 +82,12 @@ public final class DryCommand extends CohesaSubcommand {
             throw new InvalidInputException("--temperature", temperature, "must lie between −273.15 and 300 °C");
         }
         double untilF = fraction("--until", until);
+        if (csv != null) {
+            OutputFile.check("--csv", csv, overwrite);
+        }
+        if (png != null) {
+            OutputFile.check("--png", png, overwrite);
+        }
         DryingRequest req = new DryingRequest(b, sphere, tC + 273.15, untilF, ideal, DryingRequest.DEFAULT_STEP, true);
         DryingPath path;
         try {
@@ -88,28 +105,45 @@ public final class DryCommand extends CohesaSubcommand {
         }
         java.util.function.Function<String, List<String>> hazards = name -> library.lookup(name).stream().findFirst()
                 .map(s -> s.hazardStatements()).orElse(List.of());
+        List<String> written = writeFiles(b, path);
         if (json()) {
-            Output.json(out(), json(b, targetLabel, tC, path, tails, cautions, hazards));
+            Output.json(out(), DryReport.of(b, targetLabel, tC, path, tails, cautions, hazards, written));
             return;
         }
         table(b, targetLabel, tC, path, tails, cautions, hazards);
+        for (String w : written) {
+            out().println("wrote " + w);
+        }
+    }
+
+    private List<String> writeFiles(Blend b, DryingPath path) throws IOException {
+        List<String> written = new ArrayList<>();
+        if (csv != null) {
+            OutputFile.write("--csv", csv, overwrite, o -> PathCsv.write(path, o));
+            written.add(csv.toString());
+        }
+        if (png != null) {
+            OutputFile.write("--png", png, overwrite, o -> DryingPlot.png(path, "Drying path of " + b.describe(), o));
+            written.add(png.toString());
+        }
+        return written;
     }
 
     private void table(Blend b, String targetLabel, double tC, DryingPath path, List<TailSuggestion> tails, List<String> cautions,
                        java.util.function.Function<String, List<String>> hazards) {
         out().println("blend: " + b.describe() + "   at " + Output.fmt(tC, 1) + " °C" + (targetLabel == null ? "" : "   target: " + targetLabel));
         out().println("activity model: " + path.model() + (path.modelNote().isEmpty() ? "" : " (" + path.modelNote() + ")"));
-        List<String> header = new ArrayList<>(List.of("evaporated", "time"));
+        List<String> header = new ArrayList<>(List.of("evaporated %", "time (BuAc=1)"));
         List<String> names = new ArrayList<>(path.points().get(0).composition().keySet());
-        names.forEach(n -> header.add(n));
-        header.addAll(List.of("dD", "dP", "dH"));
+        names.forEach(n -> header.add("φ " + n));
+        header.addAll(List.of("δD MPa½", "δP MPa½", "δH MPa½"));
         if (path.points().get(0).red() != null) {
             header.add("RED");
         }
         TextTable t = new TextTable(header.toArray(String[]::new));
         for (PathPoint p : path.points()) {
             List<Object> row = new ArrayList<>();
-            row.add(Output.fmt(100 * p.evaporated(), 1) + " %");
+            row.add(Output.fmt(100 * p.evaporated(), 1));
             row.add(Output.fmt(p.time(), 3));
             for (String n : names) {
                 row.add(Output.fmt(p.composition().get(n), 3));
@@ -123,7 +157,7 @@ public final class DryCommand extends CohesaSubcommand {
             t.row(row.toArray());
         }
         t.print(out());
-        out().println("(composition in volume fractions of the liquid left; time relative to pure n-butyl acetate = 1)");
+        out().println("(evaporated: % of the initial volume; φ: volume fraction of the liquid left; time relative to pure n-butyl acetate = 1)");
         if (targetLabel != null) {
             out().println(path.leavesSphereAt() == null ? "stays inside the sphere up to " + Output.fmt(100 * path.end().evaporated(), 1) + " % evaporated"
                     : path.leavesSphereAt() == 0 ? "starts outside the sphere"
@@ -150,54 +184,6 @@ public final class DryCommand extends CohesaSubcommand {
         for (String c : cautions) {
             out().println("caution: " + c);
         }
-    }
-
-    private static Map<String, Object> json(Blend b, String targetLabel, double tC, DryingPath path, List<TailSuggestion> tails,
-                                            List<String> cautions, java.util.function.Function<String, List<String>> hazards) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("blend", b.describe());
-        m.put("target", targetLabel);
-        m.put("temperature_c", tC);
-        m.put("model", path.model());
-        m.put("model_note", path.modelNote().isEmpty() ? null : path.modelNote());
-        List<Map<String, Object>> pts = new ArrayList<>();
-        for (PathPoint p : path.points()) {
-            Map<String, Object> q = new LinkedHashMap<>();
-            q.put("evaporated", Output.round(p.evaporated(), 6));
-            q.put("time", Output.round(p.time(), 6));
-            Map<String, Object> comp = new LinkedHashMap<>();
-            p.composition().forEach((k, v) -> comp.put(k, Output.round(v, 6)));
-            q.put("composition", comp);
-            q.put("dD", p.hansen() == null ? null : Output.round(p.hansen().dD(), 4));
-            q.put("dP", p.hansen() == null ? null : Output.round(p.hansen().dP(), 4));
-            q.put("dH", p.hansen() == null ? null : Output.round(p.hansen().dH(), 4));
-            q.put("red", p.red() == null ? null : Output.round(p.red(), 5));
-            pts.add(q);
-        }
-        m.put("path", pts);
-        m.put("leaves_sphere_at", path.leavesSphereAt() == null ? null : Output.round(path.leavesSphereAt(), 6));
-        m.put("last_solvent", path.lastSolvent());
-        List<Map<String, Object>> ex = new ArrayList<>();
-        for (DryingPath.Exhaustion e : path.exhausted()) {
-            ex.add(Map.of("solvent", e.solvent(), "evaporated", Output.round(e.evaporated(), 6), "time", Output.round(e.time(), 6)));
-        }
-        m.put("runs_out", ex);
-        m.put("two_phases_at", path.splitsAt() == null ? null : Output.round(path.splitsAt(), 6));
-        List<Map<String, Object>> ts = new ArrayList<>();
-        for (TailSuggestion s : tails) {
-            Map<String, Object> q = new LinkedHashMap<>();
-            q.put("solvent", s.solvent());
-            q.put("fraction", s.fraction());
-            q.put("relative_rate", Output.round(s.relativeRate(), 4));
-            q.put("max_red", Output.round(s.maxRed(), 4));
-            q.put("last_solvent", s.lastSolvent());
-            q.put("hazard_statements", hazards.apply(s.solvent()));
-            ts.add(q);
-        }
-        m.put("tail_suggestions", ts);
-        m.put("notes", path.notes());
-        m.put("cautions", cautions);
-        return m;
     }
 
     private static List<String> cautions(DryingPath path) {

@@ -1,13 +1,13 @@
 package org.cohesa.cli.formulas;
 
+import com.fasterxml.jackson.annotation.JsonProperty;
+
 import org.cohesa.cli.Args;
 
 import org.cohesa.cli.CohesaSubcommand;
 import org.cohesa.cli.Output;
 import org.cohesa.cli.TextTable;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
 import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.hsp.CohesiveEnergy;
 import org.cohesa.core.solvent.Solvent;
@@ -69,17 +69,20 @@ public final class CohesionCommand extends CohesaSubcommand {
             throw new InvalidInputException("--hvap", String.valueOf(hvap), e.getMessage());
         }
         if (json()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("liquid", label);
-            m.put("temperature_c", tC);
-            m.put("molar_volume", Output.round(mm / rho, 3));
-            m.put("cohesive_energy_density", Output.round(r.cohesiveEnergyDensity(), 3));
-            m.put("delta", Output.round(r.delta(), 3));
-            Output.json(out(), m);
+            Output.json(out(), new CohesionReport(label, tC, Output.round(mm / rho, 3), Output.round(r.cohesiveEnergyDensity(), 3),
+                    Output.round(r.delta(), 3)));
             return;
         }
         TextTable t = new TextTable("liquid", "T °C", "Vm cm³/mol", "CED MPa", "δ MPa^½");
         t.row(label, Output.fmt(tC, 1), Output.fmt(mm / rho, 2), Output.fmt(r.cohesiveEnergyDensity(), 1), Output.fmt(r.delta(), 2));
         t.print(out());
     }
+}
+
+/**
+ * {@code cohesa cohesion --json}: molar volume (cm³/mol), cohesive energy density (MPa = J/cm³) and the Hildebrand
+ * parameter δ (MPa½) at the given temperature (°C).
+ */
+record CohesionReport(String liquid, @JsonProperty("temperature_c") double temperatureC, @JsonProperty("molar_volume") double molarVolume,
+                      @JsonProperty("cohesive_energy_density") double cohesiveEnergyDensity, double delta) {
 }

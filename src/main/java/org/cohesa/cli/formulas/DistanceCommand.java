@@ -5,8 +5,6 @@ import org.cohesa.cli.Output;
 import org.cohesa.cli.Targets;
 import org.cohesa.cli.TextTable;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
 import org.cohesa.core.hsp.HansenParameters;
 import org.cohesa.core.hsp.SolubilitySphere;
 import org.cohesa.core.solvent.Blend;
@@ -45,15 +43,8 @@ public final class DistanceCommand extends CohesaSubcommand {
         double ra = sphere.ra(p);
         double red = sphere.red(p);
         if (json()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("liquid", b.describe());
-            m.put("dD", Output.round(p.dD(), 3));
-            m.put("dP", Output.round(p.dP(), 3));
-            m.put("dH", Output.round(p.dH(), 3));
-            m.put("ra", Output.round(ra, 4));
-            m.put("red", Output.round(red, 4));
-            m.put("inside", red < 1);
-            Output.json(out(), m);
+            Output.json(out(), new DistanceReport(b.describe(), Output.round(p.dD(), 3), Output.round(p.dP(), 3), Output.round(p.dH(), 3),
+                    Output.round(ra, 4), Output.round(red, 4), red < 1));
             return;
         }
         TextTable t = new TextTable("liquid", "dD", "dP", "dH", "Ra", "RED", "verdict");
@@ -61,4 +52,8 @@ public final class DistanceCommand extends CohesaSubcommand {
                 red < 1 ? "inside the sphere" : "outside the sphere");
         t.print(out());
     }
+}
+
+/** {@code cohesa distance --json}: the liquid's parameters (MPa½), Ra (MPa½) and RED to the target. */
+record DistanceReport(String liquid, double dD, double dP, double dH, double ra, double red, boolean inside) {
 }

@@ -1,21 +1,19 @@
 package org.cohesa.cli.library;
 
 import org.cohesa.cli.CohesaSubcommand;
+import org.cohesa.cli.InputFile;
 import org.cohesa.cli.Output;
 import org.cohesa.cli.TextTable;
 
 import java.io.IOException;
-import java.io.Reader;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.cohesa.core.BadRowsException;
 import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.RowError;
 import org.cohesa.core.solvent.Solvent;
@@ -130,13 +128,7 @@ public final class SolventsCommand extends CohesaSubcommand {
         @Override
         protected void execute() throws IOException {
             List<Solvent> rows;
-            try (Reader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-                rows = SolventCsv.read(file.toString(), r, true);
-            } catch (NoSuchFileException e) {
-                throw new InvalidInputException("FILE", file.toString(), "no such file");
-            } catch (java.nio.charset.MalformedInputException e) {
-                throw new BadRowsException(file.toString(), List.of(new RowError(0, "-", "-", "not UTF-8 text")));
-            }
+            rows = InputFile.read("FILE", file, r -> SolventCsv.read(file.toString(), r, true));
             ctx().solvents().importAll(rows);
             if (json()) {
                 Output.json(out(), Map.of("imported", rows.size(), "names", rows.stream().map(Solvent::name).toList()));

@@ -30,8 +30,13 @@ abstract class RecordStatusCommand extends CohesaSubcommand {
     @Override
     protected void execute() {
         long recordId = RecordSupport.parseId(id);
+        if (by == null || by.isBlank()) {
+            throw new InvalidInputException("--by", by == null ? "" : by, "must name a person");
+        }
         if (next() != RecordStatus.IN_REVIEW && (comment == null || comment.isBlank())) {
-            throw new InvalidInputException("--comment", String.valueOf(comment), "a decision needs a comment saying why");
+            throw comment == null
+                    ? new InvalidInputException("--comment", "", "missing: a decision needs a comment saying why")
+                    : new InvalidInputException("--comment", comment, "a decision needs a comment saying why");
         }
         SubstitutionRecord r = new RecordRepository(ctx().database()).changeStatus(recordId, next(), by, comment);
         if (json()) {

@@ -4,11 +4,8 @@ import org.cohesa.cli.CohesaSubcommand;
 import org.cohesa.cli.Output;
 import org.cohesa.cli.TextTable;
 
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import org.cohesa.core.safety.Cautions;
 import org.cohesa.core.safety.IchQ3c;
 import org.cohesa.core.safety.SafetyProfile;
@@ -55,100 +52,10 @@ public final class HazardsCommand extends CohesaSubcommand {
         SafetyProfile p = SafetyProfiler.profile(blend, celsius + 273.15, ideal);
         List<String> cautions = Cautions.forProfile(p);
         if (json()) {
-            Output.json(out(), json(p, cautions));
+            Output.json(out(), HazardsReport.of(p, cautions));
         } else {
             print(p, cautions);
         }
-    }
-
-    static Map<String, Object> json(SafetyProfile p, List<String> cautions) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("liquid", p.blend().describe());
-        m.put("temperature_c", Output.round(p.temperatureC(), 2));
-        m.put("flash_point_c", Output.round(p.flashPoint().celsius(), 1));
-        m.put("flash_point_status", p.flashPoint().status().name().toLowerCase(Locale.ROOT));
-        m.put("flash_point_model", p.flashPoint().model());
-        m.put("flash_point_notes", p.flashPoint().detail());
-        m.put("initial_boiling_point_c", Output.round(p.initialBoilingPointC(), 1));
-        m.put("initial_boiling_point_basis", p.initialBoilingPointBasis());
-        m.put("ghs_flammable_category", p.ghs().category());
-        m.put("ghs_basis", p.ghs().basis() + " (GHS Rev. 10, Table 2.6.1)");
-        m.put("packing_group", p.packingGroup());
-        List<Map<String, Object>> hs = new ArrayList<>();
-        for (SafetyProfile.HazardLine h : p.hazardStatements()) {
-            Map<String, Object> e = new LinkedHashMap<>();
-            e.put("code", h.code());
-            e.put("text", h.text());
-            List<Map<String, Object>> carriers = new ArrayList<>();
-            for (SafetyProfile.Carrier c : h.carriers()) {
-                carriers.add(Map.of("name", c.name(), "volume_percent", Output.round(c.volumePercent(), 2)));
-            }
-            e.put("components", carriers);
-            hs.add(e);
-        }
-        m.put("hazard_statements", hs);
-        List<Map<String, Object>> cmr = new ArrayList<>();
-        for (SafetyProfile.CmrEntry c : p.cmr()) {
-            Map<String, Object> e = new LinkedHashMap<>();
-            e.put("name", c.component());
-            e.put("effect", c.effect());
-            e.put("code", c.code());
-            e.put("category", c.category());
-            e.put("volume_percent", Output.round(c.volumePercent(), 2));
-            cmr.add(e);
-        }
-        m.put("cmr", cmr);
-        m.put("aspiration_hazard", p.aspirationHazards());
-        m.put("peroxide_formers", p.peroxideFormers());
-        Double index = p.exposure().anyCounted() ? Output.round(p.exposure().index(), 3) : null;
-        m.put("exposure_index", index);
-        m.put("exposure_index_complete", p.exposure().complete());
-        m.put("vapour_hazard_ratio", index);
-        m.put("activity_model", p.activityModel());
-        List<Map<String, Object>> ex = new ArrayList<>();
-        for (VapourExposure.Component c : p.exposure().components()) {
-            Map<String, Object> e = new LinkedHashMap<>();
-            e.put("name", c.name());
-            e.put("saturated_vapour_ppm", Output.round(c.saturatedPpm(), 1));
-            e.put("twa_ppm", c.twaPpm());
-            e.put("stel_ppm", c.stelPpm());
-            e.put("limit_used", c.limitKind());
-            e.put("jurisdiction", c.jurisdiction());
-            e.put("skin", c.skin());
-            e.put("ratio", Output.round(c.ratio(), 3));
-            e.put("status", c.status());
-            ex.add(e);
-        }
-        m.put("exposure", ex);
-        m.put("exposure_notes", p.exposure().notes());
-        List<Map<String, Object>> ich = new ArrayList<>();
-        for (SafetyProfile.IchLine l : p.ich()) {
-            Map<String, Object> e = new LinkedHashMap<>();
-            e.put("name", l.component());
-            e.put("class", l.entry() == null ? null : l.entry().solventClass());
-            e.put("pde_mg_per_day", l.entry() == null ? null : l.entry().pdeMgPerDay());
-            e.put("limit_ppm", l.entry() == null ? null : l.entry().limitPpm());
-            e.put("basis", l.entry() == null ? "not listed in the guideline" : l.entry().fromMemory() ? "from memory" : "R8 addition, confirmed from a published summary");
-            ich.add(e);
-        }
-        m.put("ich_q3c", ich);
-        m.put("ich_q3c_version", IchQ3c.VERSION);
-        m.put("guide_rank", p.guideRank().label());
-        m.put("guide_method", SolventGuide.METHOD + (p.isPure() ? "" : "; blend = least favourable component (our rule)"));
-        List<Map<String, Object>> g = new ArrayList<>();
-        for (SafetyProfile.GuideLine l : p.guide()) {
-            Map<String, Object> e = new LinkedHashMap<>();
-            e.put("name", l.component());
-            e.put("safety", l.scores().safety());
-            e.put("health", l.scores().health());
-            e.put("environment", l.scores().environment());
-            e.put("rank", l.scores().rank().label());
-            e.put("notes", l.scores().notes());
-            g.add(e);
-        }
-        m.put("guide_scores", g);
-        m.put("cautions", cautions);
-        return m;
     }
 
     private void print(SafetyProfile p, List<String> cautions) {

@@ -1,22 +1,18 @@
 package org.cohesa.cli.target;
 
 import org.cohesa.cli.CohesaSubcommand;
+import org.cohesa.cli.InputFile;
+import org.cohesa.cli.OutputFile;
 import org.cohesa.cli.Output;
 import org.cohesa.cli.TextTable;
 
 import java.io.IOException;
-import java.io.Reader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.cohesa.core.BadRowsException;
 import org.cohesa.core.InvalidInputException;
-import org.cohesa.core.RowError;
 
 import org.cohesa.core.solvent.SolventLibrary;
 import org.cohesa.core.target.ConfidenceRegion;
@@ -30,6 +26,7 @@ import org.cohesa.core.target.NamedPoint;
 import org.cohesa.core.target.NextTest;
 import org.cohesa.core.target.SphereFitter;
 import org.cohesa.core.target.TestResult;
+import org.cohesa.report.png.SpherePlot;
 import org.cohesa.store.TestSeriesCsv;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -61,8 +58,17 @@ public final class FitCommand extends CohesaSubcommand {
     @Option(names = "--resamples", paramLabel = "N", description = "Bootstrap resamples for the confidence region (default ${DEFAULT-VALUE}; 0 switches it off).")
     int resamples = 200;
 
+    @Option(names = "--png", paramLabel = "FILE", description = "Also draw the fitted sphere and the tested liquids as a PNG (three projections).")
+    Path png;
+
+    @Option(names = "--overwrite", description = "Replace an existing --png file.")
+    boolean overwrite;
+
     @Override
     protected void execute() throws IOException {
+        if (png != null) {
+            OutputFile.check("--png", png, overwrite);
+        }
         if (save && (name == null || name.isBlank())) {
             throw new InvalidInputException("--save", "without --name", "give the material a name with --name NAME");
         }
@@ -86,21 +92,22 @@ public final class FitCommand extends CohesaSubcommand {
                             fit.results(), fit.quality().goodInside(), fit.quality().goodTotal(), fit.quality().badOutside(),
                             fit.quality().badTotal()), true));
         }
+        if (png != null) {
+            String title = name == null || name.isBlank() ? file.getFileName().toString() : name;
+            OutputFile.write("--png", png, overwrite, o -> SpherePlot.png(fit.sphere(), results, title, o));
+        }
         if (json()) {
             Output.json(out(), json(fit));
             return;
         }
         print(fit, results.size());
+        if (png != null) {
+            out().println("wrote " + png);
+        }
     }
 
     private List<TestResult> read(SolventLibrary library) throws IOException {
-        try (Reader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            return TestSeriesCsv.read(file.toString(), r, library);
-        } catch (NoSuchFileException e) {
-            throw new InvalidInputException("FILE", file.toString(), "no such file");
-        } catch (java.nio.charset.MalformedInputException e) {
-            throw new BadRowsException(file.toString(), List.of(new RowError(0, "-", "-", "not UTF-8 text")));
-        }
+        return InputFile.read("FILE", file, r -> TestSeriesCsv.read(file.toString(), r, library));
     }
 
     private Map<String, Object> json(FitResult fit) {

@@ -3,6 +3,7 @@ package org.cohesa.core.solvent;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import org.cohesa.core.TextLimits;
 import org.cohesa.core.hsp.HansenParameters;
 
 /**
@@ -63,10 +64,7 @@ public record Solvent(
         boolean userEntry) {
 
     public Solvent {
-        if (name == null || name.isBlank()) {
-            throw new IllegalArgumentException("name is required");
-        }
-        name = name.strip();
+        name = TextLimits.name("name", name);
         synonyms = List.copyOf(Objects.requireNonNullElse(synonyms, List.of()));
         smiles = smiles == null || smiles.isBlank() ? null : smiles.strip();
         family = family == null || family.isBlank() ? null : family.strip();

@@ -55,6 +55,9 @@ public final class SolventLibrary {
      * @throws InvalidInputException naming {@code field} when nothing or several solvents match
      */
     public Solvent resolve(String field, String text) {
+        if (text == null || text.isBlank()) {
+            throw new InvalidInputException(field, String.valueOf(text == null ? "" : text), "empty: give a solvent name, synonym or CAS number");
+        }
         List<Solvent> hits = lookup(text);
         if (hits.size() == 1) {
             return hits.get(0);

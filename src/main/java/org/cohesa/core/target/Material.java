@@ -2,6 +2,7 @@ package org.cohesa.core.target;
 
 import java.util.List;
 import java.util.Objects;
+import org.cohesa.core.TextLimits;
 import org.cohesa.core.hsp.SolubilitySphere;
 
 /**
@@ -19,10 +20,8 @@ public record Material(String name, List<String> synonyms, MaterialKind kind, So
                        String note, boolean userEntry) {
 
     public Material {
-        if (name == null || name.isBlank()) {
-            throw new IllegalArgumentException("a material needs a name");
-        }
-        name = name.strip();
+        name = TextLimits.name("name", name);
+        note = TextLimits.text("note", note);
         synonyms = List.copyOf(Objects.requireNonNullElse(synonyms, List.of()));
         kind = Objects.requireNonNullElse(kind, MaterialKind.OTHER);
         if (sphere == null) {

@@ -60,6 +60,9 @@ public final class MaterialLibrary {
      * @throws InvalidInputException naming {@code field} when nothing or several materials match
      */
     public Material resolve(String field, String text) {
+        if (text == null || text.isBlank()) {
+            throw new InvalidInputException(field, String.valueOf(text == null ? "" : text), "empty: give a material name or synonym");
+        }
         List<Material> hits = lookup(text);
         if (hits.size() == 1) {
             return hits.get(0);
