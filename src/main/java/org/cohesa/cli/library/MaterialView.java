@@ -1,29 +1,30 @@
 package org.cohesa.cli.library;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
+import com.fasterxml.jackson.annotation.JsonProperty;
+import java.util.List;
 import org.cohesa.core.target.Material;
 import org.cohesa.store.SourceCatalog;
 
-/** A material as a JSON object: name, dD, dP, dH, r0, source first (scripts rely on these), then the rest. */
-final class MaterialView {
+/**
+ * A material as {@code materials --json} and {@code material NAME --json} print it, serialised by Jackson: name, dD,
+ * dP, dH, r0, source first (scripts rely on these), then the rest. δ and R0 in MPa½.
+ */
+record MaterialView(
+        String name,
+        @JsonProperty("dD") double dD,
+        @JsonProperty("dP") double dP,
+        @JsonProperty("dH") double dH,
+        double r0,
+        String source,
+        String citation,
+        String kind,
+        List<String> synonyms,
+        String note,
+        @JsonProperty("user_entry") boolean userEntry) {
 
-    private MaterialView() {
-    }
-
-    static Map<String, Object> json(Material m, SourceCatalog catalog) {
-        Map<String, Object> j = new LinkedHashMap<>();
-        j.put("name", m.name());
-        j.put("dD", m.sphere().centre().dD());
-        j.put("dP", m.sphere().centre().dP());
-        j.put("dH", m.sphere().centre().dH());
-        j.put("r0", m.sphere().r0());
-        j.put("source", m.source());
-        j.put("citation", catalog.citation(m.source()).orElse(null));
-        j.put("kind", m.kind().key());
-        j.put("synonyms", m.synonyms());
-        j.put("note", m.note());
-        j.put("user_entry", m.userEntry());
-        return j;
+    static MaterialView json(Material m, SourceCatalog catalog) {
+        return new MaterialView(m.name(), m.sphere().centre().dD(), m.sphere().centre().dP(),
+                m.sphere().centre().dH(), m.sphere().r0(), m.source(), catalog.citation(m.source()).orElse(null),
+                m.kind().key(), List.copyOf(m.synonyms()), m.note(), m.userEntry());
     }
 }
