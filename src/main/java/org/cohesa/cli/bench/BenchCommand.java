@@ -1,15 +1,17 @@
 package org.cohesa.cli.bench;
 
+import com.fasterxml.jackson.annotation.JsonInclude;
+import com.fasterxml.jackson.annotation.JsonProperty;
+import com.fasterxml.jackson.annotation.JsonUnwrapped;
+
 import org.cohesa.cli.CohesaSubcommand;
 import org.cohesa.cli.Output;
 import org.cohesa.cli.TextTable;
 
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.SplittableRandom;
 import org.cohesa.core.hsp.HansenParameters;
 import org.cohesa.core.hsp.SolubilitySphere;
@@ -36,18 +38,30 @@ public final class BenchCommand implements Runnable {
         spec.commandLine().usage(spec.commandLine().getOut());
     }
 
-    /** Median, minimum and maximum of run times in seconds. */
-    static Map<String, Object> stats(double[] seconds) {
-        double[] s = seconds.clone();
-        Arrays.sort(s);
-        double median = s.length % 2 == 1 ? s[s.length / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("runs", s.length);
-        m.put("median_s", Output.round(median, 4));
-        m.put("min_s", Output.round(s[0], 4));
-        m.put("max_s", Output.round(s[s.length - 1], 4));
-        m.put("cores", Runtime.getRuntime().availableProcessors());
-        return m;
+    /** Median, minimum and maximum of run times in seconds, and the cores they ran on. */
+    record Timing(int runs, @JsonProperty("median_s") double medianS, @JsonProperty("min_s") double minS,
+            @JsonProperty("max_s") double maxS, int cores) {
+
+        static Timing of(double[] seconds) {
+            double[] s = seconds.clone();
+            Arrays.sort(s);
+            double median = s.length % 2 == 1 ? s[s.length / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
+            return new Timing(s.length, Output.round(median, 4), Output.round(s[0], 4), Output.round(s[s.length - 1], 4),
+                    Runtime.getRuntime().availableProcessors());
+        }
+    }
+
+    /** What {@code bench fit --json} prints. */
+    record FitBench(String benchmark, int results, int resamples, @JsonUnwrapped Timing timing) {
+    }
+
+    /**
+     * What {@code bench dry --json} and {@code bench hazards --json} print; {@code until} (fraction evaporated) is
+     * given for drying only.
+     */
+    @JsonInclude(JsonInclude.Include.NON_NULL)
+    record BlendBench(String benchmark, String blend, int components, Double until, String model, int warmup,
+            @JsonUnwrapped Timing timing, @JsonProperty("median_ms") double medianMs) {
     }
 
     /** Refuses run counts outside the ranges every bench command accepts. */
@@ -74,17 +88,16 @@ public final class BenchCommand implements Runnable {
         return t;
     }
 
-    /** Prints one blend benchmark (fields in {@code m} plus the statistics of {@code t}) as JSON or as a table row. */
-    static void reportBlendBench(CohesaSubcommand cmd, Map<String, Object> m, String label, org.cohesa.core.solvent.Blend b, String model,
-            double[] t) {
-        m.putAll(stats(t));
+    /** Prints one blend benchmark (its identity plus the statistics of {@code t}) as JSON or as a table row. */
+    static void reportBlendBench(CohesaSubcommand cmd, String benchmark, Double until, int warmup, String label,
+            org.cohesa.core.solvent.Blend b, String model, double[] t) {
         double[] sorted = t.clone();
         Arrays.sort(sorted);
         int n = sorted.length;
         double median = n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
-        m.put("median_ms", Output.round(median * 1e3, 3));
         if (cmd.json()) {
-            Output.json(cmd.out(), m);
+            Output.json(cmd.out(), new BlendBench(benchmark, b.describe(), b.size(), until, model, warmup, Timing.of(t),
+                    Output.round(median * 1e3, 3)));
             return;
         }
         TextTable tt = new TextTable("benchmark", "components", "model", "runs", "median ms", "min ms", "max ms");
@@ -116,18 +129,13 @@ public final class BenchCommand implements Runnable {
             List<TestResult> data = invented(results, seed);
             FitOptions options = new FitOptions(seed, resamples, 12, 5);
             double[] t = time(1, runs, () -> SphereFitter.fit(data, List.of(), options));
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("benchmark", "fit");
-            m.put("results", results);
-            m.put("resamples", resamples);
-            m.putAll(stats(t));
+            Timing timing = Timing.of(t);
             if (json()) {
-                Output.json(out(), m);
+                Output.json(out(), new FitBench("fit", results, resamples, timing));
                 return;
             }
             out().printf(Locale.ROOT, "sphere fit, %d results, %d bootstrap resamples, %d cores: median %.3f s (min %.3f, max %.3f) over %d runs%n",
-                    results, resamples, Runtime.getRuntime().availableProcessors(), (Double) m.get("median_s"), (Double) m.get("min_s"),
-                    (Double) m.get("max_s"), runs);
+                    results, resamples, timing.cores(), timing.medianS(), timing.minS(), timing.maxS(), runs);
         }
 
         /**
@@ -170,14 +178,7 @@ public final class BenchCommand implements Runnable {
                     org.cohesa.core.drying.DryingRequest.DEFAULT_STEP, false);
             String model = org.cohesa.core.drying.DryingSimulator.simulate(req).model();
             double[] t = time(warmup, runs, () -> org.cohesa.core.drying.DryingSimulator.simulate(req));
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("benchmark", "dry");
-            m.put("blend", b.describe());
-            m.put("components", b.size());
-            m.put("until", org.cohesa.core.drying.DryingRequest.DEFAULT_UNTIL);
-            m.put("model", model);
-            m.put("warmup", warmup);
-            reportBlendBench(this, m, "dry to 95 %", b, model, t);
+            reportBlendBench(this, "dry", org.cohesa.core.drying.DryingRequest.DEFAULT_UNTIL, warmup, "dry to 95 %", b, model, t);
         }
     }
 
@@ -204,13 +205,7 @@ public final class BenchCommand implements Runnable {
             String model = org.cohesa.core.safety.SafetyProfiler.profile(b, kelvin).activityModel();
             double[] t = time(warmup, runs,
                     () -> org.cohesa.core.safety.Cautions.forProfile(org.cohesa.core.safety.SafetyProfiler.profile(b, kelvin)));
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("benchmark", "hazards");
-            m.put("blend", b.describe());
-            m.put("components", b.size());
-            m.put("model", model);
-            m.put("warmup", warmup);
-            reportBlendBench(this, m, "safety profile + cautions", b, model, t);
+            reportBlendBench(this, "hazards", null, warmup, "safety profile + cautions", b, model, t);
         }
     }
 }
