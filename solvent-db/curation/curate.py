@@ -46,7 +46,7 @@ COLUMNS = [
 # Report 2021 "Standard atomic weights of the elements 2021", Pure Appl. Chem.).
 ATOMIC_WEIGHTS = {
     "H": 1.008, "C": 12.011, "N": 14.007, "O": 15.999, "F": 18.998,
-    "S": 32.06, "Cl": 35.45, "Br": 79.904,
+    "S": 32.06, "Cl": 35.45, "Br": 79.904, "P": 30.974,
 }
 
 # Curation decisions that pick a value against the default table priority.
@@ -72,6 +72,15 @@ ICH_CONFIRMED_R8 = {"96-47-9", "5614-37-9", "75-65-0"}
 # Set to True once the model accepts 4.
 ICH_WRITE_CLASS_4 = False
 
+
+# Hazard-statement basis (manual.csv column hazard_basis) -> source key. "harmonised": the solvent has an entry in
+# CLP Regulation (EC) No 1272/2008 Annex VI Table 3 (the list recalled from memory); "self": no harmonised entry
+# recalled, so the statements are the usual supplier self-classification.
+HAZARD_BASIS_KEYS = {"harmonised": "memory-clp-annex-vi", "self": "memory-supplier-classification"}
+SELF_CLASSIFICATION_NOTE = "hazard statements: supplier self-classification, check the SDS"
+# A solvent without published Hansen parameters keeps all its other data and says so (never silently dropped).
+HSP_MISSING_NOTE = ("no published Hansen parameters found: left for the structure-based estimate "
+                    "(marked estimated when filled); until then left out of HSP searches")
 
 # The note text that marks a solvent without a flash point because it does not burn in the standard tests.
 NON_FLAMMABLE_NOTE = "no flash point (non-flammable under standard test conditions)"
@@ -335,6 +344,8 @@ def main(argv):
         if vals is not None:
             r["dD"], r["dP"], r["dH"] = (fmt(v, 1) for v in vals)
             r["src_hsp"] = src
+        else:
+            notes.append(HSP_MISSING_NOTE)
 
         # boiling and melting point (°C)
         tb = num(phys[cas][3]) if cas in phys else None
@@ -438,10 +449,16 @@ def main(argv):
                 r["oel_jurisdiction"] = "Ontario"
                 r["src_oel"] = "ontario-oel"
 
-        # hazard statements and peroxide formers (hand-curated, from memory)
+        # hazard statements and peroxide formers (hand-curated, from memory); the basis says whether the list is the
+        # harmonised CLP Annex VI classification or a supplier self-classification (SOURCES.md, hazard statements)
         if m["hazard_statements"]:
             r["hazard_statements"] = m["hazard_statements"]
-            r["src_hazard_statements"] = "memory-ghs-clp"
+            basis = m.get("hazard_basis", "").strip()
+            if basis not in HAZARD_BASIS_KEYS:
+                raise SystemExit(f"{cas}: hazard_basis must be one of {sorted(HAZARD_BASIS_KEYS)}, not {basis!r}")
+            r["src_hazard_statements"] = HAZARD_BASIS_KEYS[basis]
+            if basis == "self":
+                notes.append(SELF_CLASSIFICATION_NOTE)
         if m["peroxide_former"]:
             r["peroxide_former"] = "yes"
             r["src_peroxide_former"] = "memory-peroxide-formers"

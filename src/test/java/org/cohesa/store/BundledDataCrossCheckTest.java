@@ -65,6 +65,12 @@ class BundledDataCrossCheckTest {
             Map.entry("ddbst-unifac", "ddbst-unifac-assignments.tsv"),
             Map.entry("pubchem", "chemical-identifiers-pubchem-small.tsv"));
 
+    /**
+     * A key that names no reference table but a publication whose value was read (a handbook page, a paper) says so in
+     * its citation with these words, and names the stored copy it was read from.
+     */
+    static final String READ_FROM_COPY = "read from a stored copy";
+
     /** Keys that name no table: computed, hand-assigned, or recalled from memory (prefix "memory-"). */
     private static final Set<String> NON_TABLE_KEYS = Set.of("computed", "unifac-manual");
 
@@ -211,8 +217,10 @@ class BundledDataCrossCheckTest {
                 }
                 if (!citations.containsKey(key)) {
                     bad.add(r.get("name") + ": src_" + group + " key '" + key + "' has no citation in SOURCES.md");
-                } else if (!TABLE_KEYS.containsKey(key) && !NON_TABLE_KEYS.contains(key) && !key.startsWith("memory-")) {
-                    bad.add(r.get("name") + ": key '" + key + "' names no table and is not marked memory-");
+                } else if (!TABLE_KEYS.containsKey(key) && !NON_TABLE_KEYS.contains(key) && !key.startsWith("memory-")
+                        && !citations.get(key).contains(READ_FROM_COPY)) {
+                    bad.add(r.get("name") + ": key '" + key + "' names no table, is not marked memory- and its citation does not say it was "
+                            + READ_FROM_COPY);
                 } else if (key.startsWith("memory-") && !citations.get(key).toLowerCase(Locale.ROOT).contains("memory")) {
                     bad.add("SOURCES.md: citation of '" + key + "' does not say it is recalled from memory");
                 }
@@ -587,7 +595,8 @@ class BundledDataCrossCheckTest {
     void identityAndMolarMassAgreeWithPubChem() throws IOException {
         // PubChem compound records (identifiers table): formula must match element by element; the bundled molar
         // mass (IUPAC abridged standard atomic weights, Prohaska et al., Pure Appl. Chem. 94 (2022) 573) must agree
-        // with PubChem's molecular weight within 1e-4 relative (the two use slightly different atomic weights).
+        // with PubChem's molecular weight within 2e-4 relative (the two use slightly different atomic weights: sulfur 32.06
+        // abridged vs PubChem's 32.065 puts carbon disulfide 1.3e-4 apart).
         // Without a PubChem record, the molar mass is recomputed here from the formula with the same weights.
         Map<String, List<String>> ids = new HashMap<>();
         for (List<String> row : table("chemical-identifiers-pubchem-small.tsv", false)) {
@@ -596,7 +605,7 @@ class BundledDataCrossCheckTest {
             }
         }
         Map<String, Double> weights = Map.of("H", 1.008, "C", 12.011, "N", 14.007, "O", 15.999, "F", 18.998,
-                "S", 32.06, "Cl", 35.45, "Br", 79.904);
+                "S", 32.06, "Cl", 35.45, "Br", 79.904, "P", 30.974);
         List<String> bad = new ArrayList<>();
         for (Map<String, String> r : rows) {
             List<String> pub = ids.get(r.get("cas"));
@@ -609,7 +618,7 @@ class BundledDataCrossCheckTest {
                     bad.add(r.get("name") + ": formula " + r.get("formula") + " vs PubChem " + pub.get(2));
                 }
                 double mw = Double.parseDouble(pub.get(3));
-                if (Math.abs(num(r, "molar_mass") - mw) > 1e-4 * mw) {
+                if (Math.abs(num(r, "molar_mass") - mw) > 2e-4 * mw) {
                     bad.add(r.get("name") + ": molar mass " + r.get("molar_mass") + " vs PubChem " + mw);
                 }
             } else if (pub != null) {

@@ -113,7 +113,7 @@ public final class HazardsCommand extends CohesaSubcommand {
             SolventGuide.Scores s = p.guide().get(i).scores();
             ich.row(l.component(), l.entry() == null ? "not listed" : l.entry().solventClass(), l.entry() == null ? null : Output.fmt(l.entry().pdeMgPerDay(), 1),
                     l.entry() == null ? null : Output.fmt(l.entry().limitPpm(), 0),
-                    l.entry() == null ? "" : l.entry().fromMemory() ? "from memory" : "R8 summary",
+                    l.entry() == null ? "" : l.entry().basisText(),
                     s.safety() + "/" + s.health() + "/" + s.environment(), s.rank().label());
         }
         ich.print(o);

@@ -82,7 +82,7 @@ record HazardsReport(
         for (SafetyProfile.IchLine l : p.ich()) {
             IchQ3c.Entry e = l.entry();
             ich.add(new Ich(l.component(), e == null ? null : e.solventClass(), e == null ? null : e.pdeMgPerDay(), e == null ? null : e.limitPpm(),
-                    e == null ? "not listed in the guideline" : e.fromMemory() ? "from memory" : "R8 addition, confirmed from a published summary"));
+                    e == null ? "not listed in the guideline" : e.basisText()));
         }
         List<Guide> g = p.guide().stream().map(l -> new Guide(l.component(), l.scores().safety(), l.scores().health(),
                 l.scores().environment(), l.scores().rank().label(), l.scores().notes())).toList();

@@ -37,13 +37,23 @@ public final class IchQ3c {
      * @param solventClass  1, 2, 3 or 4
      * @param pdeMgPerDay   permitted daily exposure, mg/day (null for classes 1 and 4)
      * @param limitPpm      Option 1 concentration limit, ppm (null for class 4)
-     * @param basis         "memory" or "r8-summary"
+     * @param basis         "memory", "r8-summary" or "guideline-text" (read from a stored copy of the guideline text)
      */
     public record Entry(String cas, String name, int solventClass, Double pdeMgPerDay, Double limitPpm, String basis) {
 
         /** True when the row was recalled from memory and not yet checked against the guideline text. */
         public boolean fromMemory() {
             return "memory".equals(basis);
+        }
+
+        /** How the row was checked, in words for reports: "from memory", "R8 addition, ...", "checked against the guideline text". */
+        public String basisText() {
+            return switch (basis) {
+                case "memory" -> "from memory";
+                case "r8-summary" -> "R8 addition, confirmed from a published summary";
+                case "guideline-text" -> "checked against the guideline text";
+                default -> basis;
+            };
         }
     }
 

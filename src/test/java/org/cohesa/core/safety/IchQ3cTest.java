@@ -73,6 +73,20 @@ class IchQ3cTest {
     }
 
     @Test
+    void triethylamineHasThePdeSetInRevisionR6() {
+        // ICH Q3C(R6) (2016), Part V "PDE for Triethylamine and Methylisobutylketone": NOEL 247 ppm (28-week rat
+        // inhalation study) -> PDE = 124.9 mg/kg/day x 50 kg / (5 x 10 x 2 x 1 x 1) = 62.5 mg/day, Class 3, limit
+        // 62.5 x 1000 / 10 = 6250 ppm; read from a stored copy of the guideline text (fayllar.org copy of Q3C(R6)
+        // Part V) and ICH's announcement (gmp-publishing.com, "Final: ICH Q3C Guideline for Residual Solvents").
+        // The team's reference list ich-q3c-r8.tsv, from memory, still gives the class-3 floor of 50 mg/day.
+        check("121-44-8", 3, 62.5, 6250.0);
+        assertFalse(IchQ3c.byCas("121-44-8").orElseThrow().fromMemory());
+        assertEquals("checked against the guideline text", IchQ3c.byCas("121-44-8").orElseThrow().basisText());
+        // same Part V: methylisobutylketone Class 2, 45 mg/day (kept from memory, agrees with it)
+        check("108-10-1", 2, 45.0, 4500.0);
+    }
+
+    @Test
     void option1LimitIsTenTimesThePde() {
         // ICH Q3C Option 1: concentration (ppm) = 1000 × PDE / dose with dose = 10 g/day
         for (IchQ3c.Entry e : IchQ3c.all().values()) {
@@ -96,10 +110,14 @@ class IchQ3cTest {
         try (Reader r = Files.newBufferedReader(ref, StandardCharsets.UTF_8)) {
             for (CSVRecord rec : CSVFormat.TDF.builder().setHeader().setSkipHeaderRecord(true).get().parse(r)) {
                 IchQ3c.Entry e = IchQ3c.byCas(rec.get("cas")).orElseThrow(() -> new AssertionError("missing " + rec.get("cas")));
+                rows++;
+                if (e.basis().equals("guideline-text")) {
+                    // checked against the guideline text and corrected there (the reference list is from memory)
+                    continue;
+                }
                 assertEquals(Integer.parseInt(rec.get("class")), e.solventClass(), rec.get("solvent"));
                 assertEquals(num(rec.get("pde_mg_per_day")), e.pdeMgPerDay(), rec.get("solvent"));
                 assertEquals(num(rec.get("option1_limit_ppm")), e.limitPpm(), rec.get("solvent"));
-                rows++;
             }
         }
         assertTrue(rows > 60, "the reference list has about 70 rows, read " + rows);
