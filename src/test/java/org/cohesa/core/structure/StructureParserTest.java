@@ -19,8 +19,9 @@ class StructureParserTest {
     void everyBundledSmilesGivesTheTablesFormulaAndMolarMass() {
         // Round trip against solvent-db/solvents.csv: its formula comes from PubChem (cross-checked with the CRC
         // ΔHvap table by curate.py) and its molar mass is computed there from the formula; CDK derives both from
-        // the SMILES alone. Agreement to 1 part in 10^4 allows for the two atomic-weight tables' last digits (the
-        // table uses the IUPAC abridged Cl 35.45, CDK's isotope abundances give 35.453: 0.012 g/mol for CCl4).
+        // the SMILES alone. Agreement to 2 parts in 10^4 allows for the two atomic-weight tables' last digits (the
+        // table uses the IUPAC abridged Cl 35.45, CDK's isotope abundances give 35.453: 0.012 g/mol for CCl4; S 32.06
+        // against 32.066 puts carbon disulfide 1.5e-4 apart).
         List<String> problems = new ArrayList<>();
         int checked = 0;
         for (Solvent s : BundledLiquids.library().all()) {
@@ -38,7 +39,7 @@ class StructureParserTest {
             if (s.formula() != null && !s.formula().equals(st.formula())) {
                 problems.add(s.name() + ": formula " + st.formula() + " from " + s.smiles() + ", table " + s.formula());
             }
-            if (s.molarMass() != null && Math.abs(s.molarMass() - st.molarMass()) > 1e-4 * s.molarMass()) {
+            if (s.molarMass() != null && Math.abs(s.molarMass() - st.molarMass()) > 2e-4 * s.molarMass()) {
                 problems.add(s.name() + ": molar mass " + st.molarMass() + " from the SMILES, table " + s.molarMass());
             }
         }
