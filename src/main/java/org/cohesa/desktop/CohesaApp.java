@@ -50,8 +50,8 @@ public final class CohesaApp extends Application {
         boolean msaa = "true".equalsIgnoreCase(System.getProperty("cohesa.msaa"));
         workbench = new Workbench(session, msaa ? SceneAntialiasing.BALANCED : SceneAntialiasing.DISABLED);
         boolean scripted = opts.screenshot() != null || opts.measurePoints() > 0;
-        double w = scripted ? 1400 : settings.windowWidth;
-        double h = scripted ? 860 : settings.windowHeight;
+        double w = scripted ? opts.width() : settings.windowWidth;
+        double h = scripted ? opts.height() : settings.windowHeight;
         Scene scene = new Scene(workbench.root(), w, h);
         scene.getStylesheets().add(CohesaApp.class.getResource("cohesa.css").toExternalForm());
         primary.setTitle("Cohesa — solvent and blend workbench");

@@ -13,12 +13,13 @@ import org.cohesa.core.hsp.SolubilitySphere;
  * {@code --target=dD,dP,dH,R0} (start with this sphere), {@code --select=NAME} (select a solvent),
  * {@code --measure-frames=N} (rotate the 3D view with N points, print frame times, exit),
  * {@code --blend=NAME:FRACTION,...} (compute this blend's drying path and safety profile at start),
- * {@code --search=K} (run the blend search with up to K components against the target at start).
+ * {@code --search=K} (run the blend search with up to K components against the target at start),
+ * {@code --size=WxH} (window size of a screenshot or frame measurement, default 1400x860).
  */
 public record StartOptions(Path screenshot, Screen screen, int view, SolubilitySphere target, String select, int measurePoints,
-                           String blend, int search) {
+                           String blend, int search, int width, int height) {
 
-    static final List<String> NAMES = List.of("screenshot", "screen", "view", "target", "select", "measure-frames", "blend", "search");
+    static final List<String> NAMES = List.of("screenshot", "screen", "view", "target", "select", "measure-frames", "blend", "search", "size");
     private static final List<String> VIEWS = List.of("3d", "p-h", "d-p", "d-h", "teas");
 
     /** True for an argument the desktop app understands (the launcher sends everything else to the command line). */
@@ -83,6 +84,27 @@ public record StartOptions(Path screenshot, Screen screen, int view, SolubilityS
                 throw new InvalidInputException("--measure-frames", named.get("measure-frames"), "give the number of points, 1 to 100000");
             }
         }
-        return new StartOptions(shot == null ? null : Path.of(shot), screen, view, target, named.get("select"), points, named.get("blend"), search(named.get("search")));
+        int[] size = size(named.get("size"));
+        return new StartOptions(shot == null ? null : Path.of(shot), screen, view, target, named.get("select"), points, named.get("blend"),
+                search(named.get("search")), size[0], size[1]);
+    }
+
+    private static int[] size(String text) {
+        if (text == null) {
+            return new int[] {1400, 860};
+        }
+        String[] parts = text.strip().toLowerCase(java.util.Locale.ROOT).split("x");
+        try {
+            if (parts.length == 2) {
+                int w = Integer.parseInt(parts[0].strip());
+                int h = Integer.parseInt(parts[1].strip());
+                if (w >= 640 && h >= 480 && w <= 7680 && h <= 4320) {
+                    return new int[] {w, h};
+                }
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new InvalidInputException("--size", text, "give WIDTHxHEIGHT in pixels, e.g. 1280x800 (640x480 to 7680x4320)");
     }
 }

@@ -24,7 +24,12 @@ final class DesktopFixture {
     final Workbench workbench;
 
     DesktopFixture(Stage stage) throws Exception {
-        folder = Files.createTempDirectory("cohesa-desktop-test");
+        this(stage, Files.createTempDirectory("cohesa-desktop-test"));
+    }
+
+    /** On the database in {@code folder}: tests of one class share it, so the bundled table is imported once. */
+    DesktopFixture(Stage stage, Path folder) throws Exception {
+        this.folder = folder;
         session = new Session(folder.resolve("cohesa.db"));
         workbench = new Workbench(session, SceneAntialiasing.DISABLED);
         Scene scene = new Scene(workbench.root(), 1280, 800);

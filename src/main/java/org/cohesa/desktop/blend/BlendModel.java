@@ -64,6 +64,11 @@ public final class BlendModel {
 
     public BlendModel(Session session) {
         this.session = session;
+        // suggestions belong to the target they were searched for: a new target (picked, fitted, typed) clears them
+        session.targetProperty().addListener((o, a, t) -> {
+            rows.clear();
+            compared.clear();
+        });
         session.jobs().runningProperty().addListener((o, a, running) -> {
             if (!running && cancel != null) {
                 cancel = null;

@@ -35,6 +35,7 @@ import org.cohesa.desktop.common.Columns;
 import org.cohesa.desktop.common.ErrorText;
 import org.cohesa.desktop.common.Numbers;
 import org.cohesa.desktop.common.SafetyText;
+import org.cohesa.desktop.common.Spinners;
 import org.cohesa.desktop.common.TableTools;
 
 /**
@@ -71,7 +72,13 @@ public final class BlendView {
                 Columns.<BlendModel.Row>text("ICH", r -> ichText(r.blend()), 60),
                 cautionColumn(),
                 Columns.<BlendModel.Row>text("Phases", BlendView::phaseText, 110)));
-        table.setPlaceholder(new Label("Set a target, then Search: suggestions appear here, best first."));
+        Label placeholder = new Label();
+        placeholder.setId("blend-placeholder");
+        placeholder.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(() -> model.session().target() == null
+                ? "Set a target, then Search: suggestions appear here, best first."
+                : "Press Search: suggestions for " + model.session().target().name() + " appear here, best first.",
+                model.session().targetProperty()));
+        table.setPlaceholder(placeholder);
         table.getSelectionModel().setSelectionMode(SelectionMode.MULTIPLE);
         TableTools.equip(table, () -> { });
         table.getSelectionModel().setSelectionMode(SelectionMode.MULTIPLE);
@@ -120,14 +127,10 @@ public final class BlendView {
         g.setHgap(8);
         g.setVgap(6);
         int row = 0;
-        Spinner<Integer> k = new Spinner<>(1, 4, model.maxComponents.get());
-        k.getValueFactory().valueProperty().bindBidirectional(model.maxComponents);
+        Spinner<Integer> k = Spinners.integer(1, 4, model.maxComponents);
         k.setId("blend-max-components");
-        k.setPrefWidth(80);
-        Spinner<Integer> top = new Spinner<>(1, 100, model.top.get());
-        top.getValueFactory().valueProperty().bindBidirectional(model.top);
-        top.setPrefWidth(80);
-        top.setEditable(true);
+        Spinner<Integer> top = Spinners.integer(1, 100, model.top);
+        top.setId("blend-top");
         ComboBox<RankBy> rank = new ComboBox<>();
         rank.getItems().setAll(RankBy.values());
         rank.valueProperty().bindBidirectional(model.rankBy);
@@ -155,6 +158,8 @@ public final class BlendView {
         search.setId("blend-search");
         search.setDefaultButton(true);
         search.setOnAction(e -> {
+            Spinners.commit(k);
+            Spinners.commit(top);
             try {
                 model.search(null);
             } catch (RuntimeException ex) {

@@ -19,11 +19,7 @@ import javafx.concurrent.Task;
  */
 public final class Jobs {
 
-    private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
-        Thread t = new Thread(r, "cohesa-worker");
-        t.setDaemon(true);
-        return t;
-    });
+    private ExecutorService worker = newWorker();
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper("Ready.");
     private final ReadOnlyDoubleWrapper progress = new ReadOnlyDoubleWrapper(0);
     private final ReadOnlyBooleanWrapper running = new ReadOnlyBooleanWrapper(false);
@@ -65,12 +61,12 @@ public final class Jobs {
             }
         };
         task.messageProperty().addListener((o, a, m) -> {
-            if (task == current && m != null && !m.isEmpty()) {
+            if (task == current && !task.isDone() && m != null && !m.isEmpty()) {
                 message.set(m);
             }
         });
         task.progressProperty().addListener((o, a, p) -> {
-            if (task == current) {
+            if (task == current && !task.isDone()) {
                 progress.set(p.doubleValue());
             }
         });
@@ -99,6 +95,7 @@ public final class Jobs {
         current = task;
         active++;
         running.set(true);
+        failed.set(false); // a new job is not the last one's failure
         progress.set(-1);
         message.set(title + "…");
         worker.submit(task);
@@ -110,11 +107,28 @@ public final class Jobs {
         return run(title, work, onDone, null);
     }
 
-    /** Cancels the job the status bar shows. */
+    /**
+     * Cancels the job the status bar shows. The status says so at once; a computation that takes a moment to notice
+     * is left to finish on its own thread (its result is dropped), and the jobs queued behind it move to a fresh
+     * worker, so the next job never waits for it.
+     */
     public void cancel() {
-        if (current != null) {
+        if (current != null && !current.isDone()) {
             current.cancel(true);
+            ExecutorService abandoned = worker;
+            worker = newWorker();
+            for (Runnable queued : abandoned.shutdownNow()) {
+                worker.submit(queued);
+            }
         }
+    }
+
+    private static ExecutorService newWorker() {
+        return Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, "cohesa-worker");
+            t.setDaemon(true);
+            return t;
+        });
     }
 
     /** Shows a message in the status bar (FX thread or not). */

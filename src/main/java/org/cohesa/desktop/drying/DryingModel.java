@@ -39,6 +39,8 @@ public final class DryingModel {
 
     public DryingModel(Session session) {
         this.session = session;
+        // RED along the path is to the target it was computed for
+        session.targetProperty().addListener((o, a, t) -> result.set(null));
         session.selectedBlendProperty().addListener((o, a, b) -> {
             if (b != null && !publishing) {
                 blendText.set(b.describe());

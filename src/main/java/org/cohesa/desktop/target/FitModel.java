@@ -39,6 +39,8 @@ public final class FitModel {
     private final StringProperty name = new SimpleStringProperty("my material (fit)");
     private final ObjectProperty<FitResult> result = new SimpleObjectProperty<>();
     private final StringProperty report = new SimpleStringProperty("");
+    /** A fitted sphere waiting for the user's word before it replaces the current target (null when none waits). */
+    private final ObjectProperty<TargetChoice> pending = new SimpleObjectProperty<>();
 
     public FitModel(Session session) {
         this.session = session;
@@ -60,6 +62,29 @@ public final class FitModel {
         return report;
     }
 
+    /** The fitted sphere awaiting confirmation before it replaces the current target. */
+    public ObjectProperty<TargetChoice> pendingProperty() {
+        return pending;
+    }
+
+    /** Makes the waiting fitted sphere the target. */
+    public void acceptPending() {
+        TargetChoice t = pending.get();
+        if (t != null) {
+            pending.set(null);
+            session.targetProperty().set(t);
+            session.jobs().say("Target replaced by the fitted sphere " + t.name() + ".");
+        }
+    }
+
+    /** Keeps the current target; the fit stays in the report (and can still be saved as a material). */
+    public void keepCurrent() {
+        if (pending.get() != null) {
+            pending.set(null);
+            session.jobs().say("Target kept: " + (session.target() == null ? "none" : session.target().name()) + ".");
+        }
+    }
+
     public void fit(Runnable then) {
         SolventLibrary library = new SolventLibrary(List.copyOf(session.solvents()));
         String text = csv.get() == null ? "" : csv.get();
@@ -72,7 +97,13 @@ public final class FitModel {
         }, r -> {
             result.set(r);
             report.set(describe(r));
-            session.targetProperty().set(new TargetChoice(label, r.sphere(), "fit of " + r.results() + " test results"));
+            TargetChoice fitted = new TargetChoice(label, r.sphere(), "fit of " + r.results() + " test results");
+            if (session.target() == null) {
+                session.targetProperty().set(fitted);
+            } else {
+                pending.set(fitted); // the user decides: the fit never silently replaces a target in use
+                session.jobs().say("Fitted. Use the fitted sphere as the target instead of " + session.target().name() + "? (see the fit pane)");
+            }
             if (then != null) {
                 then.run();
             }

@@ -214,7 +214,23 @@ public final class TargetView {
         save.setId("fit-save");
         save.disableProperty().bind(fitModel.resultProperty().isNull());
         save.setOnAction(e -> fitModel.saveAsMaterial(null));
-        VBox box = new VBox(6, help, csv, new HBox(8, nameLabel, name), new HBox(8, load, fit, save));
+        Label ask = new Label();
+        ask.setWrapText(true);
+        ask.textProperty().bind(Bindings.createStringBinding(() -> fitModel.pendingProperty().get() == null ? ""
+                : "Replace the current target " + (model.session().target() == null ? "" : "\u201c" + model.session().target().name() + "\u201d ")
+                + "by the fitted sphere " + describe(fitModel.pendingProperty().get()) + "?", fitModel.pendingProperty(), model.session().targetProperty()));
+        Button replace = new Button("_Replace the target");
+        replace.setId("fit-replace-target");
+        replace.setOnAction(e -> fitModel.acceptPending());
+        Button keepTarget = new Button("K_eep the current target");
+        keepTarget.setId("fit-keep-target");
+        keepTarget.setOnAction(e -> fitModel.keepCurrent());
+        VBox question = new VBox(6, ask, new HBox(8, replace, keepTarget));
+        question.setId("fit-question");
+        question.getStyleClass().add("question");
+        question.visibleProperty().bind(fitModel.pendingProperty().isNotNull());
+        question.managedProperty().bind(question.visibleProperty());
+        VBox box = new VBox(6, help, csv, new HBox(8, nameLabel, name), new HBox(8, load, fit, save), question);
         box.setPadding(new Insets(8));
         return box;
     }

@@ -1,0 +1,141 @@
+package org.cohesa.desktop;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.concurrent.TimeUnit;
+import javafx.scene.control.Label;
+import javafx.scene.control.Spinner;
+import javafx.stage.Stage;
+import org.cohesa.core.hsp.SolubilitySphere;
+import org.cohesa.desktop.common.TargetChoice;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/** The defects found when the workbench was tried as a new user would (issue 16), one check each. */
+@ExtendWith(ApplicationExtension.class)
+class DefectsTest {
+
+    /** An invented demo sphere (the same as docs/screenshots/take.sh uses). */
+    private static final TargetChoice DEMO = new TargetChoice("demo sphere (invented)", SolubilitySphere.of(18.5, 9, 8, 8), "typed in");
+
+    private static java.nio.file.Path shared;
+    private DesktopFixture fx;
+
+    @Start
+    void start(Stage stage) throws Exception {
+        if (shared == null) {
+            shared = java.nio.file.Files.createTempDirectory("cohesa-defects-test");
+        }
+        fx = new DesktopFixture(stage, shared);
+    }
+
+    @Test
+    void cancelStopsAFourComponentSearchWithinASecondAndSaysSo(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        robot.interact(() -> {
+            fx.session.targetProperty().set(DEMO);
+            fx.workbench.blendModel().maxComponents.set(4);
+            fx.workbench.blendModel().noCmr.set(false);
+            fx.workbench.blendModel().search(null);
+        });
+        Thread.sleep(400);
+        assertTrue(fx.session.jobs().runningProperty().get(), "a 4-component search over the whole library takes longer than 0.4 s");
+        robot.interact(() -> fx.session.jobs().cancel());
+        // waitFor fails the test with a TimeoutException when the condition is not met within the second
+        WaitForAsyncUtils.waitFor(1, TimeUnit.SECONDS, () -> !fx.session.jobs().runningProperty().get());
+        Thread.sleep(500); // late progress messages of the stopped search must not overwrite the word
+        WaitForAsyncUtils.waitForFxEvents();
+        String status = fx.session.jobs().messageProperty().get();
+        assertTrue(status.contains("cancelled"), status);
+        // the worker is free again: the next job starts and finishes at once, not after the stopped search
+        boolean[] ran = {false};
+        robot.interact(() -> fx.session.jobs().run("Next job", p -> 1, v -> ran[0] = true));
+        WaitForAsyncUtils.waitFor(1, TimeUnit.SECONDS, () -> ran[0]);
+        WaitForAsyncUtils.waitForFxEvents();
+        Thread.sleep(300);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(fx.workbench.blendModel().rows().isEmpty(), "a cancelled search lists nothing");
+    }
+
+    @Test
+    void aNewTargetClearsTheOldSuggestionsAndTheHint(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        robot.interact(() -> {
+            fx.workbench.show(Screen.BLENDS);
+            assertTrue(robot.lookup("#blend-placeholder").queryAs(Label.class).getText().startsWith("Set a target"));
+            fx.session.targetProperty().set(DEMO);
+            fx.workbench.blendModel().maxComponents.set(1);
+            fx.workbench.blendModel().search(null);
+        });
+        fx.awaitJobs();
+        assertFalse(fx.workbench.blendModel().rows().isEmpty());
+        assertFalse(robot.lookup("#blend-placeholder").queryAs(Label.class).getText().contains("Set a target"),
+                "the set-a-target hint is gone once a target is set");
+        robot.interact(() -> fx.session.targetProperty().set(new TargetChoice("another sphere (invented)",
+                SolubilitySphere.of(16, 4, 4, 6), "typed in")));
+        assertTrue(fx.workbench.blendModel().rows().isEmpty(), "suggestions for the old target are not listed under the new one");
+    }
+
+    @Test
+    void aFitAsksBeforeReplacingTheCurrentTarget(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        // four liquids from the bundled library, scores invented for the test (a demo series, no source)
+        String csv = "liquid,score\nacetone,1\ntoluene,1\nethyl acetate,1\nmethanol,0\nwater,0\nn-hexane,0\n"
+                + "tetrahydrofuran,1\ncyclohexane,0\n";
+        robot.interact(() -> {
+            fx.session.targetProperty().set(DEMO);
+            fx.workbench.show(Screen.TARGET);
+            robot.lookup("#fit-csv").queryAs(javafx.scene.control.TextArea.class).setText(csv);
+            robot.lookup("#fit-run").queryAs(javafx.scene.control.Button.class).fire();
+        });
+        fx.awaitJobs();
+        assertEquals(DEMO, fx.session.target(), "the fit did not replace the target on its own");
+        assertTrue(robot.lookup("#fit-question").query().isVisible(), "the fit pane asks");
+        robot.interact(() -> robot.lookup("#fit-keep-target").queryAs(javafx.scene.control.Button.class).fire());
+        assertEquals(DEMO, fx.session.target());
+        assertFalse(robot.lookup("#fit-question").query().isVisible());
+        robot.interact(() -> robot.lookup("#fit-run").queryAs(javafx.scene.control.Button.class).fire());
+        fx.awaitJobs();
+        robot.interact(() -> robot.lookup("#fit-replace-target").queryAs(javafx.scene.control.Button.class).fire());
+        assertTrue(fx.session.target().source().startsWith("fit of"), fx.session.target().source());
+    }
+
+    @Test
+    void theStatusDropsTheErrorColourWhenTheNextJobRuns(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        Label status = robot.lookup("#status").queryAs(Label.class);
+        robot.interact(() -> fx.session.jobs().complain("something failed"));
+        assertTrue(status.getStyleClass().contains("status-problem"));
+        robot.interact(() -> fx.session.jobs().run("Next job", p -> {
+            Thread.sleep(1500);
+            return 1;
+        }, v -> { }));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertFalse(status.getStyleClass().contains("status-problem"), "the running job is not shown as a failure");
+        fx.awaitJobs();
+    }
+
+    @Test
+    void theMostComponentsSpinnerCommitsTypedInput(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        robot.interact(() -> fx.workbench.show(Screen.BLENDS));
+        @SuppressWarnings("unchecked")
+        Spinner<Integer> k = robot.lookup("#blend-max-components").queryAs(Spinner.class);
+        robot.interact(() -> k.getEditor().setText("2"));
+        // typing without Enter, then leaving the field (the search button takes the focus)
+        robot.interact(() -> robot.lookup("#blend-search").query().requestFocus());
+        assertEquals(2, fx.workbench.blendModel().maxComponents.get());
+        // beyond the range, then Search: the search takes the clamped value (it fails for want of a target, which is fine here)
+        robot.interact(() -> {
+            k.getEditor().setText("9");
+            robot.lookup("#blend-search").queryAs(javafx.scene.control.Button.class).fire();
+        });
+        assertEquals(4, fx.workbench.blendModel().maxComponents.get(), "a typed value beyond the range is clamped to 4");
+    }
+}
