@@ -261,6 +261,7 @@ def main(argv):
     nfpa = by_cas(p("nfpa-497-2008.tsv"))
     serat = by_cas(p("dippr-t-flash-serat.csv"))
     ich = {r[1]: r for r in read_tsv(p("ich-q3c-r8.tsv"))}
+    proxy_tb = {c: num(phys[c][3]) for c in phys if num(phys[c][3]) is not None}
     subgroups = {int(r[0]) for r in read_tsv(p("unifac-subgroups.tsv"))}
 
     ids = {}
@@ -422,7 +423,9 @@ def main(argv):
                     break
 
         # vapour pressure: one correlation per solvent, checked against the normal boiling point (curation/vapour.py)
-        r.update(vapour.choose(cas, tb, vapour_tables, notes))
+        hv_pair = (num(hvap[cas][4]), num(hvap[cas][5])) if cas in hvap else None
+        fp_k = float(r["flash_point_c"]) + 273.15 if r["flash_point_c"] else None
+        r.update(vapour.choose(cas, tb, vapour_tables, notes, proxy_tb, hv_pair, fp_k))
 
         # enthalpy of vaporisation at 25 °C (kJ/mol)
         if cas in hvap and num(hvap[cas][5]) is not None:

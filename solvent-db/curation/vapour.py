@@ -56,6 +56,10 @@ class Candidate:
         c = [float(x) for x in self.coeffs]
         return pressure(self.eq, c, float(self.tc) if self.tc else None, float(self.pc) if self.pc else None, t)
 
+    def range_text(self):
+        lo, hi = self.tmin or "?", self.tmax or ("Tc" if self.tc else "?")
+        return f"{lo}-{hi} K"
+
     def inside(self, t):
         return (not self.tmin or t >= float(self.tmin)) and (not self.tmax or t <= float(self.tmax))
 
@@ -70,30 +74,151 @@ class Candidate:
         return cols
 
 
+# The published tables, in the order of preference of the reference README ("a wide-range correlation inside its
+# range" first, then the narrow-range Antoine sets): (source key, file, equation, reader of one row).
+def _mcgarry(row):   # CAS Name A B C D Pc Tc Tmin; no upper limit given (the fit ends at the critical point)
+    return row[2:6], row[8], "", row[7], row[6]
+
+
+def _vdi(row):       # CAS Chemical Tm Tc Pc A B C D; valid from Tm to Tc
+    return row[5:9], row[2], row[3], row[3], row[4]
+
+
+def _perry(row):     # CAS Chemical C1..C5 Tmin Tmax
+    return row[2:7], row[7], row[8], "", ""
+
+
+def _poling_wagner(row):  # CAS Name A B C D Tc Pc Tmin Tmax
+    return row[2:6], row[8], row[9], row[6], row[7]
+
+
+def _antoine(row):   # CAS Chemical/Name A B C Tmin Tmax
+    return row[2:5], row[5], row[6], "", ""
+
+
+TABLES = [
+    ("mcgarry-1983-wagner", "wagner-mcgarry-vapour-pressure.tsv", "wagner-3-6", _mcgarry, "McGarry Wagner"),
+    ("vdi-2010-wagner", "vdi-ppds-wagner-vapour-pressure.tsv", "wagner-2.5-5", _vdi, "VDI Heat Atlas Wagner"),
+    ("perry-2008-dippr101", "perry-dippr101-vapour-pressure.tsv", "dippr-101", _perry, "Perry DIPPR 101"),
+    ("poling-2000-wagner", "wagner-poling-vapour-pressure.tsv", "wagner-2.5-5", _poling_wagner, "Poling Wagner"),
+    ("poling-2000-antoine", "antoine-collection-poling.tsv", "antoine-log10", _antoine, "Poling Antoine"),
+    ("landolt-iv20-antoine", "landolt-antoine-vapour-pressure.tsv", "antoine-ln", _antoine, "Landolt-Boernstein Antoine"),
+]
+
+# The temperature the workflows use most (drying at room temperature, vapour hazard at 25 °C), K.
+ROOM_K = 298.15
+
+
 def load_tables(ref):
-    """cas -> list of Candidates, in order of preference (step 1: Poling's Antoine table only)."""
+    """cas -> list of Candidates, in the tables' order of preference (TABLES)."""
     out = {}
-    path = os.path.join(ref, "antoine-collection-poling.tsv")
-    with open(path, encoding="utf-8", newline="") as f:
-        rows = [line.rstrip("\n").split("\t") for line in f][1:]
-    for row in rows:
-        cas = row[0].strip()
-        if cas and cas not in out:
-            out[cas] = [Candidate("poling-2000-antoine", "antoine-log10", row[2:5], row[5], row[6], label="Poling Antoine")]
+    for key, name, eq, read, label in TABLES:
+        with open(os.path.join(ref, name), encoding="utf-8", newline="") as f:
+            rows = [line.rstrip("\n").split("\t") for line in f][1:]
+        seen = set()
+        for row in rows:
+            cas = row[0].strip()
+            if not cas or cas in seen:
+                continue
+            seen.add(cas)
+            coeffs, tmin, tmax, tc, pc = read(row)
+            out.setdefault(cas, []).append(Candidate(key, eq, coeffs, tmin, tmax, tc, pc, label=label))
     return out
 
 
-def choose(cas, tb_k, tables, notes):
+def tb_deviation(cand, tb_k):
+    """P(Tb)/101.325 kPa - 1 of one candidate (evaluated even outside its range)."""
+    try:
+        return cand.p(tb_k) / ATM - 1
+    except (OverflowError, ValueError, ZeroDivisionError):
+        return math.inf
+
+
+# Low end of the temperatures the workflows evaluate a curve at, K: 0 °C (cold drying, storage), or the flash point
+# where that is lower (the blend flash-point search starts at the components' flash points).
+COLD_K = 273.15
+
+
+def coverage_rank(cand, tb_k, flash_k=None):
+    """0: range holds the whole working span (min(0 °C, flash point) to Tb); 1: holds 25 °C and Tb; 2: holds 25 °C;
+    3: holds Tb; 4: none of these. Sorted stably, so the table order decides within a rank."""
+    low = min(COLD_K, flash_k) if flash_k is not None else COLD_K
+    room, boil = cand.inside(ROOM_K), tb_k is None or cand.inside(tb_k)
+    if room and boil and cand.inside(low):
+        return 0
+    return 1 if room and boil else 2 if room else 3 if boil else 4
+
+
+# Solvents whose CAS no vapour-pressure table holds, mapped to a liquid that one does hold (a curation decision,
+# written into the solvent's note; SOURCES.md, "Vapour pressure"): cas -> (proxy CAS, reason).
+PROXIES = {
+    "138-86-3": ("5989-27-5", "dipentene (racemic limonene): curve of (R)-(+)-limonene 5989-27-5; the two enantiomers "
+                 "and their racemic liquid have the same vapour pressure"),
+    "97-64-3": ("687-47-8", "ethyl DL-lactate: curve of ethyl (S)-lactate 687-47-8 (enantiomers, same vapour pressure)"),
+    "547-64-8": ("2155-30-8", "methyl lactate: curve of methyl (±)-lactate 2155-30-8 (same liquid, other CAS entry)"),
+    "1330-20-7": ("108-38-3", "mixed xylene: curve of m-xylene 108-38-3, its main isomer"),
+    "91-17-8": ("493-02-7", "decalin (cis/trans mixture): curve of trans-decalin 493-02-7, the more volatile isomer"),
+    "25498-49-1": ("20324-33-8", "tripropylene glycol methyl ether (isomer mixture): curve of the isomer 20324-33-8"),
+}
+
+# Source key of the stored estimate made from the CRC enthalpies of vaporisation (SOURCES.md, docs/methods.md).
+ESTIMATE_KEY = "estimate-clapeyron-crc-hvap"
+
+
+def crc_estimate(tb_k, hvap_tb, hvap_298):
+    """Clausius–Clapeyron estimate anchored at the normal boiling point (Tb, 101.325 kPa), with ΔHvap linear in T
+    between the CRC values at Tb and at 298.15 K (constant ΔCp); with only one of them, ΔHvap constant. None when
+    neither is known. Its measured error at 25 °C is in docs/methods.md."""
+    if tb_k is None or (hvap_tb is None and hvap_298 is None):
+        return None
+    if hvap_tb is not None and hvap_298 is not None and abs(tb_k - ROOM_K) > 1:
+        h0, dcp = hvap_tb, (hvap_298 - hvap_tb) / (ROOM_K - tb_k)
+        lo, hi = min(ROOM_K, tb_k), max(ROOM_K, tb_k)
+        label = "ΔHvap at Tb and at 25 °C"
+    else:
+        h0, dcp = (hvap_tb if hvap_tb is not None else hvap_298), 0.0
+        lo, hi = (min(ROOM_K, tb_k), max(ROOM_K, tb_k)) if hvap_tb is None else (tb_k - 20, tb_k + 20)
+        label = "ΔHvap at 25 °C only" if hvap_tb is None else "ΔHvap at Tb only"
+    coeffs = [f"{tb_k:.2f}", "101325", f"{h0:.0f}", f"{dcp:.2f}"]
+    cand = Candidate(ESTIMATE_KEY, "clapeyron", coeffs, f"{lo:.2f}", f"{hi:.2f}", label="estimate from Tb and CRC " + label)
+    return cand
+
+
+def choose(cas, tb_k, tables, notes, proxy_tb=None, hvap=None, flash_k=None):
     """The columns of the chosen correlation for one solvent ({} when none passes), adding reasons to notes.
 
-    Rule: the first candidate (in preference order) that reproduces the normal boiling point within
-    MAX_DEV_AT_TB where Tb lies inside its range; a candidate whose range does not reach Tb is accepted
-    unchecked (it cannot be judged there)."""
-    for cand in tables.get(cas, []):
-        if tb_k is not None and cand.inside(tb_k):
-            p_tb = cand.p(tb_k)
-            if abs(p_tb / ATM - 1) > MAX_DEV_AT_TB:
-                notes.append(f"{cand.label} fit dropped: gives {p_tb:.0f} Pa at the boiling point")
-                continue
+    Rule (SOURCES.md, "Vapour pressure"): among the published candidates (of the solvent's CAS, else of its PROXIES
+    entry), those whose range holds the whole working span (0 °C or the flash point if lower, up to Tb) come first,
+    then those holding 25 °C and Tb, then 25 °C, then Tb, then the rest (coverage_rank); within a rank the table
+    order of TABLES. The first candidate that reproduces the
+    solvent's own normal boiling point within MAX_DEV_AT_TB (101.325 kPa ± 5 %, evaluated even where Tb lies outside
+    its range) is taken. For a proxy without a boiling point of the solvent's own, the proxy's CRC boiling point
+    (proxy_tb: cas -> K) is the check. When none passes, the estimate of crc_estimate (hvap: (ΔHvap at Tb, ΔHvap at
+    298.15 K) in J/mol, each or both None) is stored."""
+    cands = tables.get(cas, [])
+    if not cands and cas in PROXIES:
+        proxy, reason = PROXIES[cas]
+        cands = tables.get(proxy, [])
+        if cands:
+            notes.append("vapour pressure: " + reason)
+            if tb_k is None and proxy_tb and proxy_tb.get(proxy):
+                tb_k = proxy_tb[proxy]
+                notes.append(f"vapour-pressure fit checked at the boiling point of {proxy}: {tb_k - 273.15:.2f} °C")
+    if cands and tb_k is None:
+        notes.append("vapour-pressure correlation not used: no boiling point to check it against")
+        cands = []
+    for cand in sorted(cands, key=lambda c: coverage_rank(c, tb_k, flash_k)):
+        dev = tb_deviation(cand, tb_k)
+        if abs(dev) > MAX_DEV_AT_TB:
+            notes.append(f"{cand.label} vapour-pressure fit not used: {100 * dev:+.0f} % from 101.325 kPa "
+                         f"at the boiling point")
+            continue
+        if not cand.inside(ROOM_K):
+            notes.append(f"vapour pressure at 25 °C extrapolated: {cand.label} fit covers {cand.range_text()}")
         return cand.columns()
+    est = crc_estimate(tb_k, *(hvap or (None, None)))
+    if est is not None:
+        notes.append(f"vapour pressure estimated (Clausius–Clapeyron from the boiling point and CRC "
+                     f"{est.label.split('CRC ')[1]}; no published correlation passes the boiling-point check)")
+        return est.columns()
     return {}

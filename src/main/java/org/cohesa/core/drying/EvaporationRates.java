@@ -4,8 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.cohesa.core.InvalidInputException;
-import org.cohesa.core.solvent.Antoine;
+import org.cohesa.core.solvent.Dippr101;
 import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.solvent.VapourCorrelation;
 import org.cohesa.core.solvent.VapourPressure;
 
 /**
@@ -36,8 +37,14 @@ public final class EvaporationRates {
     public static final double BUAC_MOLAR_MASS = 116.16;
     /** n-Butyl acetate molar volume, cm³/mol: 116.16 / 0.8825 g/cm³ (density, CRC Handbook 95th ed., 2014). */
     public static final double BUAC_MOLAR_VOLUME = 116.16 / 0.8825;
-    /** n-Butyl acetate Antoine constants, Pa and K (Poling, Prausnitz, O'Connell 2000, appendix A). */
-    public static final Antoine BUAC_ANTOINE = new Antoine(9.5, 1596.7, -43.85, 301.0, 424.11, "poling-2000-antoine");
+    /**
+     * n-Butyl acetate vapour pressure, Pa and K: DIPPR 101 coefficients of Perry's Chemical Engineers' Handbook, 8th ed.
+     * (2008), Table 2-8, valid 199.65–575.4 K — the curve the bundled table holds for it (solvent-db/SOURCES.md), so
+     * that the library's n-butyl acetate evaporates at exactly 1 on this scale. (Poling's Antoine set, valid only from
+     * 301 K, gives 11 % more at 25 °C.)
+     */
+    public static final VapourCorrelation BUAC_VAPOUR_PRESSURE = new Dippr101(122.82, -9253.2, -14.99, 1.047E-05, 2, 199.65, 575.4,
+            "perry-2008-dippr101");
 
     private final double[] c;
     private final List<String> notes;
@@ -52,7 +59,7 @@ public final class EvaporationRates {
      *                               or the temperature when a component would boil
      */
     public static EvaporationRates of(List<Solvent> solvents, double kelvin) {
-        double reference = BUAC_MOLAR_VOLUME * BUAC_ANTOINE.pressurePa(kelvin);
+        double reference = BUAC_MOLAR_VOLUME * BUAC_VAPOUR_PRESSURE.pressurePa(kelvin);
         double[] c = new double[solvents.size()];
         List<String> notes = new ArrayList<>();
         for (int i = 0; i < c.length; i++) {

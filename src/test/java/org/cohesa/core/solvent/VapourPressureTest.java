@@ -27,12 +27,15 @@ class VapourPressureTest {
     }
 
     @Test
-    void clausiusClapeyronEstimateTracksTheAntoineValuesOfTheLibrary() {
-        // outside truth: the Poling Antoine constants of every library solvent that also has Tb and ΔHvap(298 K) (CRC)
+    void clausiusClapeyronEstimateTracksThePublishedCorrelationsOfTheLibrary() {
+        // outside truth: the published correlation (McGarry 1983, VDI Heat Atlas 2010, Perry 2008, Poling 2000 —
+        // solvent-db/SOURCES.md) of every library solvent that also has Tb and ΔHvap(298 K) (CRC), used inside its range
         try (Database db = Database.open(dir.resolve("v.db"))) {
             List<Double> errors = new ArrayList<>();
             for (Solvent s : new SolventRepository(db).all()) {
-                if (!(s.vapourPressure() instanceof Antoine a) || s.boilingPointC() == null || s.hvapKjPerMol() == null || !a.isValidAt(298.15, 10)) {
+                VapourCorrelation a = s.vapourPressure();
+                if (a == null || a.isEstimate() || a instanceof AntoineLn || s.boilingPointC() == null || s.hvapKjPerMol() == null
+                        || !a.isValidAt(298.15, 0)) {
                     continue;
                 }
                 Solvent withoutAntoine = new Solvent(s.name(), s.synonyms(), s.cas(), s.formula(), s.smiles(), s.family(), s.families(), s.molarMass(), s.density(),
@@ -45,12 +48,16 @@ class VapourPressureTest {
                 errors.add(Math.abs(estimate.pressurePa(298.15) / truth - 1));
             }
             Collections.sort(errors);
-            assertTrue(errors.size() >= 25, "expected most Antoine solvents to have Tb and ΔHvap too, got " + errors.size());
+            assertTrue(errors.size() >= 60, "expected most solvents with a published correlation to have Tb and ΔHvap too, got "
+                    + errors.size());
+            System.out.printf(java.util.Locale.ROOT, "run-time Clausius–Clapeyron fallback at 25 °C: n=%d median %.1f %% p90 %.1f %%%n",
+                    errors.size(), 100 * errors.get(errors.size() / 2), 100 * errors.get((int) Math.floor(0.9 * (errors.size() - 1))));
             double median = errors.get(errors.size() / 2);
             double p90 = errors.get((int) Math.floor(0.9 * (errors.size() - 1)));
-            // measured on the curated table (37 solvents): median 9.4 %, 90th percentile 20 % (constant ΔHvap(298) over 298 K..Tb)
-            assertTrue(median < 0.15, "median relative error " + median);
-            assertTrue(p90 < 0.35, "90th percentile relative error " + p90);
+            // measured on the curated table (73 solvents, 25 °C inside the published range): median 15 %, 90th percentile
+            // 53 % — constant ΔHvap(298) over 298 K..Tb runs low for associating liquids; docs/methods.md
+            assertTrue(median < 0.20, "median relative error " + median);
+            assertTrue(p90 < 0.60, "90th percentile relative error " + p90);
         }
     }
 }
