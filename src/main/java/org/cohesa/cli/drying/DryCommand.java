@@ -23,6 +23,7 @@ import org.cohesa.core.hsp.SolubilitySphere;
 import org.cohesa.core.solvent.Blend;
 import org.cohesa.core.solvent.SolventLibrary;
 import org.cohesa.report.png.DryingPlot;
+import org.cohesa.store.WaterMiscibilityCsv;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -88,7 +89,8 @@ public final class DryCommand extends CohesaSubcommand {
         if (png != null) {
             OutputFile.check("--png", png, overwrite);
         }
-        DryingRequest req = new DryingRequest(b, sphere, tC + 273.15, untilF, ideal, DryingRequest.DEFAULT_STEP, true);
+        DryingRequest req = new DryingRequest(b, sphere, tC + 273.15, untilF, ideal, DryingRequest.DEFAULT_STEP, true,
+                WaterMiscibilityCsv.bundled());
         DryingPath path;
         try {
             path = DryingSimulator.simulate(req);
@@ -165,7 +167,11 @@ public final class DryCommand extends CohesaSubcommand {
         }
         out().println("left last: " + path.lastSolvent());
         for (DryingPath.Exhaustion e : path.exhausted()) {
-            out().println("runs out: " + e.solvent() + " at " + Output.fmt(100 * e.evaporated(), 1) + " % evaporated");
+            out().println("practically gone: " + e.solvent() + " at " + Output.fmt(100 * e.evaporated(), 1) + " % evaporated (less than "
+                    + Output.fmt(100 * DryingSimulator.PRACTICALLY_GONE, 1) + " % of it left)");
+        }
+        if (path.phases() != null) {
+            out().println("liquid phases (" + path.phases().basis().label() + "): " + path.phases().detail());
         }
         if (!tails.isEmpty()) {
             out().println("slow tail solvents that keep the path inside:");

@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.function.Function;
 import org.cohesa.cli.Output;
 import org.cohesa.core.drying.DryingPath;
+import org.cohesa.core.drying.DryingSimulator;
 import org.cohesa.core.drying.PathPoint;
 import org.cohesa.core.drying.TailSuggestion;
 import org.cohesa.core.solvent.Blend;
@@ -24,8 +25,10 @@ record DryReport(
         List<Point> path,
         @JsonProperty("leaves_sphere_at") Double leavesSphereAt,
         @JsonProperty("last_solvent") String lastSolvent,
-        @JsonProperty("runs_out") List<RunsOut> runsOut,
+        @JsonProperty("practically_gone") List<RunsOut> practicallyGone,
+        @JsonProperty("practically_gone_below") double practicallyGoneBelow,
         @JsonProperty("two_phases_at") Double twoPhasesAt,
+        Phases phases,
         @JsonProperty("tail_suggestions") List<Tail> tailSuggestions,
         List<String> notes,
         List<String> cautions,
@@ -34,7 +37,12 @@ record DryReport(
     record Point(double evaporated, double time, Map<String, Double> composition, Double dD, Double dP, Double dH, Double red) {
     }
 
+    /** A component practically gone (below {@code practically_gone_below} of its initial volume). */
     record RunsOut(String solvent, double evaporated, double time) {
+    }
+
+    /** The liquid–liquid judgement: what decided it (measured, measured with water and model elsewhere, model). */
+    record Phases(boolean splits, String basis, String model, String detail) {
     }
 
     record Tail(String solvent, double fraction, @JsonProperty("relative_rate") double relativeRate, @JsonProperty("max_red") double maxRed,
@@ -49,7 +57,10 @@ record DryReport(
         List<Tail> ts = tails.stream().map(s -> new Tail(s.solvent(), s.fraction(), Output.round(s.relativeRate(), 4),
                 Output.round(s.maxRed(), 4), s.lastSolvent(), hazards.apply(s.solvent()))).toList();
         return new DryReport(b.describe(), targetLabel, tC, path.model(), path.modelNote().isEmpty() ? null : path.modelNote(), pts,
-                round(path.leavesSphereAt(), 6), path.lastSolvent(), out, round(path.splitsAt(), 6), ts, path.notes(), cautions, written);
+                round(path.leavesSphereAt(), 6), path.lastSolvent(), out, DryingSimulator.PRACTICALLY_GONE, round(path.splitsAt(), 6),
+                path.phases() == null ? null : new Phases(path.phases().splits(), path.phases().basis().label(), path.phases().model(),
+                        path.phases().detail()),
+                ts, path.notes(), cautions, written);
     }
 
     private static Point point(PathPoint p) {

@@ -2,6 +2,7 @@ package org.cohesa.core.drying;
 
 import java.util.Locale;
 import org.cohesa.core.InvalidInputException;
+import org.cohesa.core.activity.WaterSolubilityTable;
 import org.cohesa.core.hsp.SolubilitySphere;
 import org.cohesa.core.solvent.Blend;
 
@@ -15,9 +16,11 @@ import org.cohesa.core.solvent.Blend;
  * @param ideal             true for γ = 1 (comparison), false for UNIFAC / Flory–Huggins
  * @param pathStep          spacing of the reported path points in evaporated fraction (default 0.05)
  * @param checkMiscibility  test every reported point for a liquid–liquid split (costs a few ms per point)
+ * @param waterData         published mutual solubilities with water, which decide a solvent–water pair before the model
+ *                          does ({@link org.cohesa.core.activity.WaterMiscibility}); {@link WaterSolubilityTable#NONE} for the model alone
  */
 public record DryingRequest(Blend blend, SolubilitySphere target, double kelvin, double until, boolean ideal, double pathStep,
-                            boolean checkMiscibility) {
+                            boolean checkMiscibility, WaterSolubilityTable waterData) {
 
     public static final double DEFAULT_UNTIL = 0.95;
     public static final double DEFAULT_STEP = 0.05;
@@ -36,11 +39,20 @@ public record DryingRequest(Blend blend, SolubilitySphere target, double kelvin,
         if (!(pathStep > 0 && pathStep <= 0.5)) {
             throw new InvalidInputException("step", fmt(pathStep), "must lie between 0 and 0.5");
         }
+        if (waterData == null) {
+            waterData = WaterSolubilityTable.NONE;
+        }
+    }
+
+    /** Without published water data: liquid–liquid splits by the activity model alone. */
+    public DryingRequest(Blend blend, SolubilitySphere target, double kelvin, double until, boolean ideal, double pathStep,
+                         boolean checkMiscibility) {
+        this(blend, target, kelvin, until, ideal, pathStep, checkMiscibility, WaterSolubilityTable.NONE);
     }
 
     /** Defaults: 25 °C, to 95 % evaporated, activity-corrected, points every 5 %, no miscibility checks. */
     public static DryingRequest of(Blend blend, SolubilitySphere target) {
-        return new DryingRequest(blend, target, DEFAULT_KELVIN, DEFAULT_UNTIL, false, DEFAULT_STEP, false);
+        return new DryingRequest(blend, target, DEFAULT_KELVIN, DEFAULT_UNTIL, false, DEFAULT_STEP, false, WaterSolubilityTable.NONE);
     }
 
     private static String fmt(double v) {

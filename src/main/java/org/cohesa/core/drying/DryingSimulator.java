@@ -13,7 +13,8 @@ import org.apache.commons.math3.ode.sampling.StepHandler;
 import org.apache.commons.math3.ode.sampling.StepInterpolator;
 import org.cohesa.core.activity.ActivityModel;
 import org.cohesa.core.activity.ActivityModels;
-import org.cohesa.core.activity.Miscibility;
+import org.cohesa.core.activity.WaterJudgement;
+import org.cohesa.core.activity.WaterMiscibility;
 import org.cohesa.core.hsp.HansenParameters;
 import org.cohesa.core.hsp.SolubilitySphere;
 import org.cohesa.core.solvent.Blend;
@@ -29,15 +30,26 @@ import org.cohesa.core.solvent.Solvent;
  * Math.</i> 6 (1980) 19; Hairer, Nørsett, Wanner, <i>Solving Ordinary Differential Equations I</i>, 2nd ed.,
  * Springer 1993) with event functions that stop at the target evaporated fraction and whenever a component
  * runs out (its remaining volume falls below {@value #EXHAUSTED} of the initial volume; the trace left is
- * booked as evaporated and the integration restarts without it). The state also carries each component's
+ * booked as evaporated and the integration restarts without it). The summary reports a component as practically
+ * gone where less than {@value #PRACTICALLY_GONE} of its own initial volume is left, found on the same dense output
+ * the path's points are read from, so the two agree. Liquid–liquid splits along the path are judged by
+ * {@link WaterMiscibility} (published mutual solubilities with water first, the UNIFAC LLE model elsewhere). The state also carries each component's
  * evaporated volume, so the mass balance remaining + evaporated = initial is checked at the end; an
  * explicit Runge–Kutta method keeps such linear invariants to round-off. The blend's parameters along the
  * path follow the volume-fraction mixing rule (Hansen 2007, ch. 1), RED = Ra/R0.
  */
 public final class DryingSimulator {
 
-    /** Remaining volume (fraction of the initial volume) below which a component counts as gone. */
+    /**
+     * Remaining volume (fraction of the blend's initial volume) below which the integration drops a component: a
+     * numerical cut-off for the exponential tail (x → 0 makes the rate → 0), far below anything reported.
+     */
     public static final double EXHAUSTED = 1e-8;
+    /**
+     * A component counts as practically gone, for the summary, once less than this fraction of its own initial volume
+     * is left (0.1 %; our own reporting threshold, no source): the path's table shows it as 0.000 from about there on.
+     */
+    public static final double PRACTICALLY_GONE = 1e-3;
     private static final double ABS_TOL = 1e-12;
     private static final double REL_TOL = 1e-10;
     private static final double TAU_MAX = 1e9;
@@ -76,7 +88,6 @@ public final class DryingSimulator {
         }
         List<Segment> segments = new ArrayList<>();
         List<Double> stepTimes = new ArrayList<>();
-        List<DryingPath.Exhaustion> exhausted = new ArrayList<>();
         List<String> notes = new ArrayList<>(rates.notes());
         double tau = 0;
         double until = request.until();
@@ -107,7 +118,6 @@ public final class DryingSimulator {
                         y[k + i] += y[i];
                         y[i] = 0;
                         active[i] = false;
-                        exhausted.add(new DryingPath.Exhaustion(solvents.get(i).name(), evaporated(y, k), tau));
                     }
                 }
                 continue;
@@ -148,18 +158,52 @@ public final class DryingSimulator {
             }
         }
         Double splitsAt = null;
+        WaterJudgement phases = null;
         if (request.checkMiscibility() && k > 1) {
             for (PathPoint p : points) {
                 double[] phi = p.composition().values().stream().mapToDouble(Double::doubleValue).toArray();
-                if (Miscibility.check(solvents, phi, kelvin).splits()) {
+                WaterJudgement j = WaterMiscibility.judge(solvents, phi, kelvin, request.waterData());
+                if (phases == null || j.splits()) {
+                    phases = j;
+                }
+                if (j.splits()) {
                     splitsAt = p.evaporated();
                     break;
                 }
             }
         }
+        List<DryingPath.Exhaustion> gone = practicallyGone(traj, solvents, initial, tau);
         PathPoint last = points.get(points.size() - 1);
         String lastSolvent = last.composition().entrySet().stream().max(Map.Entry.comparingByValue()).orElseThrow().getKey();
-        return new DryingPath(points, leaves, lastSolvent, model.name(), model.note(), exhausted, splitsAt, notes, balance);
+        return new DryingPath(points, leaves, lastSolvent, model.name(), model.note(), gone, splitsAt, phases, notes, balance);
+    }
+
+    /**
+     * Each component's moment of falling below {@link #PRACTICALLY_GONE} of its initial volume (bisection on the dense
+     * output; a component's remaining volume only falls), in order; components still above it at the end are left out.
+     */
+    private static List<DryingPath.Exhaustion> practicallyGone(Trajectory traj, List<Solvent> solvents, double[] initial, double tauEnd) {
+        int k = solvents.size();
+        List<DryingPath.Exhaustion> out = new ArrayList<>();
+        for (int i = 0; i < k; i++) {
+            double threshold = PRACTICALLY_GONE * initial[i];
+            if (initial[i] <= 0 || traj.state(tauEnd)[i] > threshold) {
+                continue;
+            }
+            double lo = 0;
+            double hi = tauEnd;
+            for (int it = 0; it < 200 && hi - lo > 1e-13 * Math.max(1, hi); it++) {
+                double mid = 0.5 * (lo + hi);
+                if (traj.state(mid)[i] > threshold) {
+                    lo = mid;
+                } else {
+                    hi = mid;
+                }
+            }
+            out.add(new DryingPath.Exhaustion(solvents.get(i).name(), evaporated(traj.state(hi), k), hi));
+        }
+        out.sort((a, b) -> Double.compare(a.time(), b.time()));
+        return out;
     }
 
     /** Relative time of the first rise of RED through 1 (bisection between recorded steps), or null. */

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import org.cohesa.core.activity.Miscibility;
+import org.cohesa.core.activity.WaterMiscibility;
 import org.cohesa.core.hsp.SolubilitySphere;
 import org.cohesa.core.solvent.Blend;
 import org.cohesa.core.solvent.BlendComponent;
@@ -19,7 +20,8 @@ import org.cohesa.core.solvent.Solvent;
  * the sphere on their own (RED &lt; 1), slower than the slowest component of the blend, not carcinogenic,
  * mutagenic or toxic to reproduction (no H340, H350 or H360 statement: a tail solvent stays longest in the
  * room and on the workpiece, and these are the solvents regulation removes), and not splitting
- * from the blend into two liquids (UNIFAC LLE / Flory–Huggins, {@link Miscibility}). Each is tried at
+ * from the blend into two liquids (published mutual solubilities with water first, then UNIFAC LLE / Flory–Huggins,
+ * {@link WaterMiscibility}, {@link Miscibility}). Each is tried at
  * {@link #FRACTIONS} of the new blend by simulating the whole path; the smallest amount that keeps RED &lt; 1 up
  * to the requested evaporated fraction wins, ties broken by the lower maximum RED.
  */
@@ -80,11 +82,11 @@ public final class TailSolventAdvisor {
                 Blend with = withTail(blend, s, f);
                 List<Solvent> solvents = with.solvents();
                 try {
-                    if (Miscibility.check(solvents, with.fractions(), kelvin).splits()) {
+                    if (WaterMiscibility.judge(solvents, with.fractions(), kelvin, request.waterData()).splits()) {
                         break;
                     }
                     DryingPath path = DryingSimulator.simulate(new DryingRequest(with, target, kelvin, request.until(),
-                            request.ideal(), request.pathStep(), false));
+                            request.ideal(), request.pathStep(), false, request.waterData()));
                     if (path.leavesSphereAt() == null) {
                         double maxRed = path.points().stream().mapToDouble(PathPoint::red).max().orElse(0);
                         out.add(new TailSuggestion(s.name(), f, poolRates.get(idx), maxRed, path.lastSolvent()));
