@@ -45,13 +45,59 @@ class FitCommandTest {
         for (Iterator<String> it = j.fieldNames(); it.hasNext(); ) {
             fields.add(it.next());
         }
-        assertEquals(List.of("dD", "dP", "dH", "r0", "good_inside", "good_total", "bad_outside", "bad_total", "misfits",
-                "confidence", "next_tests"), fields);
+        assertEquals(List.of("method", "dD", "dP", "dH", "r0", "good_inside", "good_total", "bad_outside", "bad_total", "misfits",
+                "likely_misfits", "results", "confidence", "region", "next_tests", "notes"), fields);
+        assertEquals("likelihood", j.get("method").asText());
         // the demo file holds one invented slip (chloroform scored 0 although the other results put it inside)
         assertEquals("chloroform", j.get("misfits").get(0).get("name").asText());
         assertTrue(j.get("misfits").get(0).get("red").asDouble() < 1);
         assertEquals(2, j.get("confidence").get("dD").size());
         assertTrue(j.get("next_tests").size() > 0);
+    }
+
+    @Test
+    void likelihoodFitGivesEveryResultItsProbabilityAndTheRegionItsSize() throws Exception {
+        Run r = run("fit", demo().toString(), "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        JsonNode results = j.get("results");
+        assertEquals(32, results.size());
+        // least likely first; chloroform, the invented slip at RED about 0.8, is the least likely result
+        assertEquals("chloroform", results.get(0).get("name").asText());
+        for (int i = 1; i < results.size(); i++) {
+            assertTrue(results.get(i).get("probability").asDouble() >= results.get(i - 1).get("probability").asDouble());
+        }
+        JsonNode region = j.get("region");
+        assertTrue(region.get("centre_radius").asDouble() > 0);
+        assertEquals(9.488, region.get("deviance_limit").asDouble(), 1e-3, "χ²₄ 95 % quantile (statistical tables)");
+        assertTrue(region.get("samples").size() > 10);
+        assertTrue(region.get("bounded").isBoolean());
+        assertTrue(j.get("next_tests").get(0).get("expected_shrinkage").asDouble() > 0);
+    }
+
+    @Test
+    void classicMethodIsTheBaselineWithABootstrapBox() throws Exception {
+        Run r = run("fit", demo().toString(), "--json", "--method", "classic", "--resamples", "20");
+        assertEquals(0, r.code(), r.err());
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        assertEquals("classic", j.get("method").asText());
+        assertTrue(j.get("region") == null && j.get("results") == null);
+        assertEquals(20, j.get("confidence").get("resamples").asInt());
+        assertEquals(2, run("fit", demo().toString(), "--method", "best").code());
+    }
+
+    @Test
+    void priorFromARelatedMaterialIsNamedInTheOutput() throws Exception {
+        Run r = run("fit", demo().toString(), "--json", "--prior", "PMMA", "--prior-spread", "2");
+        assertEquals(0, r.code(), r.err());
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        assertTrue(j.get("prior").get("source").asText().contains("poly(methyl methacrylate)"), j.get("prior").toString());
+        assertTrue(j.get("region").get("with_prior").asBoolean());
+        Run text = run("fit", demo().toString(), "--prior", "PMMA");
+        assertTrue(text.out().contains("note: prior: the centre was pulled towards 18.6/10.5/7.5"), text.out());
+        Run wrong = run("fit", demo().toString(), "--prior", "PMMA", "--method", "classic");
+        assertEquals(2, wrong.code());
+        assertTrue(wrong.err().startsWith("error: --prior 'PMMA'"), wrong.err());
     }
 
     @Test

@@ -8,17 +8,18 @@ import org.cohesa.cli.TextTable;
 
 import java.io.IOException;
 import java.nio.file.Path;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import org.cohesa.core.InvalidInputException;
 
 import org.cohesa.core.solvent.SolventLibrary;
+import org.cohesa.core.target.CentrePrior;
 import org.cohesa.core.target.ConfidenceRegion;
+import org.cohesa.core.target.FitMethod;
+import org.cohesa.core.target.LikelihoodRegion;
+import org.cohesa.core.target.ResultProbability;
 import org.cohesa.core.target.FitOptions;
 import org.cohesa.core.target.FitResult;
-import org.cohesa.core.target.Interval;
 import org.cohesa.core.target.Material;
 import org.cohesa.core.target.MaterialKind;
 import org.cohesa.core.target.Misfit;
@@ -55,8 +56,20 @@ public final class FitCommand extends CohesaSubcommand {
     @Option(names = "--seed", paramLabel = "N", description = "Seed of the random starts and resamples (same seed, same result; default ${DEFAULT-VALUE}).")
     long seed = FitOptions.DEFAULT_SEED;
 
-    @Option(names = "--resamples", paramLabel = "N", description = "Bootstrap resamples for the confidence region (default ${DEFAULT-VALUE}; 0 switches it off).")
+    @Option(names = "--resamples", paramLabel = "N", description = "Bootstrap resamples for the box of the classic and consensus fits (default ${DEFAULT-VALUE}; 0 switches it off; the likelihood region needs none).")
     int resamples = 200;
+
+    @Option(names = "--method", paramLabel = "METHOD", description = "How to fit: likelihood (default: results may be wrong, more so near "
+            + "the surface; gives each result's probability and a likelihood region), classic (the published desirability fit, "
+            + "with a bootstrap box) or consensus (the earlier weighted-mean fit).")
+    String method = FitMethod.LIKELIHOOD.key();
+
+    @Option(names = "--prior", paramLabel = "MATERIAL", description = "Likelihood fit only: pull the centre towards the published sphere of a "
+            + "related library material (a Gaussian prior in Ra; the output says so).")
+    String prior;
+
+    @Option(names = "--prior-spread", paramLabel = "MPA", description = "Spread of the --prior centre, MPa^½ in Ra (default ${DEFAULT-VALUE}).")
+    double priorSpread = CentrePrior.DEFAULT_SPREAD;
 
     @Option(names = "--png", paramLabel = "FILE", description = "Also draw the fitted sphere and the tested liquids as a PNG (three projections).")
     Path png;
@@ -81,13 +94,30 @@ public final class FitCommand extends CohesaSubcommand {
         if (resamples < 0 || resamples > 10_000) {
             throw new InvalidInputException("--resamples", String.valueOf(resamples), "must lie between 0 and 10000");
         }
+        FitMethod fitMethod;
+        try {
+            fitMethod = FitMethod.parse(method);
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException("--method", method, "must be one of " + FitMethod.allowed());
+        }
+        CentrePrior centrePrior = null;
+        if (prior != null) {
+            if (fitMethod != FitMethod.LIKELIHOOD) {
+                throw new InvalidInputException("--prior", prior, "a prior works with --method likelihood only");
+            }
+            if (!(priorSpread >= 0.5 && priorSpread <= 20)) {
+                throw new InvalidInputException("--prior-spread", String.valueOf(priorSpread), "must lie between 0.5 and 20 MPa^½");
+            }
+            Material related = ctx().materials().library().resolve("--prior", prior);
+            centrePrior = new CentrePrior(related.sphere().centre(), priorSpread, "published sphere of " + related.name() + " (" + related.source() + ")");
+        }
         SolventLibrary library = ctx().library();
         List<TestResult> results = read(library);
         List<NamedPoint> candidates = library.searchable().stream().map(s -> new NamedPoint(s.name(), s.hansen())).toList();
-        FitResult fit = SphereFitter.fit(results, candidates, new FitOptions(seed, resamples, 12, 5));
+        FitResult fit = SphereFitter.fit(results, candidates, new FitOptions(seed, resamples, 12, 5).withMethod(fitMethod).withPrior(centrePrior));
         if (save) {
             ctx().materials().add(new Material(name, List.of(), materialKind, fit.sphere(),
-                    "fit of " + file.getFileName() + " (cohesa fit, seed " + seed + ")",
+                    "fit of " + file.getFileName() + " (cohesa fit, " + fit.method().key() + ", seed " + seed + ")",
                     String.format(Locale.ROOT, "fitted from %d test results: %d/%d dissolving inside, %d/%d non-dissolving outside",
                             fit.results(), fit.quality().goodInside(), fit.quality().goodTotal(), fit.quality().badOutside(),
                             fit.quality().badTotal()), true));
@@ -97,7 +127,7 @@ public final class FitCommand extends CohesaSubcommand {
             OutputFile.write("--png", png, overwrite, o -> SpherePlot.png(fit.sphere(), results, title, o));
         }
         if (json()) {
-            Output.json(out(), json(fit));
+            Output.json(out(), FitReport.of(fit, seed));
             return;
         }
         print(fit, results.size());
@@ -110,64 +140,28 @@ public final class FitCommand extends CohesaSubcommand {
         return InputFile.read("FILE", file, r -> TestSeriesCsv.read(file.toString(), r, library));
     }
 
-    private Map<String, Object> json(FitResult fit) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("dD", Output.round(fit.sphere().centre().dD(), 2));
-        m.put("dP", Output.round(fit.sphere().centre().dP(), 2));
-        m.put("dH", Output.round(fit.sphere().centre().dH(), 2));
-        m.put("r0", Output.round(fit.sphere().r0(), 2));
-        m.put("good_inside", fit.quality().goodInside());
-        m.put("good_total", fit.quality().goodTotal());
-        m.put("bad_outside", fit.quality().badOutside());
-        m.put("bad_total", fit.quality().badTotal());
-        m.put("misfits", fit.quality().misfits().stream().map(x -> {
-            Map<String, Object> j = new LinkedHashMap<>();
-            j.put("name", x.name());
-            j.put("score", x.score());
-            j.put("red", Output.round(x.red(), 3));
-            return j;
-        }).toList());
-        ConfidenceRegion c = fit.confidence();
-        Map<String, Object> conf = new LinkedHashMap<>();
-        conf.put("level", c.level());
-        conf.put("resamples", c.resamples());
-        conf.put("seed", seed);
-        conf.put("dD", interval(c.dD()));
-        conf.put("dP", interval(c.dP()));
-        conf.put("dH", interval(c.dH()));
-        conf.put("r0", interval(c.r0()));
-        conf.put("bounded", c.bounded());
-        conf.put("warnings", c.warnings());
-        m.put("confidence", conf);
-        m.put("next_tests", fit.nextTests().stream().map(t -> {
-            Map<String, Object> j = new LinkedHashMap<>();
-            j.put("name", t.name());
-            j.put("red", Output.round(t.red(), 3));
-            j.put("inside_share", Output.round(t.insideShare(), 3));
-            j.put("reason", t.reason());
-            return j;
-        }).toList());
-        return m;
-    }
-
-    private static List<Double> interval(Interval i) {
-        return List.of(Output.round(i.low(), 2), Output.round(i.high(), 2));
-    }
-
     private void print(FitResult fit, int n) {
         ConfidenceRegion c = fit.confidence();
-        out().println("Sphere fitted to " + n + " test results in " + file.getFileName() + " (seed " + seed + ")");
+        LikelihoodRegion region = fit.region();
+        out().println("Sphere fitted to " + n + " test results in " + file.getFileName() + " (" + fit.method().key() + " fit, seed " + seed + ")");
         int pct = (int) Math.round(100 * c.level());
-        TextTable t = new TextTable("", "fitted", pct + " % low", pct + " % high");
+        String span = region != null ? " region" : " box";
+        TextTable t = new TextTable("", "fitted", pct + " %" + span + " low", pct + " %" + span + " high");
         t.row("dD MPa^½", Output.fmt(fit.sphere().centre().dD(), 2), Output.fmt(c.dD().low(), 2), Output.fmt(c.dD().high(), 2));
         t.row("dP MPa^½", Output.fmt(fit.sphere().centre().dP(), 2), Output.fmt(c.dP().low(), 2), Output.fmt(c.dP().high(), 2));
         t.row("dH MPa^½", Output.fmt(fit.sphere().centre().dH(), 2), Output.fmt(c.dH().low(), 2), Output.fmt(c.dH().high(), 2));
         t.row("R0 MPa^½", Output.fmt(fit.sphere().r0(), 2), Output.fmt(c.r0().low(), 2), Output.fmt(c.r0().high(), 2));
         t.print(out());
         out().println();
+        if (region != null) {
+            out().printf(Locale.ROOT, "%d %% likelihood region: centres up to Ra %.1f MPa^½ from the fitted one, R0 %.1f–%.1f; %s%n", pct,
+                    region.centreRadius(), region.r0().low(), region.r0().high(), region.boundedNote());
+        }
         out().printf(Locale.ROOT, "dissolving liquids inside: %d of %d; non-dissolving liquids outside: %d of %d%n",
                 fit.quality().goodInside(), fit.quality().goodTotal(), fit.quality().badOutside(), fit.quality().badTotal());
-        if (fit.quality().misfits().isEmpty()) {
+        if (region != null) {
+            printProbabilities(fit);
+        } else if (fit.quality().misfits().isEmpty()) {
             out().println("misfits: none, every result lies on its side of the surface");
         } else {
             out().println("misfits (on the wrong side of the surface; check these results first):");
@@ -184,12 +178,27 @@ public final class FitCommand extends CohesaSubcommand {
         }
         if (!fit.nextTests().isEmpty()) {
             out().println();
-            out().println("most useful next tests (library liquids the plausible spheres disagree about):");
-            TextTable nt = new TextTable("liquid", "RED", "resampled fits holding it");
-            for (NextTest x : fit.nextTests()) {
-                nt.row(x.name(), Output.fmt(x.red(), 2), Output.fmt(100 * x.insideShare(), 0) + "%");
+            if (region != null) {
+                out().println("most useful next tests (by expected information: how much their results would shrink the region; test them as a batch):");
+                TextTable nt = new TextTable("liquid", "RED", "plausible spheres holding it", "region shrinks by");
+                for (NextTest x : fit.nextTests()) {
+                    nt.row(x.name(), Output.fmt(x.red(), 2), Output.fmt(100 * x.insideShare(), 0) + "%",
+                            Output.fmt(100 * x.expectedShrinkage(), 0) + "%");
+                }
+                nt.print(out());
+                out().println("(shrinkage of the region's spread expected once this and the tests above it are scored)");
+            } else {
+                out().println("most useful next tests (library liquids the plausible spheres disagree about):");
+                TextTable nt = new TextTable("liquid", "RED", "resampled fits holding it");
+                for (NextTest x : fit.nextTests()) {
+                    nt.row(x.name(), Output.fmt(x.red(), 2), Output.fmt(100 * x.insideShare(), 0) + "%");
+                }
+                nt.print(out());
             }
-            nt.print(out());
+        }
+        if (!fit.notes().isEmpty()) {
+            out().println();
+            fit.notes().forEach(x -> out().println("note: " + x));
         }
         if (save) {
             out().println();
@@ -198,4 +207,26 @@ public final class FitCommand extends CohesaSubcommand {
         out().println("Screening estimate: confirm the sphere with your own dissolving tests before relying on it.");
     }
 
+    private void printProbabilities(FitResult fit) {
+        List<ResultProbability> likely = fit.likelyMisfits();
+        if (likely.isEmpty()) {
+            out().printf(Locale.ROOT, "likely misfits: none (no result has a probability below %.2f under the fit)%n", ResultProbability.MISFIT_PROBABILITY);
+        } else {
+            out().printf(Locale.ROOT, "likely misfits (probability below %.2f under the fit; check these results first):%n", ResultProbability.MISFIT_PROBABILITY);
+            TextTable m = new TextTable("liquid", "score", "RED", "P(dissolves)", "P(this result)");
+            for (ResultProbability r : likely) {
+                m.row(r.name(), Output.fmt(r.score(), 2), Output.fmt(r.red(), 2), Output.fmt(r.pDissolves(), 2), Output.fmt(r.probability(), 3));
+            }
+            m.print(out());
+        }
+        List<ResultProbability> doubtful = fit.probabilities().stream().filter(r -> !r.likelyMisfit() && r.probability() < 0.5).toList();
+        if (!doubtful.isEmpty()) {
+            out().println("near the surface, on the unexpected side (cannot be told from noise):");
+            TextTable m = new TextTable("liquid", "score", "RED", "P(dissolves)", "P(this result)");
+            for (ResultProbability r : doubtful) {
+                m.row(r.name(), Output.fmt(r.score(), 2), Output.fmt(r.red(), 2), Output.fmt(r.pDissolves(), 2), Output.fmt(r.probability(), 3));
+            }
+            m.print(out());
+        }
+    }
 }

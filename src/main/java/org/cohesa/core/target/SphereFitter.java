@@ -37,6 +37,61 @@ public final class SphereFitter {
      * @param options    seed, bootstrap size, starts
      */
     public static FitResult fit(List<TestResult> results, List<NamedPoint> candidates, FitOptions options) {
+        return switch (options.method()) {
+            case LIKELIHOOD -> LikelihoodFitter.fit(results, candidates, options);
+            case CLASSIC -> classic(results, candidates, options);
+            case CONSENSUS -> consensus(results, candidates, options);
+        };
+    }
+
+    /**
+     * The published desirability fit ({@link DesirabilityFitter}) with a bootstrap percentile box of its refits
+     * (Bonferroni-corrected as in {@link Uncertainty}) and next tests by how evenly the refits split on a liquid.
+     */
+    static FitResult classic(List<TestResult> results, List<NamedPoint> candidates, FitOptions options) {
+        requireUsable(results);
+        Data data = Data.of(results);
+        int starts = Math.max(1, options.starts() / 2);
+        SolubilitySphere sphere = DesirabilityFitter.fit(results, options.seed(), starts);
+        double[] best = {sphere.centre().dD(), sphere.centre().dP(), sphere.centre().dH(), sphere.r0()};
+        SplittableRandom rng = new SplittableRandom(options.seed() ^ 0x5DEECE66DL);
+        List<double[]> boots = new ArrayList<>();
+        int m = results.size();
+        for (int b = 0; b < options.resamples(); b++) {
+            List<TestResult> re = new ArrayList<>(m);
+            for (int k = 0; k < m; k++) {
+                re.add(results.get(rng.nextInt(m)));
+            }
+            if (re.stream().noneMatch(TestResult::good) || re.size() < 3) {
+                continue;
+            }
+            SolubilitySphere s = DesirabilityFitter.fit(re, rng.nextLong(), starts);
+            boots.add(new double[] {s.centre().dD(), s.centre().dP(), s.centre().dH(), s.r0()});
+        }
+        Interval[] iv = new Interval[4];
+        for (int k = 0; k < 4; k++) {
+            double lo = best[k];
+            double hi = best[k];
+            if (!boots.isEmpty()) {
+                double[] v = new double[boots.size()];
+                for (int b = 0; b < v.length; b++) {
+                    v[b] = boots.get(b)[k];
+                }
+                Arrays.sort(v);
+                lo = Math.min(lo, Uncertainty.percentile(v, Uncertainty.tail(k, LEVEL)));
+                hi = Math.max(hi, Uncertainty.percentile(v, 1 - Uncertainty.tail(k, LEVEL)));
+            }
+            iv[k] = new Interval(lo, hi);
+        }
+        List<NamedPoint> untested = untested(results, candidates);
+        ConfidenceRegion confidence = new ConfidenceRegion(LEVEL, boots.size(), iv[0], iv[1], iv[2], iv[3],
+                BoundsCheck.warnings(data, best, iv, results, untested));
+        List<NextTest> next = NextTestAdvisor.suggest(sphere, boots, untested, confidence, options.nextTests());
+        return new FitResult(sphere, quality(results, sphere), confidence, next, results.size(), FitMethod.CLASSIC);
+    }
+
+    /** The consensus fit of issue 3 (see the class comment). */
+    static FitResult consensus(List<TestResult> results, List<NamedPoint> candidates, FitOptions options) {
         requireUsable(results);
         Data data = Data.of(results);
         SplittableRandom rng = new SplittableRandom(options.seed());
@@ -52,7 +107,7 @@ public final class SphereFitter {
         List<NamedPoint> untested = untested(results, candidates);
         ConfidenceRegion confidence = Uncertainty.region(data, best, boots, posterior, results, untested, LEVEL);
         List<NextTest> next = NextTestAdvisor.suggest(sphere, boots, untested, confidence, options.nextTests());
-        return new FitResult(sphere, quality, confidence, next, results.size());
+        return new FitResult(sphere, quality, confidence, next, results.size(), FitMethod.CONSENSUS);
     }
 
     /**
@@ -185,7 +240,7 @@ public final class SphereFitter {
         return out;
     }
 
-    private static List<NamedPoint> untested(List<TestResult> results, List<NamedPoint> candidates) {
+    static List<NamedPoint> untested(List<TestResult> results, List<NamedPoint> candidates) {
         List<NamedPoint> out = new ArrayList<>();
         for (NamedPoint c : candidates) {
             boolean tested = results.stream().anyMatch(r -> r.label().equalsIgnoreCase(c.name())

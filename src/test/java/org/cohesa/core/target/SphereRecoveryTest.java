@@ -17,7 +17,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
- * Recovery of known spheres over the real bundled solvent library (issue 3): random spheres, every searchable
+ * Recovery of known spheres by the consensus fit ({@link FitMethod#CONSENSUS}) over the real bundled solvent library (issue 3): random spheres, every searchable
  * library solvent scored 1 inside and 0 outside, fitted, compared with the truth. The truth is outside the
  * method (drawn independently), the library values are published ones (solvent-db/SOURCES.md).
  *
@@ -52,7 +52,7 @@ class SphereRecoveryTest {
                 results.add(TestResult.of(s.name(), s.hansen(), truth.contains(s.hansen()) ? 1 : 0));
             }
             int n = TRIALS_RUN.size();
-            FitResult fit = SphereFitter.fit(results, List.of(), FitOptions.defaults(n));
+            FitResult fit = SphereFitter.fit(results, List.of(), FitOptions.defaults(n).withMethod(FitMethod.CONSENSUS));
             // two flipped results, drawn among liquids clearly on one side (RED < 0.8, or 1.25 < RED < 2): a flip
             // right at the surface is indistinguishable from a slightly different sphere, and one far outside
             // (RED > 2) is too far away to bear on the fit at all
@@ -71,7 +71,7 @@ class SphereRecoveryTest {
                 flippedResults.set(clear.get(k), TestResult.of(r.label(), r.liquid(), 1 - r.score()));
                 flipped.add(r.label());
             }
-            FitResult flippedFit = SphereFitter.fit(flippedResults, List.of(), FitOptions.defaults(n).withResamples(0));
+            FitResult flippedFit = SphereFitter.fit(flippedResults, List.of(), FitOptions.defaults(n).withResamples(0).withMethod(FitMethod.CONSENSUS));
             SolubilitySphere baseline = DesirabilityFitter.fit(results, n, 6);
             TRIALS_RUN.add(new Trial(truth, results, fit, flippedFit, flipped, baseline));
         }
@@ -151,7 +151,7 @@ class SphereRecoveryTest {
     @Test
     void sameSeedSameFit() {
         Trial t = TRIALS_RUN.get(0);
-        FitResult again = SphereFitter.fit(t.results(), List.of(), FitOptions.defaults(0));
+        FitResult again = SphereFitter.fit(t.results(), List.of(), FitOptions.defaults(0).withMethod(FitMethod.CONSENSUS));
         assertEquals(t.fit().sphere(), again.sphere());
         assertEquals(t.fit().confidence(), again.confidence());
     }
