@@ -58,7 +58,14 @@ HSP_CHOICE = {
     "141-43-5": "alshehri",   # monoethanolamine
 }
 # Flash point taken from the DIPPR (Serat) whole-degree value instead of IEC/NFPA.
-FLASH_FROM_SERAT = {"103-09-3"}  # 2-ethylhexyl acetate: IEC 44 °C vs NFPA 88 °C
+FLASH_FROM_SERAT = {
+    "103-09-3",  # 2-ethylhexyl acetate: IEC 44 °C vs NFPA 88 °C
+    "108-82-7",  # diisobutyl carbinol: IEC 75 °C vs DIPPR 66 °C (round value), no third table: the lower one
+    "78-59-1",   # isophorone: NFPA 84 °C vs DIPPR 77.5 °C (round value), no third table: the lower one
+}
+# A chosen flash point further than this from the DIPPR/Serat value is checked against the other fire-data tables
+# and the outcome written in the note (issue 12).
+SERAT_CHECK_K = 5.0
 # Ontario mg/m3 limits converted to ppm (vapours only; aerosol/inhalable limits are not converted).
 OEL_CONVERT_MG = {"872-50-4", "108-01-0"}
 # ICH Q3C entries that cover an isomer group although listed under one CAS.
@@ -109,6 +116,44 @@ def check_memory_flash_point(cas, fp_c, tb_c, hazard_statements, note):
         problems.append("no flammability statement needs > 60 °C")
     if problems:
         raise SystemExit(f"{cas}: manual flash point {fp_c} °C: " + "; ".join(problems))
+
+
+def serat_check_note(cas, chosen_k, chosen_key, iec, nfpa, serat, notes):
+    """Notes how a flash point that lies more than SERAT_CHECK_K from the DIPPR/Serat value was resolved.
+
+    Resolved: another fire-data table (IEC 60079-20-1, NFPA 497) agrees with the chosen value within SERAT_CHECK_K.
+    Otherwise the note says which values disagree; Serat values with many decimals look computed and run low (reference
+    README caveat 2), so they alone do not overturn a measured table value.
+    """
+    if cas not in serat or not serat[cas][2].strip():
+        return
+    text = serat[cas][2].strip()
+    sv = float(text)
+    if abs(chosen_k - sv) <= SERAT_CHECK_K:
+        return
+    kind = "round value" if len(text.partition(".")[2]) <= 2 else "computed-looking value"
+    others = []
+    for table, key in ((iec, "IEC 60079-20-1"), (nfpa, "NFPA 497")):
+        if cas in table and num(table[cas][2]) is not None:
+            others.append((key, num(table[cas][2])))
+    chosen_name = {"iec-60079-20-1": "IEC 60079-20-1", "nfpa-497-2008": "NFPA 497"}.get(chosen_key, chosen_key)
+    agreeing = [k for k, v in others if k != chosen_name and abs(v - chosen_k) <= SERAT_CHECK_K]
+    head = f"flash point: DIPPR/Serat {sv - 273.15:.1f} °C ({kind}) is {chosen_k - sv:+.0f} K from the value used"
+    if chosen_key == "dippr-serat-2017":
+        return
+    if agreeing:
+        notes.append(f"{head}; resolved: {' and '.join([chosen_name] + agreeing)} agree")
+    elif others and any(k != chosen_name for k, _ in others):
+        listed = ", ".join(f"{k} {v - 273.15:.1f} °C" for k, v in others)
+        lowest = min(v for _, v in others) >= chosen_k - 1e-9
+        notes.append(f"{head}; the tables disagree ({listed}): "
+                     + ("the lowest (cautious) value is used" if lowest else "the value used is not the lowest, for the reason in this note")
+                     + "; check the SDS")
+    elif kind == "computed-looking value":
+        notes.append(f"{head}; no second fire-data table has the solvent; the Serat value looks computed (such values run "
+                     "low), so the value used stands" + (" (recalled from memory: check the SDS)" if chosen_key.startswith("memory-") else ""))
+    else:
+        notes.append(f"{head}; no second fire-data table has the solvent: unresolved, check the SDS")
 
 
 def read_tsv(path, header=True):
@@ -334,6 +379,16 @@ def main(argv):
             hsp, src = schrier[cas][1:4], "schrier-2020"
         elif cas in alshehri:
             hsp, src = alshehri[cas][1:4], "alshehri-2022"
+        component = (m.get("hsp_component") or "").strip()
+        if hsp is None and component:
+            # a technical mixture takes the published value of its named main component (SOURCES.md, representative)
+            if component not in alshehri:
+                raise SystemExit(f"{cas}: representative component {component} has no alshehri row")
+            hsp, src = alshehri[component][1:4], "alshehri-2022-representative"
+            if component not in manual:
+                raise SystemExit(f"{cas}: representative component {component} is not bundled")
+            notes.append(f"HSP of the representative main component {manual[component]['name']} ({component}), "
+                         "Alshehri et al. 2022: a screening value for the whole grade")
         if hsp is not None:
             vals = [round(float(x) / 1000.0, 1) for x in hsp]
             if m["dD"]:
@@ -387,6 +442,9 @@ def main(argv):
         else:
             fp = serat_round()
             fsrc = "dippr-serat-2017" if fp is not None else ""
+        if fp is not None or m.get("flash_point_c"):
+            chosen = fp if fp is not None else float(m["flash_point_c"]) + 273.15
+            serat_check_note(cas, chosen, fsrc if fp is not None else m["src_flash_point"], iec, nfpa, serat, notes)
         if fp is not None:
             if m.get("flash_point_c"):
                 raise SystemExit(f"{cas}: manual flash point given although {fsrc} has one")

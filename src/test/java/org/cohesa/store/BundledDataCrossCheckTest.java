@@ -52,6 +52,7 @@ class BundledDataCrossCheckTest {
     /** Source keys that name a reference table, and the table file each names. */
     private static final Map<String, String> TABLE_KEYS = Map.ofEntries(
             Map.entry("alshehri-2022", "alshehri-hansen-solubility-parameters.tsv"),
+            Map.entry("alshehri-2022-representative", "alshehri-hansen-solubility-parameters.tsv"),
             Map.entry("schrier-2020", "schrier-hansen-solubility-parameters.tsv"),
             Map.entry("crc-physical-constants", "physical-constants-of-organic-compounds.csv"),
             Map.entry("crc-hvap", "crc-handbook-heat-of-vaporization.tsv"),

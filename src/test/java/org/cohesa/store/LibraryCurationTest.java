@@ -145,6 +145,43 @@ class LibraryCurationTest {
     }
 
     @Test
+    void technicalMixturesAreRepresentativeEntriesWithTheirComponentsValues() {
+        // Issue 12: mixed and technical solvents as representative entries with a published typical value and a note
+        // on their range. A representative value (key alshehri-2022-representative) is the bundled Alshehri et al.
+        // (AIChE J. 68 (2022) e17469) value of the main component named in the note: aromatic 100 type ->
+        // 1,2,4-trimethylbenzene (18.0, 1.0, 1.0), aromatic 150 type -> 1,2-diethylbenzene (17.7, 0.1, 1.0).
+        assertHsp("64742-95-6", 18.0, 1.0, 1.0);
+        assertHsp("64742-94-5", 17.7, 0.1, 1.0);
+        Pattern component = Pattern.compile("representative main component [^(]+\\((\\d{2,7}-\\d{2}-\\d)\\)");
+        List<String> bad = new ArrayList<>();
+        int representative = 0;
+        for (Map<String, String> r : byCas.values()) {
+            if (!r.get("src_hsp").equals("alshehri-2022-representative")) {
+                continue;
+            }
+            representative++;
+            Matcher m = component.matcher(r.get("note"));
+            if (!m.find()) {
+                bad.add(r.get("name") + ": note names no representative component");
+                continue;
+            }
+            Map<String, String> c = byCas.get(m.group(1));
+            if (c == null || !c.get("src_hsp").equals("alshehri-2022")
+                    || !List.of(c.get("dD"), c.get("dP"), c.get("dH")).equals(List.of(r.get("dD"), r.get("dP"), r.get("dH")))) {
+                bad.add(r.get("name") + ": HSP differ from the bundled component " + m.group(1));
+            }
+            if (!r.get("note").contains("range") || !r.get("formula").isEmpty()) {
+                bad.add(r.get("name") + ": a representative entry has no formula and states the components' range");
+            }
+        }
+        assertTrue(representative >= 2, "only " + representative + " representative entries");
+        for (String cas : List.of("1330-20-7", "8052-41-3", "8006-64-2")) {  // mixed xylene, mineral spirits, turpentine
+            assertTrue(solvent(cas).get("note").contains("representative"), cas + " note must say it is a representative entry");
+        }
+        assertTrue(bad.isEmpty(), String.join("\n", bad));
+    }
+
+    @Test
     void familiesAreMultiValuedWhereSeveralApply() {
         // Common practice, no source: a chloroaromatic is both aromatic and chlorinated (the family list names every
         // family that applies, primary family first), an aromatic nitrile both nitrile and aromatic, etc.
@@ -209,6 +246,49 @@ class LibraryCurationTest {
             checked++;
         }
         assertTrue(checked >= 250, "only " + checked + " structures checked");
+        assertTrue(bad.isEmpty(), String.join("\n", bad));
+    }
+
+    @Test
+    void flashPointsFarFromTheDipprValueSayHowTheyWereResolved() throws IOException {
+        // Issue 12: flash points more than 5 K from the DIPPR/Serat value (Serat et al., Fluid Phase Equilib. 449 (2017)
+        // 52) are resolved against another published table (IEC 60079-20-1, NFPA 497) and the outcome is noted.
+        // n-amyl acetate: IEC 60079-20-1 and NFPA 497 both 25 °C, DIPPR 37 °C.
+        assertEquals(25.0, Double.parseDouble(solvent("628-63-7").get("flash_point_c")), 1e-9);
+        assertTrue(solvent("628-63-7").get("note").contains("resolved: IEC 60079-20-1 and NFPA 497 agree"));
+        // diisobutyl carbinol: IEC 75 °C vs DIPPR 66 °C (round value), no third table: the lower value is used.
+        assertEquals(66.0, Double.parseDouble(solvent("108-82-7").get("flash_point_c")), 0.06);
+        long noted = byCas.values().stream().filter(r -> r.get("note").contains("flash point: DIPPR/Serat")).count();
+        assertTrue(noted >= 40, "only " + noted + " flash points carry the DIPPR comparison");
+    }
+
+    @Test
+    void materialsAreCheckedOrMarkedLowConfidenceAndDrugsAreBundled() throws IOException {
+        // Issue 12: every material sphere checked against a citable publication or marked low confidence with the
+        // reason; at least 10 drug substances with published Hansen parameters (Alshehri et al. 2022), their default
+        // radius flagged. Paracetamol: (17.8, 10.5, 13.9), Alshehri et al. 2022 experimental set.
+        CSVFormat format = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get();
+        List<Map<String, String>> materials = new ArrayList<>();
+        try (Reader in = Files.newBufferedReader(Path.of("solvent-db", "materials.csv"), StandardCharsets.UTF_8);
+                CSVParser parser = CSVParser.builder().setReader(in).setFormat(format).get()) {
+            parser.forEach(rec -> materials.add(rec.toMap()));
+        }
+        List<String> bad = new ArrayList<>();
+        int drugs = 0;
+        for (Map<String, String> m : materials) {
+            if (m.get("source").startsWith("memory-") && !m.get("note").contains("low confidence: not checked against the publication")) {
+                bad.add(m.get("name") + ": memory sphere without the low-confidence reason");
+            }
+            if (m.get("kind").equals("drug")) {
+                drugs++;
+                if (!m.get("note").contains("default screening radius")) {
+                    bad.add(m.get("name") + ": drug radius not flagged as a default");
+                }
+            }
+        }
+        assertTrue(drugs >= 10, "only " + drugs + " drug substances");
+        Map<String, String> paracetamol = materials.stream().filter(m -> m.get("name").equals("paracetamol")).findFirst().orElseThrow();
+        assertEquals(List.of("17.8", "10.5", "13.9"), List.of(paracetamol.get("dD"), paracetamol.get("dP"), paracetamol.get("dH")));
         assertTrue(bad.isEmpty(), String.join("\n", bad));
     }
 
