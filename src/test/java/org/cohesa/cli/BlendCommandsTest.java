@@ -24,7 +24,7 @@ class BlendCommandsTest {
         // Common practice, no source: n-hexane and methanol are only partly miscible at room temperature.
         // The target sits between them so the blend is the best answer geometrically.
         CliTestSupport.Result r = run("blend", "--target", "15.4,10,10,6", "--include", "n-hexane,methanol", "--max-components", "2",
-                "--keep-two-phase", "--json");
+                "--keep-two-phase", "--rank-by", "red", "--json");
         assertEquals(0, r.exitCode(), r.err());
         JsonNode pair = null;
         for (JsonNode b : r.json().get("blends")) {
@@ -36,7 +36,7 @@ class BlendCommandsTest {
         assertTrue(pair.get("phase").get("splits").asBoolean());
         assertTrue(pair.get("warnings").get(0).asText().startsWith("TWO LIQUID PHASES"), pair.toString());
         // Without --keep-two-phase the pair is left out and counted.
-        CliTestSupport.Result dropped = run("blend", "--target", "15.4,10,10,6", "--include", "n-hexane,methanol", "--max-components", "2", "--json");
+        CliTestSupport.Result dropped = run("blend", "--target", "15.4,10,10,6", "--include", "n-hexane,methanol", "--max-components", "2", "--rank-by", "red", "--json");
         for (JsonNode b : dropped.json().get("blends")) {
             assertEquals(1, b.get("components").size(), "no two-phase pair offered: " + b);
         }
@@ -48,7 +48,7 @@ class BlendCommandsTest {
         // Common practice (from memory): collodion is nitrocellulose (pyroxylin) dissolved in diethyl ether with ethanol,
         // neither of which dissolves it alone. Sphere: the library's nitrocellulose entry (memory of Hansen 2007, Table A.2).
         CliTestSupport.Result r = run("blend", "--material", "nitrocellulose", "--include", "diethyl ether,ethanol",
-                "--max-components", "2", "--keep-two-phase", "--json");
+                "--max-components", "2", "--keep-two-phase", "--rank-by", "red", "--json");
         assertEquals(0, r.exitCode(), r.err());
         JsonNode blends = r.json().get("blends");
         JsonNode best = blends.get(0);
@@ -118,6 +118,61 @@ class BlendCommandsTest {
     }
 
     @Test
+    void defaultBlendSearchLeavesOutCmrAndClassOneAndSaysWhatAndWhy() {
+        CliTestSupport.Result r = run("blend", "--material", "PMMA", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode j = r.json();
+        String defaults = j.get("search").get("left_out_by_safety_defaults").toString();
+        assertTrue(defaults.contains("benzene") && defaults.contains("--allow-cmr") && defaults.contains("carbon tetrachloride"), defaults);
+        assertTrue(j.get("blends").size() > 0, r.out());
+        for (JsonNode b : j.get("blends")) {
+            assertTrue(b.get("red").asDouble() <= 0.8 + 1e-9, "only qualifying blends: " + b);
+            assertTrue(b.get("why").size() >= 3 && b.get("why").get(0).asText().startsWith("inside with margin"), b.toString());
+            for (JsonNode c : b.get("components")) {
+                String n = c.get("name").asText();
+                assertFalse(n.equals("benzene") || n.equals("N-methyl-2-pyrrolidone") || n.equals("carbon tetrachloride"), n);
+            }
+        }
+        CliTestSupport.Result allowed = run("blend", "--material", "PMMA", "--allow-cmr", "--allow-ich-class-1", "--json");
+        assertEquals(0, allowed.json().get("search").get("left_out_by_safety_defaults").size(), allowed.out());
+        assertTrue(allowed.json().get("search").get("searched").asInt() > j.get("search").get("searched").asInt());
+        CliTestSupport.Result table = run("blend", "--material", "PMMA", "--top", "3");
+        assertTrue(table.out().contains("left out by the safety defaults") && table.out().contains("#1 why: inside with margin"), table.out());
+    }
+
+    @Test
+    void replacingNmpNeverOffersAReprotoxicantAndKeepsTheOriginalInView() {
+        CliTestSupport.Result r = run("replace", "NMP", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode j = r.json();
+        assertEquals("N-methyl-2-pyrrolidone", j.get("original").get("name").asText());
+        assertTrue(j.get("original").get("replaced_for").toString().contains("reprotoxic"), j.get("original").toString());
+        assertTrue(j.get("candidates").size() > 0, r.out());
+        for (JsonNode c : j.get("candidates")) {
+            for (JsonNode h : c.get("hazard_statements")) {
+                assertFalse(h.asText().startsWith("H360"), "a candidate with the reason it is replaced for: " + c);
+            }
+        }
+        CliTestSupport.Result because = run("replace", "toluene", "--because", "flammable", "--top", "5", "--json");
+        assertEquals(0, because.exitCode(), because.err());
+        for (JsonNode c : because.json().get("candidates")) {
+            JsonNode fp = c.get("flash_point_c");
+            assertTrue(fp.isNull() || fp.asDouble() >= 23, "toluene is GHS Category 2: candidates are at least Category 3: " + c);
+        }
+        assertEquals(2, run("replace", "acetone", "--because", "reprotoxic").exitCode(), "acetone carries no reprotoxic statement");
+    }
+
+    @Test
+    void costWithoutPricesSaysSoInOneLine() {
+        CliTestSupport.Result r = run("blend", "--material", "PMMA", "--rank-by", "cost");
+        assertEquals(2, r.exitCode());
+        assertTrue(r.err().contains("cohesa solvents price NAME PRICE") && r.err().strip().lines().count() == 1, r.err());
+        CliTestSupport.Result p = run("blend", "--material", "PMMA", "--prefer", "cost", "--top", "3");
+        assertEquals(0, p.exitCode(), p.err());
+        assertTrue(p.out().contains("cost did not weigh") && p.out().contains("cohesa solvents price NAME PRICE"), p.out());
+    }
+
+    @Test
     void badInputGivesOneErrorLineAndExitTwo() {
         String[][] cases = {
                 {"blend", "--target", "18,9,8"},
@@ -130,6 +185,12 @@ class BlendCommandsTest {
                 {"blend", "--material", "no such material"},
                 {"replace", "toluene", "--radius", "-1"},
                 {"bench", "blend", "--components", "9"},
+                {"blend", "--target", "18,9,8,7", "--prefer", "speed"},
+                {"blend", "--target", "18,9,8,7", "--weights", "hazard=x"},
+                {"blend", "--target", "18,9,8,7", "--weights", "colour=1"},
+                {"blend", "--target", "18,9,8,7", "--exclude-reactive", "sugar"},
+                {"blend", "--target", "18,9,8,7", "--ich-unlisted", "maybe"},
+                {"replace", "toluene", "--because", "smell"},
         };
         for (String[] c : cases) {
             CliTestSupport.Result r = run(c);

@@ -43,8 +43,11 @@ public final class BenchBlendCommand extends CohesaSubcommand {
     @Option(names = "--warmup", paramLabel = "W", description = "Untimed warm-up runs (default ${DEFAULT-VALUE}).")
     String warmup = "3";
 
-    @Option(names = "--rank-by", paramLabel = "KEY", description = "Secondary key (default ${DEFAULT-VALUE}).")
-    String rankBy = "red";
+    @Option(names = "--rank-by", paramLabel = "KEY", description = "Ranking (default ${DEFAULT-VALUE}, the ranking blend uses by default).")
+    String rankBy = "desirability";
+
+    @Option(names = "--red-limit", paramLabel = "RED", description = "RED limit (default ${DEFAULT-VALUE}, as blend).")
+    String redLimit = "0.8";
 
     @Option(names = "--threads", paramLabel = "T", description = "Worker threads (default: all cores).")
     String threads;
@@ -68,9 +71,13 @@ public final class BenchBlendCommand extends CohesaSubcommand {
             throw new InvalidInputException("--seed", seed, "not a whole number");
         }
         RankBy rank = RankBy.parse("--rank-by", rankBy);
+        double limit = Args.number("--red-limit", redLimit);
+        if (!(limit > 0) || limit > 10) {
+            throw new InvalidInputException("--red-limit", redLimit, "must be above 0 and at most 10");
+        }
         List<Solvent> lib = SyntheticLibrary.generate(n, s);
         CandidatePool pool = CandidatePool.of(lib, BlendConstraints.NONE, SyntheticLibrary.BENCH_TARGET, rank);
-        BlendSearch.Settings settings = new BlendSearch.Settings(k, topN, rank, 1.0, true, t);
+        BlendSearch.Settings settings = new BlendSearch.Settings(k, topN, rank, limit, true, t);
         BlendSearch.Outcome last = null;
         for (int i = 0; i < w; i++) {
             last = BlendSearch.run(SyntheticLibrary.BENCH_TARGET, pool, BlendConstraints.NONE, settings, null, null);
@@ -105,7 +112,9 @@ public final class BenchBlendCommand extends CohesaSubcommand {
         m.put("threads", t);
         m.put("cores", cores);
         m.put("java", System.getProperty("java.version"));
-        m.put("best_red", Output.round(last.blends().get(0).red(), 6));
+        m.put("red_limit", limit);
+        m.put("best_red", last.blends().isEmpty() ? null : Output.round(last.blends().get(0).red(), 6));
+        m.put("best_components", last.blends().isEmpty() ? null : last.blends().get(0).size());
         m.put("data", "synthetic library, invented (seed " + s + "): δD 14–21, δP 0–20, δH 0–25 MPa^½ uniform; target 18,9,8 R0 8");
         if (json()) {
             Output.json(out(), m);

@@ -6,9 +6,7 @@ import org.cohesa.cli.Targets;
 import org.cohesa.cli.TextTable;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import org.cohesa.core.blend.BlendConstraints;
 import org.cohesa.core.blend.BlendDesigner;
 import org.cohesa.core.blend.BlendSuggestion;
@@ -59,39 +57,26 @@ public final class BlendCommand extends CohesaSubcommand {
         double kelvin = options.kelvin();
         SolventLibrary lib = ctx().library();
         BlendConstraints c = options.constraints(lib, null);
+        options.checkPricesExist(lib);
         if (c.fixed().size() >= k) {
             throw new org.cohesa.core.InvalidInputException("--max-components", String.valueOf(k),
                     "must exceed the number of fixed components (" + c.fixed().size() + ")");
         }
-        BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, k, top, rankBy, redLimit, options.keepTwoPhase, kelvin);
+        BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, k, top, rankBy, redLimit, options.keepTwoPhase, kelvin, options.weights());
         BlendDesigner.Result r = BlendDesigner.design(lib.all(), req, PhaseChecks.miscibility(),
                 BlendView.progress(spec.commandLine().getErr()), null);
         if (json()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            Map<String, Object> t = new LinkedHashMap<>();
-            t.put("dD", sphere.centre().dD());
-            t.put("dP", sphere.centre().dP());
-            t.put("dH", sphere.centre().dH());
-            t.put("r0", sphere.r0());
-            if (material != null) {
-                t.put("material", material.name());
-                t.put("source", material.source());
-            }
-            m.put("target", t);
-            m.put("rank_by", rankBy.word());
-            m.put("red_limit", redLimit);
-            m.put("search", BlendView.summaryJson(r));
-            List<Map<String, Object>> blends = new ArrayList<>();
-            r.suggestions().forEach(s -> blends.add(BlendView.json(s)));
-            m.put("blends", blends);
-            m.put("notice", BlendView.SCREENING);
-            Output.json(out(), m);
+            BlendReport.Target t = new BlendReport.Target(sphere.centre().dD(), sphere.centre().dP(), sphere.centre().dH(), sphere.r0(),
+                    material == null ? null : material.name(), material == null ? null : material.source(), null);
+            Output.json(out(), new BlendReport.Blends(t, rankBy.word(), redLimit, options.ranking(r), BlendReport.search(r),
+                    BlendView.appliedLimits(c), BlendReport.suggestions(r, null), BlendView.SCREENING));
             return;
         }
         out().println("target: δD " + Output.fmt(sphere.centre().dD(), 1) + ", δP " + Output.fmt(sphere.centre().dP(), 1) + ", δH "
                 + Output.fmt(sphere.centre().dH(), 1) + ", R0 " + Output.fmt(sphere.r0(), 1) + " MPa^½"
                 + (material == null ? "" : " (" + material.name() + ", source " + material.source() + ")"));
         out().println(BlendView.summary(r));
+        BlendView.header(out(), r, c, options);
         String secondary = BlendView.secondaryLabel(rankBy);
         List<String> header = new ArrayList<>(List.of("#", "blend (volume %)", "dD", "dP", "dH", "Ra", "RED"));
         if (secondary != null) {
@@ -111,10 +96,12 @@ public final class BlendCommand extends CohesaSubcommand {
             table.row(row.toArray());
         }
         if (r.suggestions().isEmpty()) {
-            out().println("no blend meets the constraints");
+            out().println(rankBy == RankBy.DESIRABILITY
+                    ? "no blend reaches RED ≤ " + Output.fmt(redLimit, 2) + " under these constraints (--rank-by red shows the closest ones, --red-limit widens the limit)"
+                    : "no blend meets the constraints");
         } else {
             table.print(out());
-            BlendView.notes(out(), r.suggestions());
+            BlendView.notes(out(), r.suggestions(), options.all);
         }
         out().println(BlendView.SCREENING);
     }

@@ -12,6 +12,8 @@ import java.util.Set;
 import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.blend.BlendConstraints;
 import org.cohesa.core.blend.BlendSearch;
+import org.cohesa.core.blend.Desirability;
+import org.cohesa.core.blend.ReactiveFlag;
 import org.cohesa.core.blend.RankBy;
 import org.cohesa.core.solvent.BlendComponent;
 import org.cohesa.core.solvent.Solvent;
@@ -57,17 +59,44 @@ public final class BlendOptions {
     @Option(names = "--max-ich-class", paramLabel = "N", description = "Worst ICH Q3C class accepted (class 1 is the worst concern): 2 leaves out class 1, 3 leaves out classes 1 and 2.")
     String maxIchClass;
 
-    @Option(names = "--no-cmr", description = "Leave out carcinogens, mutagens and reproductive toxicants (H340, H350, H360).")
+    @Option(names = "--no-cmr", description = "Leave out carcinogens, mutagens and reproductive toxicants (H340, H350, H360); the default, kept for scripts.")
     boolean noCmr;
+
+    @Option(names = "--allow-cmr", description = "Let carcinogens, mutagens and reproductive toxicants (H340, H350, H360 and sub-categories) take part; left out by default.")
+    boolean allowCmr;
+
+    @Option(names = "--allow-ich-class-1", description = "Let ICH Q3C class 1 solvents (to be avoided: benzene, carbon tetrachloride…) take part; left out by default.")
+    boolean allowIchClass1;
+
+    @Option(names = "--ich-unlisted", paramLabel = "keep|leave-out", description = "With --max-ich-class: keep or leave out solvents ICH Q3C does not list (they need a justification under Q3C; default ${DEFAULT-VALUE}).")
+    String ichUnlisted = "leave-out";
+
+    @Option(names = "--exclude-reactive", paramLabel = "FLAGS", description = "Leave out reactive solvents: acid (carboxylic acids), amine (amines, pyridines), nitro (nitroalkanes), peroxide (peroxide formers), or all.")
+    List<String> excludeReactive = new ArrayList<>();
+
+    @Option(names = "--min-blend-flash-point", paramLabel = "C", description = "Least computed flash point of the blend itself, °C (Liaw et al. 2002); components may be lower.")
+    String minBlendFlashPoint;
+
+    @Option(names = "--blend-boiling-range", paramLabel = "C..C", description = "Window for the blend's computed initial boiling point (bubble point), °C; an end may be open.")
+    String blendBoilingRange;
+
+    @Option(names = "--prefer", paramLabel = "LEANING", description = "What weighs most in the ranking: safety, simplicity, cost or closeness (default: balanced; see docs/methods.md).")
+    String prefer;
+
+    @Option(names = "--weights", paramLabel = "NAME=W,...", description = "Expert: desirability weights hazard, components, cost, distance (e.g. hazard=2,components=1); unnamed ones keep the --prefer value.")
+    String weights;
+
+    @Option(names = "--all", description = "Show the near-duplicates folded under each suggestion (same solvents but one, fractions within 5 %).")
+    boolean all;
 
     @Option(names = "--max-cost", paramLabel = "X", description = "Largest blend price per litre (uses your entered prices; solvents without a price are left out).")
     String maxCost;
 
-    @Option(names = "--rank-by", paramLabel = "KEY", description = "Secondary key after RED: red, hazard, cost, components, evaporation (default ${DEFAULT-VALUE}).")
-    String rankBy = "red";
+    @Option(names = "--rank-by", paramLabel = "KEY", description = "desirability (the default: qualifying blends by one documented score), or red (closest to the centre first, the exact earlier behaviour), hazard, cost, components, evaporation.")
+    String rankBy = "desirability";
 
-    @Option(names = "--red-limit", paramLabel = "RED", description = "RED up to which a blend counts as good; the secondary key chooses among those (default ${DEFAULT-VALUE}).")
-    String redLimit = "0.9";
+    @Option(names = "--red-limit", paramLabel = "RED", description = "RED up to which a blend qualifies (desirability) or counts as good for the other keys (default ${DEFAULT-VALUE}: a margin of 0.2 from the sphere surface).")
+    String redLimit = "0.8";
 
     @Option(names = "--top", paramLabel = "N", description = "How many suggestions (default ${DEFAULT-VALUE}).")
     String top = "10";
@@ -114,8 +143,83 @@ public final class BlendOptions {
         return c + 273.15;
     }
 
-    /** Builds the constraints, resolving names against the library; {@code alsoExclude} is left out too (the replaced solvent). */
+    /** The desirability weights: the preference's, then the expert's overrides. */
+    Desirability.Weights weights() {
+        Desirability.Weights base = prefer == null ? Desirability.DEFAULT : Desirability.Preference.parse("--prefer", prefer).weights();
+        return weights == null ? base : Desirability.parseWeights("--weights", weights, base);
+    }
+
+    /** The ranking settings as printed under --json. */
+    BlendReport.Ranking ranking(org.cohesa.core.blend.BlendDesigner.Result r) {
+        return new BlendReport.Ranking(rankBy().word(), preferWord(), weights().describe(), redLimit(), BlendView.costNote(this, r));
+    }
+
+    /** Ranking or limiting by cost needs prices: with none in the library, say so in one line with the command that sets them. */
+    void checkPricesExist(SolventLibrary lib) {
+        boolean any = lib.all().stream().anyMatch(s -> s.pricePerLitre() != null);
+        if (any) {
+            return;
+        }
+        String why = "no solvent in the library has a price yet; set prices with 'cohesa solvents price NAME PRICE' (any currency)";
+        if (maxCost != null) {
+            throw new InvalidInputException("--max-cost", maxCost, why);
+        }
+        if (rankBy() == RankBy.COST) {
+            throw new InvalidInputException("--rank-by", rankBy, why);
+        }
+    }
+
+    /** The preference word shown in the output. */
+    String preferWord() {
+        return prefer == null ? Desirability.Preference.BALANCED.word() : Desirability.Preference.parse("--prefer", prefer).word();
+    }
+
+    /** True when the user asked for cost to weigh (ranking, preference, weight or limit). */
+    boolean costAsked() {
+        return maxCost != null || "cost".equalsIgnoreCase(rankBy == null ? "" : rankBy.strip()) || "cost".equalsIgnoreCase(prefer == null ? "" : prefer.strip())
+                || (weights != null && weights.toLowerCase(Locale.ROOT).contains("cost"));
+    }
+
+    /** Builds the constraints with the command line's safety-first defaults; {@code alsoExclude} is left out too (the replaced solvent). */
     BlendConstraints constraints(SolventLibrary lib, Solvent alsoExclude) {
+        BlendConstraints base = basicConstraints(lib, alsoExclude);
+        if (noCmr && allowCmr) {
+            throw new InvalidInputException("--allow-cmr", "--no-cmr", "--no-cmr and --allow-cmr contradict each other");
+        }
+        String unl = ichUnlisted.strip().toLowerCase(Locale.ROOT);
+        if (!unl.equals("keep") && !unl.equals("leave-out")) {
+            throw new InvalidInputException("--ich-unlisted", ichUnlisted, "write keep or leave-out");
+        }
+        Set<ReactiveFlag> reactive = new LinkedHashSet<>();
+        for (String r : excludeReactive) {
+            reactive.addAll(ReactiveFlag.parse("--exclude-reactive", r));
+        }
+        Double minBlendFlash = minBlendFlashPoint == null ? null : Args.number("--min-blend-flash-point", minBlendFlashPoint);
+        Double[] bb = range("--blend-boiling-range", blendBoilingRange);
+        BlendConstraints c = new BlendConstraints(base.include(), base.exclude(), base.families(), base.excludeFamilies(), base.fixed(),
+                base.minFraction(), base.maxFraction(), base.fractionRanges(), base.boilingMinC(), base.boilingMaxC(), base.minFlashPointC(),
+                base.maxIchClass(), !allowCmr, base.maxCost());
+        return c.with(new BlendConstraints.More(!allowIchClass1, unl.equals("keep"), List.of(), reactive, minBlendFlash, bb[0], bb[1]));
+    }
+
+    /** "60..120", "60..", "..120" → {min, max}; null text → {null, null}. */
+    static Double[] range(String field, String text) {
+        if (text == null) {
+            return new Double[] {null, null};
+        }
+        String[] parts = text.split("\\.\\.", -1);
+        if (parts.length != 2 || (parts[0].isBlank() && parts[1].isBlank())) {
+            throw new InvalidInputException(field, text, "write MIN..MAX in °C, e.g. 60..120 (an end may be open: 60..)");
+        }
+        Double lo = parts[0].isBlank() ? null : Args.number(field, parts[0].strip());
+        Double hi = parts[1].isBlank() ? null : Args.number(field, parts[1].strip());
+        if (lo != null && hi != null && lo > hi) {
+            throw new InvalidInputException(field, text, "the lower end is above the upper end");
+        }
+        return new Double[] {lo, hi};
+    }
+
+    private BlendConstraints basicConstraints(SolventLibrary lib, Solvent alsoExclude) {
         List<Solvent> inc = lib.resolveList("--include", include);
         List<Solvent> exc = new ArrayList<>(lib.resolveList("--exclude", exclude));
         if (alsoExclude != null && !exc.contains(alsoExclude)) {
@@ -206,11 +310,7 @@ public final class BlendOptions {
 
     private static Set<String> families(SolventLibrary lib, String field, List<String> values) {
         Set<String> known = new LinkedHashSet<>();
-        lib.all().forEach(s -> {
-            if (s.family() != null) {
-                known.add(s.family().toLowerCase(Locale.ROOT));
-            }
-        });
+        lib.all().forEach(s -> s.families().forEach(f -> known.add(f.toLowerCase(Locale.ROOT))));
         Set<String> out = new LinkedHashSet<>();
         for (String v : values) {
             for (String f : v.split(",")) {

@@ -9,7 +9,10 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.stream.Collectors;
+import org.cohesa.core.blend.BlendConstraints;
 import org.cohesa.core.blend.BlendDesigner;
+import org.cohesa.core.blend.HazardLimit;
+import org.cohesa.core.blend.ReactiveFlag;
 import org.cohesa.core.blend.BlendSuggestion;
 import org.cohesa.core.blend.CandidatePool;
 import org.cohesa.core.blend.ProgressListener;
@@ -38,6 +41,7 @@ public final class BlendView {
 
     static String secondaryLabel(RankBy r) {
         return switch (r) {
+            case DESIRABILITY -> "score";
             case RED -> null;
             case HAZARD -> "hazard score";
             case COST -> "price/L";
@@ -48,6 +52,7 @@ public final class BlendView {
 
     static String secondaryText(RankedBlend b) {
         return switch (b.rankBy()) {
+            case DESIRABILITY -> Output.fmt(b.secondary(), 2);
             case RED -> "";
             case COMPONENTS -> String.valueOf(b.size());
             case HAZARD, EVAPORATION -> Output.fmt(b.secondary(), 2);
@@ -73,71 +78,91 @@ public final class BlendView {
                         + "%d subsets, %d solved exactly, the rest ruled out by bounds%s",
                 p.free().size(), p.librarySize(), p.withoutHansen(), leftOut, p.fixed().isEmpty() ? "" : ", " + p.fixed().size() + " fixed",
                 r.subsets(), r.solved(), (r.droppedTwoPhase() > 0 ? "; " + r.droppedTwoPhase() + " two-phase blends left out (--keep-two-phase shows them)" : "")
-                        + (r.droppedFlashPoint() > 0 ? "; " + r.droppedFlashPoint() + " left out: blend flash point below the minimum" : ""));
+                        + (r.droppedFlashPoint() > 0 ? "; " + r.droppedFlashPoint() + " left out: blend flash point below the minimum" : "")
+                        + (r.droppedBoiling() > 0 ? "; " + r.droppedBoiling() + " left out: blend initial boiling point outside the window or unknown" : ""));
     }
 
-    static Map<String, Object> json(BlendSuggestion s) {
-        RankedBlend b = s.blend();
-        Map<String, Object> m = new LinkedHashMap<>();
-        List<Map<String, Object>> comps = new ArrayList<>();
-        for (BlendComponent c : b.components()) {
-            Map<String, Object> cm = new LinkedHashMap<>();
-            cm.put("name", c.solvent().name());
-            cm.put("fraction", Double.valueOf(BlendSpec.formatFraction(c.fraction())));
-            comps.add(cm);
+    /** One line per safety-first default that left something out, with the option that brings it back. */
+    static List<String> defaultsText(CandidatePool p) {
+        List<String> out = new ArrayList<>();
+        for (BlendReport.Default d : BlendReport.defaults(p)) {
+            out.add("left out by the safety defaults, " + d.reason() + ": " + String.join(", ", d.names()) + " (" + d.broughtBackBy() + " brings them back)");
         }
-        m.put("components", comps);
-        m.put("dD", Output.round(b.point().dD(), 3));
-        m.put("dP", Output.round(b.point().dP(), 3));
-        m.put("dH", Output.round(b.point().dH(), 3));
-        m.put("ra", Output.round(b.ra(), 4));
-        m.put("red", Output.round(b.red(), 4));
-        m.put("within_red_limit", b.withinLimit());
-        if (b.rankBy() != RankBy.RED) {
-            m.put("rank_by", b.rankBy().word());
-            m.put("secondary", Output.round(b.secondary(), 4));
-        }
-        Map<String, Object> phase = new LinkedHashMap<>();
-        if (s.phase() == null) {
-            phase.put("checked", true);
-            phase.put("splits", false);
-            phase.put("model", null);
-            phase.put("detail", "a single liquid cannot split");
-        } else {
-            phase.put("checked", s.phase().checked());
-            phase.put("splits", s.phase().splits());
-            phase.put("model", s.phase().model());
-            phase.put("detail", s.phase().detail());
-        }
-        m.put("phase", phase);
-        m.put("flash_point_c", s.flashPointC() == null ? null : Output.round(s.flashPointC(), 1));
-        m.put("flash_point_basis", s.flashPointBasis());
-        m.put("warnings", s.warnings());
-        m.put("cautions", s.cautions());
-        return m;
+        return out;
     }
 
-    static Map<String, Object> summaryJson(BlendDesigner.Result r) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        CandidatePool p = r.pool();
-        m.put("library_size", p.librarySize());
-        m.put("searched", p.free().size());
-        m.put("without_hansen", p.withoutHansen());
-        Map<String, Object> counts = new LinkedHashMap<>();
-        p.leftOut().forEach((reason, names) -> counts.put(reason, names.size()));
-        m.put("left_out", counts);
-        m.put("without_hansen_names", p.leftOut().getOrDefault(CandidatePool.NO_HANSEN, List.of()));
-        m.put("subsets", r.subsets());
-        m.put("solved_exactly", r.solved());
-        m.put("two_phase_left_out", r.droppedTwoPhase());
-        m.put("below_blend_flash_point_left_out", r.droppedFlashPoint());
-        return m;
+    /** Lines saying which limits were applied to what (component or computed blend property). */
+    static List<String> appliedLimits(BlendConstraints c) {
+        List<String> out = new ArrayList<>();
+        if (c.minFlashPointC() != null) {
+            out.add("flash point ≥ " + Output.fmt(c.minFlashPointC(), 0) + " °C applied to each component (library, closed cup) and to the blend's computed flash point (Liaw et al. 2002)");
+        }
+        if (c.more().minBlendFlashPointC() != null) {
+            out.add("flash point ≥ " + Output.fmt(c.more().minBlendFlashPointC(), 0) + " °C applied to the blend's computed flash point only (Liaw et al. 2002); components may be lower");
+        }
+        if (c.boilingMinC() != null || c.boilingMaxC() != null) {
+            out.add("boiling point " + window(c.boilingMinC(), c.boilingMaxC()) + " °C applied to each component's normal boiling point");
+        }
+        if (c.more().blendBoilingMinC() != null || c.more().blendBoilingMaxC() != null) {
+            out.add("initial boiling point " + window(c.more().blendBoilingMinC(), c.more().blendBoilingMaxC())
+                    + " °C applied to the blend's computed bubble point (blends where it cannot be computed are left out)");
+        }
+        if (c.maxIchClass() != null) {
+            out.add("ICH Q3C class " + c.maxIchClass() + (c.maxIchClass() < 3 ? " or milder" : "") + "; solvents ICH Q3C does not list: "
+                    + (c.more().ichUnlistedAllowed() ? "kept (each needs a justification under Q3C)" : "left out (--ich-unlisted keep lets them through; each needs a justification under Q3C)"));
+        }
+        for (HazardLimit h : c.more().healthLimits()) {
+            out.add("replaced for " + h.kind() + " (" + h.because() + "): no candidate carries the same or a worse statement of that kind");
+        }
+        if (!c.more().excludeReactive().isEmpty()) {
+            out.add("reactive solvents left out: " + c.more().excludeReactive().stream().map(ReactiveFlag::label).collect(Collectors.joining(", ")));
+        }
+        return out;
     }
 
-    /** Prints warnings and cautions under a table, one block per rank. */
-    static void notes(PrintWriter out, List<BlendSuggestion> list) {
+    private static String window(Double lo, Double hi) {
+        return (lo == null ? "" : Output.fmt(lo, 0)) + ".." + (hi == null ? "" : Output.fmt(hi, 0));
+    }
+
+    /** The one line saying cost could not weigh, or null. */
+    static String costNote(BlendOptions o, BlendDesigner.Result r) {
+        if (o.costAsked() && Double.isNaN(r.referencePrice())) {
+            return "no searched solvent has a price yet, so cost did not weigh in the ranking: set prices with 'cohesa solvents price NAME PRICE' (any currency)";
+        }
+        return null;
+    }
+
+    /** Prints the lines above a table: defaults, limits, cost note. */
+    static void header(PrintWriter out, BlendDesigner.Result r, BlendConstraints c, BlendOptions o) {
+        defaultsText(r.pool()).forEach(out::println);
+        appliedLimits(c).forEach(out::println);
+        String cost = costNote(o, r);
+        if (cost != null) {
+            out.println(cost);
+        }
+        if (o.rankBy() == RankBy.DESIRABILITY) {
+            out.println("ranked by desirability (" + o.preferWord() + ": " + o.weights().describe() + "; RED ≤ " + Output.fmt(o.redLimit(), 2)
+                    + " qualifies; docs/methods.md) — --rank-by red gives the closest blends first");
+        }
+    }
+
+    /** Prints reasons, warnings, flags, variants and cautions under a table, one block per rank. */
+    static void notes(PrintWriter out, List<BlendSuggestion> list, boolean all) {
         for (int i = 0; i < list.size(); i++) {
             BlendSuggestion s = list.get(i);
+            out.println("#" + (i + 1) + " why: " + String.join("; ", s.why()));
+            if (!s.flags().isEmpty()) {
+                out.println("#" + (i + 1) + " reactive: " + String.join("; ", s.flags()) + " (--exclude-reactive leaves such solvents out)");
+            }
+            if (!s.variants().isEmpty()) {
+                if (all) {
+                    for (RankedBlend v : s.variants()) {
+                        out.println("#" + (i + 1) + " variant: " + describe(v) + ", RED " + Output.fmt(v.red(), 3));
+                    }
+                } else {
+                    out.println("#" + (i + 1) + " " + s.variants().size() + " near-duplicate" + (s.variants().size() == 1 ? "" : "s") + " folded under it (--all shows them)");
+                }
+            }
             for (String w : s.warnings()) {
                 out.println("#" + (i + 1) + " WARNING: " + w);
             }

@@ -7,15 +7,17 @@ import org.cohesa.cli.Targets;
 import org.cohesa.cli.TextTable;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
+import java.util.Locale;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
 import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.blend.BlendConstraints;
 import org.cohesa.core.blend.BlendDesigner;
 import org.cohesa.core.blend.BlendSuggestion;
+import org.cohesa.core.blend.HazardLimit;
+import org.cohesa.core.safety.FlammableLiquidClass;
+import org.cohesa.core.target.Material;
 import org.cohesa.core.blend.RankedBlend;
 import org.cohesa.core.hsp.HansenParameters;
 import org.cohesa.core.hsp.SolubilitySphere;
@@ -51,11 +53,24 @@ public final class ReplaceCommand extends CohesaSubcommand {
     @Option(names = "--target", paramLabel = "dD,dP,dH,R0", description = "The material's sphere, when known (MPa^½).")
     String target;
 
-    @Option(names = "--radius", paramLabel = "R", description = "Radius of the sphere around the replaced solvent when no --target is given, MPa^½ (default 4).")
+    @Option(names = "--material", paramLabel = "NAME", description = "The material the solvent dissolves, from the library (see 'materials'); its sphere is the target.")
+    String material;
+
+    @Option(names = "--radius", paramLabel = "R", description = "Radius of the sphere around the replaced solvent when no --target or --material is given, MPa^½ (default 4).")
     String radius;
+
+    @Option(names = "--because", paramLabel = "REASONS", description = {
+            "Why the solvent is replaced (repeat or separate with commas): reprotoxic, carcinogen, mutagen, cmr, organ, toxic, aspiration, health, ozone,",
+            "flammable, ich, high-boiling, low-boiling. No candidate is as bad as the original on a named reason.",
+            "Default: every CMR, organ-damage (STOT) and acute-toxicity statement the original carries."})
+    List<String> because = new ArrayList<>();
 
     @Mixin
     BlendOptions options;
+
+    /** What the user's reasons make of the constraints. */
+    private record Reasons(List<HazardLimit> limits, Double minFlash, Integer maxIch, Double bpMin, Double bpMax, List<String> words) {
+    }
 
     @Override
     protected void execute() {
@@ -64,12 +79,21 @@ public final class ReplaceCommand extends CohesaSubcommand {
         if (!original.hasHansen()) {
             throw new InvalidInputException("NAME", name, "has no Hansen parameters in the library, so substitutes cannot be ranked");
         }
+        if (target != null && material != null) {
+            throw new InvalidInputException("--material", material, "give --target or --material, not both");
+        }
         SolubilitySphere sphere;
-        if (target != null) {
+        Material mat = null;
+        if (target != null || material != null) {
             if (radius != null) {
-                throw new InvalidInputException("--radius", radius, "applies only without --target (the target carries its own R0)");
+                throw new InvalidInputException("--radius", radius, "applies only without --target or --material (they carry their own R0)");
             }
-            sphere = Targets.parseSphere("--target", target);
+            if (material != null) {
+                mat = ctx().materials().library().resolve("--material", material);
+                sphere = mat.sphere();
+            } else {
+                sphere = Targets.parseSphere("--target", target);
+            }
         } else {
             double r = DEFAULT_RADIUS;
             if (radius != null) {
@@ -81,77 +105,173 @@ public final class ReplaceCommand extends CohesaSubcommand {
             sphere = new SolubilitySphere(original.hansen(), r);
         }
         int k = options.maxComponents();
-        BlendConstraints c = options.constraints(lib, original);
+        Reasons why = reasons(original);
+        BlendConstraints c = applyReasons(options.constraints(lib, original), why);
+        options.checkPricesExist(lib);
         if (c.fixed().size() >= k) {
             throw new InvalidInputException("--max-components", String.valueOf(k), "must exceed the number of fixed components (" + c.fixed().size() + ")");
         }
         BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, k, options.top(), options.rankBy(), options.redLimit(),
-                options.keepTwoPhase, options.kelvin());
+                options.keepTwoPhase, options.kelvin(), options.weights());
         BlendDesigner.Result r = BlendDesigner.design(lib.all(), req, PhaseChecks.miscibility(), BlendView.progress(spec.commandLine().getErr()), null);
+        boolean centred = target == null && material == null;
+        List<String> replacedFor = why.words();
         if (json()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("original", row(original.name(), List.of(new BlendComponent(original, 1.0)), original.hansen(), sphere, original));
-            Map<String, Object> t = new LinkedHashMap<>();
-            t.put("dD", sphere.centre().dD());
-            t.put("dP", sphere.centre().dP());
-            t.put("dH", sphere.centre().dH());
-            t.put("r0", sphere.r0());
-            t.put("centred_on_original", target == null);
-            m.put("target", t);
-            m.put("rank_by", options.rankBy().word());
-            m.put("search", BlendView.summaryJson(r));
-            List<Map<String, Object>> list = new ArrayList<>();
-            for (BlendSuggestion s : r.suggestions()) {
-                Map<String, Object> j = BlendView.json(s);
-                j.putAll(row(null, s.blend().components(), s.blend().point(), sphere, original));
-                list.add(j);
-            }
-            m.put("candidates", list);
-            m.put("notice", BlendView.SCREENING);
-            Output.json(out(), m);
+            HansenParameters oh = original.hansen();
+            BlendReport.Original o = new BlendReport.Original(original.name(), oh.dD(), oh.dP(), oh.dH(), Output.round(sphere.red(oh), 4),
+                    original.flashPointC(), replacedFor, comparison(List.of(new BlendComponent(original, 1.0)), oh, original));
+            BlendReport.Target t = new BlendReport.Target(sphere.centre().dD(), sphere.centre().dP(), sphere.centre().dH(), sphere.r0(),
+                    mat == null ? null : mat.name(), mat == null ? null : mat.source(), centred);
+            Output.json(out(), new BlendReport.Replacement(o, t, options.rankBy().word(), options.ranking(r), BlendReport.search(r),
+                    BlendView.appliedLimits(c), BlendReport.suggestions(r, s -> comparison(s.blend().components(), s.blend().point(), original)),
+                    BlendView.SCREENING));
             return;
         }
         out().println("replacing " + original.name() + "; sphere δD " + Output.fmt(sphere.centre().dD(), 1) + ", δP " + Output.fmt(sphere.centre().dP(), 1)
                 + ", δH " + Output.fmt(sphere.centre().dH(), 1) + ", R0 " + Output.fmt(sphere.r0(), 1) + " MPa^½"
-                + (target == null ? " (centred on the original)" : ""));
+                + (centred ? " (centred on the original)" : mat != null ? " (" + mat.name() + ", source " + mat.source() + ")" : ""));
+        out().println(replacedFor.isEmpty()
+                ? "replaced for: nothing named, and " + original.name() + " carries no CMR, organ-damage or acute-toxicity statement; --because says what must improve"
+                : "replaced for: " + String.join("; ", replacedFor));
         out().println(BlendView.summary(r));
-        TextTable t = new TextTable("", "solvent or blend (volume %)", "dD", "dP", "dH", "Ra to original", "RED", "bp °C", "flash °C", "ICH", "hazard statements", "phases");
+        BlendView.header(out(), r, c, options);
+        TextTable t = new TextTable("", "solvent or blend (volume %)", "dD", "dP", "dH", "Ra to original", "RED", "score", "bp °C", "flash °C", "ICH",
+                "hazard statements", "phases");
         HansenParameters oh = original.hansen();
+        BlendReport.Comparison oc = comparison(List.of(new BlendComponent(original, 1.0)), oh, original);
         t.row("in use", original.name(), Output.fmt(oh.dD(), 1), Output.fmt(oh.dP(), 1), Output.fmt(oh.dH(), 1), "0.00",
-                Output.fmt(sphere.red(oh), 3), Output.fmt(original.boilingPointC(), 0), Output.fmt(original.flashPointC(), 0),
-                original.ichClass(), String.join(" ", original.hazardStatements()), "single liquid");
+                Output.fmt(sphere.red(oh), 3), "", Output.fmt(original.boilingPointC(), 0), Output.fmt(original.flashPointC(), 0),
+                oc.ichClass(), String.join(" ", original.hazardStatements()), "single liquid");
         int rank = 1;
         for (BlendSuggestion s : r.suggestions()) {
             RankedBlend b = s.blend();
-            Map<String, Object> p = row(null, b.components(), b.point(), sphere, original);
+            BlendReport.Comparison p = comparison(b.components(), b.point(), original);
             t.row("#" + rank++, BlendView.describe(b), Output.fmt(b.point().dD(), 1), Output.fmt(b.point().dP(), 1), Output.fmt(b.point().dH(), 1),
-                    Output.fmt((Double) p.get("ra_to_original"), 2), Output.fmt(b.red(), 3), p.get("boiling_point_c_text"),
-                    Output.fmt(s.flashPointC(), 0), p.get("ich_class"), String.join(" ", asStrings(p.get("hazard_statements"))),
+                    Output.fmt(p.raToOriginal(), 2), Output.fmt(b.red(), 3), Double.isNaN(s.score()) ? "" : Output.fmt(s.score(), 2),
+                    p.boilingPointCText(), Output.fmt(s.flashPointC(), 0), p.ichClass(), String.join(" ", p.hazardStatements()),
                     BlendView.phaseText(s));
         }
         t.print(out());
+        if (r.suggestions().isEmpty()) {
+            out().println("no candidate reaches RED ≤ " + Output.fmt(options.redLimit(), 2) + " under these constraints and reasons"
+                    + (centred ? " (--radius widens the sphere around the original; --red-limit the limit)" : " (--red-limit widens the limit)"));
+        }
         out().println("For blends: bp is the range of the components, flash °C the blend's computed flash point (Liaw et al. 2002; '-' when not flammable or unknown, see --json), ICH the worst component class.");
-        BlendView.notes(out(), r.suggestions());
+        BlendView.notes(out(), r.suggestions(), options.all);
         out().println(BlendView.SCREENING);
     }
 
-    @SuppressWarnings("unchecked")
-    private static List<String> asStrings(Object o) {
-        return (List<String>) o;
+    /** The reasons the user named, or by default the original's own health statements. */
+    private Reasons reasons(Solvent original) {
+        List<HazardLimit> limits = new ArrayList<>();
+        Double minFlash = null;
+        Integer maxIch = null;
+        Double bpMin = null;
+        Double bpMax = null;
+        List<String> words = new ArrayList<>();
+        List<String> given = new ArrayList<>();
+        for (String b : because) {
+            for (String w : b.split(",")) {
+                if (!w.isBlank()) {
+                    given.add(w.strip());
+                }
+            }
+        }
+        if (given.isEmpty()) {
+            limits.addAll(HazardLimit.from(original, HazardLimit.DEFAULT_KINDS));
+        }
+        for (String w : given) {
+            List<String> kinds = HazardLimit.kindsOf("--because", w);
+            if (kinds != null) {
+                for (HazardLimit h : HazardLimit.forReasons("--because", original, kinds, w)) {
+                    if (limits.stream().noneMatch(x -> x.kind().equals(h.kind()))) {
+                        limits.add(h);
+                    }
+                }
+                continue;
+            }
+            switch (w.toLowerCase(Locale.ROOT)) {
+                case "flammable", "flammability" -> {
+                    Integer cat = FlammableLiquidClass.ghs(original.flashPointC(), original.boilingPointC()).category();
+                    if (cat == null) {
+                        throw new InvalidInputException("--because", w, original.name() + " is not a flammable liquid in the library (no flash point)");
+                    }
+                    // Strictly less flammable: the next GHS category boundary above the original's (Table 2.6.1).
+                    minFlash = cat <= 2 ? 23.0 : cat == 3 ? 60.5 : 93.5;
+                    words.add("flammable (GHS Category " + cat + " → components and blend flash point ≥ " + Output.fmt(minFlash, 1) + " °C)");
+                }
+                case "ich", "ich-class" -> {
+                    Integer ich = original.ichClass();
+                    if (ich == null || ich == 3) {
+                        throw new InvalidInputException("--because", w, original.name() + " is " + (ich == null ? "not listed in ICH Q3C" : "already ICH Q3C class 3")
+                                + ", so a milder class cannot be asked for");
+                    }
+                    maxIch = ich + 1;
+                    words.add("ICH Q3C class " + ich + " (→ class " + maxIch + (maxIch < 3 ? " or milder" : "") + " only)");
+                }
+                case "high-boiling" -> {
+                    requireBoilingPoint(original, w);
+                    bpMax = original.boilingPointC() - 0.5;
+                    words.add("high boiling point " + Output.fmt(original.boilingPointC(), 0) + " °C (→ components boil lower)");
+                }
+                case "low-boiling" -> {
+                    requireBoilingPoint(original, w);
+                    bpMin = original.boilingPointC() + 0.5;
+                    words.add("low boiling point " + Output.fmt(original.boilingPointC(), 0) + " °C (→ components boil higher)");
+                }
+                default -> throw new InvalidInputException("--because", w, "choose from reprotoxic, carcinogen, mutagen, cmr, organ, toxic, aspiration, health, "
+                        + "ozone, flammable, ich, high-boiling, low-boiling");
+            }
+        }
+        List<String> all = new ArrayList<>();
+        for (HazardLimit h : limits) {
+            all.add(h.kind() + " (" + h.because() + ")");
+        }
+        all.addAll(words);
+        return new Reasons(limits, minFlash, maxIch, bpMin, bpMax, all);
+    }
+
+    private static void requireBoilingPoint(Solvent s, String w) {
+        if (s.boilingPointC() == null) {
+            throw new InvalidInputException("--because", w, s.name() + " has no boiling point in the library");
+        }
+    }
+
+    /** The constraints tightened by the reasons (a user's own limits stay when they are stricter). */
+    private static BlendConstraints applyReasons(BlendConstraints c, Reasons w) {
+        Double minFlash = stricter(w.minFlash(), c.minFlashPointC(), true);
+        Integer ich = w.maxIch() == null ? c.maxIchClass() : c.maxIchClass() == null ? w.maxIch() : Integer.valueOf(Math.max(w.maxIch(), c.maxIchClass()));
+        Double bpMin = stricter(w.bpMin(), c.boilingMinC(), true);
+        Double bpMax = stricter(w.bpMax(), c.boilingMaxC(), false);
+        if (bpMin != null && bpMax != null && bpMin > bpMax) {
+            throw new InvalidInputException("--boiling-range", Output.fmt(bpMin, 0) + ".." + Output.fmt(bpMax, 0), "the reasons and the window leave no boiling point");
+        }
+        BlendConstraints.More m = c.more();
+        List<HazardLimit> limits = new ArrayList<>(m.healthLimits());
+        limits.addAll(w.limits());
+        try {
+            return new BlendConstraints(c.include(), c.exclude(), c.families(), c.excludeFamilies(), c.fixed(), c.minFraction(), c.maxFraction(),
+                    c.fractionRanges(), bpMin, bpMax, minFlash, ich, c.noCmr(), c.maxCost(),
+                    new BlendConstraints.More(m.noIchClass1(), m.ichUnlistedAllowed(), limits, m.excludeReactive(), m.minBlendFlashPointC(),
+                            m.blendBoilingMinC(), m.blendBoilingMaxC()));
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException("--because", String.join(",", w.words()), e.getMessage());
+        }
+    }
+
+    /** The stricter of two optional limits: the larger lower limit or the smaller upper limit. */
+    private static Double stricter(Double a, Double b, boolean lower) {
+        if (a == null) {
+            return b;
+        }
+        if (b == null) {
+            return a;
+        }
+        return lower ? Double.valueOf(Math.max(a, b)) : Double.valueOf(Math.min(a, b));
     }
 
     /** Side-by-side properties of a solvent or blend. */
-    private static Map<String, Object> row(String label, List<BlendComponent> comps, HansenParameters point, SolubilitySphere sphere, Solvent original) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        if (label != null) {
-            m.put("name", label);
-            m.put("dD", point.dD());
-            m.put("dP", point.dP());
-            m.put("dH", point.dH());
-            m.put("red", Output.round(sphere.red(point), 4));
-            m.put("flash_point_c", original.flashPointC());
-        }
-        m.put("ra_to_original", Output.round(original.hansen().distanceTo(point), 4));
+    private static BlendReport.Comparison comparison(List<BlendComponent> comps, HansenParameters point, Solvent original) {
         Double bpMin = null;
         Double bpMax = null;
         Double flash = null;
@@ -168,18 +288,14 @@ public final class ReplaceCommand extends CohesaSubcommand {
                 flash = flash == null ? s.flashPointC() : Math.min(flash, s.flashPointC());
             }
             if (s.ichClass() == null) {
-                ichUnknown = true;
+                ichUnknown = !"7732-18-5".equals(s.cas()) || ichUnknown;
             } else {
                 ich = ich == null ? s.ichClass() : Math.min(ich, s.ichClass());
             }
             h.addAll(s.hazardStatements());
         }
-        m.put("boiling_point_c_min", bpMin);
-        m.put("boiling_point_c_max", bpMax);
-        m.put("boiling_point_c_text", bpMin == null ? "-" : bpMin.equals(bpMax) ? Output.fmt(bpMin, 0) : Output.fmt(bpMin, 0) + "–" + Output.fmt(bpMax, 0));
-        m.put("lowest_component_flash_point_c", flash);
-        m.put("ich_class", ich == null ? (ichUnknown ? "not listed" : null) : ichUnknown ? ich + " + not listed" : ich);
-        m.put("hazard_statements", new ArrayList<>(h));
-        return m;
+        String ichText = ich == null ? (ichUnknown ? "not listed" : "-") : ichUnknown ? ich + " + not listed" : String.valueOf(ich);
+        String bpText = bpMin == null ? "-" : bpMin.equals(bpMax) ? Output.fmt(bpMin, 0) : Output.fmt(bpMin, 0) + "–" + Output.fmt(bpMax, 0);
+        return new BlendReport.Comparison(Output.round(original.hansen().distanceTo(point), 4), bpMin, bpMax, bpText, flash, ichText, new ArrayList<>(h));
     }
 }

@@ -24,6 +24,7 @@ import org.cohesa.core.solvent.Solvent;
  * @param maxIchClass      worst ICH Q3C class accepted (1 is the worst concern, 3 the mildest): 2 leaves out class 1
  * @param noCmr            leave out carcinogens, mutagens and reproductive toxicants (H340, H350, H360 families)
  * @param maxCost          largest blend price per litre Σ φᵢ priceᵢ (only solvents with an entered price take part)
+ * @param more             the safety-first and process demands ({@link More})
  */
 public record BlendConstraints(
         List<Solvent> include,
@@ -39,7 +40,48 @@ public record BlendConstraints(
         Double minFlashPointC,
         Integer maxIchClass,
         boolean noCmr,
-        Double maxCost) {
+        Double maxCost,
+        More more) {
+
+    /**
+     * Demands beyond the per-solvent basics.
+     *
+     * @param noIchClass1          leave out ICH Q3C class 1 solvents (a safety-first default of the command line)
+     * @param ichUnlistedAllowed   with {@code maxIchClass}, let solvents ICH Q3C does not list through (they need a
+     *                             justification under Q3C); false leaves them out
+     * @param healthLimits         hazard kinds a candidate must be strictly milder on (what a solvent is replaced for)
+     * @param excludeReactive      process-suitability flags to leave out ({@link ReactiveFlag})
+     * @param minBlendFlashPointC  least computed flash point of the blend itself (Liaw et al. 2002), °C; components may be lower
+     * @param blendBoilingMinC     lowest computed initial boiling point (bubble point) of the blend, °C
+     * @param blendBoilingMaxC     highest computed initial boiling point (bubble point) of the blend, °C
+     */
+    public record More(boolean noIchClass1, boolean ichUnlistedAllowed, List<HazardLimit> healthLimits, Set<ReactiveFlag> excludeReactive,
+            Double minBlendFlashPointC, Double blendBoilingMinC, Double blendBoilingMaxC) {
+
+        public static final More NONE = new More(false, false, List.of(), Set.of(), null, null, null);
+
+        public More {
+            healthLimits = List.copyOf(Objects.requireNonNullElse(healthLimits, List.of()));
+            excludeReactive = Set.copyOf(Objects.requireNonNullElse(excludeReactive, Set.of()));
+            if (blendBoilingMinC != null && blendBoilingMaxC != null && blendBoilingMinC > blendBoilingMaxC) {
+                throw new IllegalArgumentException("blend boiling window " + blendBoilingMinC + ".." + blendBoilingMaxC + " °C is empty");
+            }
+        }
+    }
+
+    /** The basic demands alone (no safety-first defaults, no process demands). */
+    public BlendConstraints(List<Solvent> include, List<Solvent> exclude, Set<String> families, Set<String> excludeFamilies,
+            List<BlendComponent> fixed, double minFraction, double maxFraction, Map<Solvent, double[]> fractionRanges, Double boilingMinC,
+            Double boilingMaxC, Double minFlashPointC, Integer maxIchClass, boolean noCmr, Double maxCost) {
+        this(include, exclude, families, excludeFamilies, fixed, minFraction, maxFraction, fractionRanges, boilingMinC, boilingMaxC,
+                minFlashPointC, maxIchClass, noCmr, maxCost, More.NONE);
+    }
+
+    /** A copy with other further demands. */
+    public BlendConstraints with(More m) {
+        return new BlendConstraints(include, exclude, families, excludeFamilies, fixed, minFraction, maxFraction, fractionRanges, boilingMinC,
+                boilingMaxC, minFlashPointC, maxIchClass, noCmr, maxCost, m);
+    }
 
     /** Default least fraction of a component the search adds: below 5 % a component hardly changes a blend's parameters and is hard to dose. */
     public static final double DEFAULT_MIN_FRACTION = 0.05;
@@ -54,6 +96,7 @@ public record BlendConstraints(
         excludeFamilies = Set.copyOf(Objects.requireNonNullElse(excludeFamilies, Set.of()));
         fixed = List.copyOf(Objects.requireNonNullElse(fixed, List.of()));
         fractionRanges = Map.copyOf(Objects.requireNonNullElse(fractionRanges, Map.of()));
+        more = Objects.requireNonNullElse(more, More.NONE);
         if (!(minFraction >= 0 && minFraction < 1)) {
             throw new IllegalArgumentException("minimum fraction must lie in [0, 1), got " + minFraction);
         }

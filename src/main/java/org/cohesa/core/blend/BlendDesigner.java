@@ -1,6 +1,8 @@
 package org.cohesa.core.blend;
 
 import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.Set;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -35,25 +37,38 @@ public final class BlendDesigner {
     /**
      * @param maxComponents 1..4 including fixed components
      * @param top           how many suggestions
-     * @param rankBy        secondary key
-     * @param redLimit      RED up to which a blend counts as good
+     * @param rankBy        the ranking ({@link RankBy#DESIRABILITY} by default)
+     * @param redLimit      RED up to which a blend qualifies (desirability) or counts as good (other keys)
      * @param keepTwoPhase  keep blends that split (with a warning) instead of dropping them
      * @param kelvin        temperature of the split test, K
+     * @param weights       desirability weights
      */
     public record Request(SolubilitySphere target, BlendConstraints constraints, int maxComponents, int top, RankBy rankBy,
-            double redLimit, boolean keepTwoPhase, double kelvin) {
+            double redLimit, boolean keepTwoPhase, double kelvin, Desirability.Weights weights) {
+
+        /** A request with the default desirability weights. */
+        public Request(SolubilitySphere target, BlendConstraints constraints, int maxComponents, int top, RankBy rankBy,
+                double redLimit, boolean keepTwoPhase, double kelvin) {
+            this(target, constraints, maxComponents, top, rankBy, redLimit, keepTwoPhase, kelvin, Desirability.DEFAULT);
+        }
+
+        public Request {
+            java.util.Objects.requireNonNull(weights, "weights");
+        }
     }
 
     /**
-     * @param suggestions       best first
+     * @param suggestions       best first, near-duplicates folded into their variants
      * @param pool              what was searched and what was left out
      * @param subsets           subsets in the search space
      * @param solved            subsets solved exactly (the rest were pruned by a bound)
      * @param droppedTwoPhase   blends left out because they split into two liquid phases
      * @param droppedFlashPoint blends left out because their computed flash point is below the minimum
+     * @param droppedBoiling    blends left out because their computed initial boiling point is outside the blend window
+     * @param referencePrice    median price per litre of the searched solvents, NaN when none has a price
      */
     public record Result(List<BlendSuggestion> suggestions, CandidatePool pool, long subsets, long solved, int droppedTwoPhase,
-            int droppedFlashPoint) {
+            int droppedFlashPoint, int droppedBoiling, double referencePrice) {
     }
 
     private BlendDesigner() {
@@ -63,28 +78,82 @@ public final class BlendDesigner {
             CancellationToken cancel) {
         CandidatePool pool = CandidatePool.of(library, req.constraints(), req.target(), req.rankBy());
         Map<String, PhaseCheck.Verdict> verdicts = new HashMap<>();
+        List<Solvent> priced = new ArrayList<>(pool.free());
+        pool.fixed().forEach(f -> priced.add(f.solvent()));
+        double refPrice = Desirability.referencePrice(priced);
+        Set<Solvent> fixed = new HashSet<>();
+        pool.fixed().forEach(f -> fixed.add(f.solvent()));
         int keep = req.top() * OVERSAMPLE + 10;
         while (true) {
-            BlendSearch.Settings s = BlendSearch.Settings.of(req.maxComponents(), keep, req.rankBy(), req.redLimit());
+            BlendSearch.Settings s = BlendSearch.Settings.of(req.maxComponents(), keep, req.rankBy(), req.redLimit(), req.weights());
             BlendSearch.Outcome o = BlendSearch.run(req.target(), pool, req.constraints(), s, progress, cancel);
-            Result r = screen(o, pool, req, phaseCheck, verdicts);
-            // Too many left out (two phases, flash point) while the search had more to give: search again, wider.
-            long tested = r.suggestions().stream().filter(x -> x.phase() == null || x.phase().checked()).count();
+            Screened sc = screen(o.blends(), req, phaseCheck, verdicts, refPrice, fixed, req.top());
+            List<BlendSuggestion> list = SuggestionList.arrange(sc.ordered(), req.top(), fixed);
+            // Too many left out (two phases, flash point) or folded while the search had more to give: search again, wider.
+            long tested = list.stream().filter(x -> x.phase() == null || x.phase().checked()).count();
             if (tested >= req.top() || o.blends().size() < keep || keep >= MAX_KEEP) {
-                return r;
+                list = keepSimpleInView(list, pool, req, phaseCheck, verdicts, refPrice, fixed, progress, cancel);
+                return new Result(list, pool, o.subsets(), o.solved(), sc.droppedTwoPhase, sc.droppedFlash, sc.droppedBoiling, refPrice);
             }
             keep = Math.min(MAX_KEEP, keep * 4);
         }
     }
 
-    private static Result screen(BlendSearch.Outcome o, CandidatePool pool, Request req, PhaseCheck phaseCheck,
-            Map<String, PhaseCheck.Verdict> verdicts) {
+    /** Where the single-or-pair guarantee puts its answer: within the first five. */
+    static final int SIMPLE_WITHIN = 5;
+
+    /**
+     * Single solvents and 2-component blends that qualify are never crowded out: when none is among the first five, the
+     * best one (by the same score) takes the fifth place (docs/methods.md).
+     */
+    private static List<BlendSuggestion> keepSimpleInView(List<BlendSuggestion> list, CandidatePool pool, Request req, PhaseCheck phaseCheck,
+            Map<String, PhaseCheck.Verdict> verdicts, double refPrice, Set<Solvent> fixed, ProgressListener progress, CancellationToken cancel) {
+        int within = Math.min(SIMPLE_WITHIN, req.top());
+        if (req.rankBy() != RankBy.DESIRABILITY || req.maxComponents() - pool.fixed().size() < 1
+                || SuggestionList.simpleAmongFirst(list, within) || pool.fixed().size() >= 2) {
+            return list;
+        }
+        int k = Math.min(2, req.maxComponents());
+        BlendSearch.Settings s = BlendSearch.Settings.of(k, 20, req.rankBy(), req.redLimit(), req.weights());
+        BlendSearch.Outcome o = BlendSearch.run(req.target(), pool, req.constraints(), s, progress, cancel);
+        Screened sc = screen(o.blends(), req, phaseCheck, verdicts, refPrice, fixed, 1);
+        BlendSuggestion simple = sc.tested().isEmpty() ? null : sc.tested().get(0);
+        if (simple == null) {
+            return list;
+        }
+        List<BlendSuggestion> out = new ArrayList<>(list);
+        out.removeIf(x -> x.blend().components().equals(simple.blend().components()));
+        int at = Math.min(within - 1, out.size());
+        out.add(at, simple.withReason("kept in view: the best single solvent or 2-component blend is never crowded out"));
+        while (out.size() > req.top()) {
+            out.remove(out.size() - 1);
+        }
+        return out;
+    }
+
+    private record Screened(List<BlendSuggestion> tested, List<BlendSuggestion> untested, int droppedTwoPhase, int droppedFlash,
+            int droppedBoiling) {
+        List<BlendSuggestion> ordered() {
+            List<BlendSuggestion> all = new ArrayList<>(tested);
+            all.addAll(untested); // not known to be one liquid phase: after every blend that was tested
+            return all;
+        }
+    }
+
+    /** Phase check, safety profile, blend limits and reasons for the ranked blends, until {@code top} distinct ideas are tested. */
+    private static Screened screen(List<RankedBlend> blends, Request req, PhaseCheck phaseCheck, Map<String, PhaseCheck.Verdict> verdicts,
+            double refPrice, Set<Solvent> fixed, int top) {
         List<BlendSuggestion> out = new ArrayList<>();
+        List<BlendSuggestion> untested = new ArrayList<>();
         int dropped = 0;
         int droppedFlash = 0;
-        List<BlendSuggestion> untested = new ArrayList<>();
-        for (RankedBlend b : o.blends()) {
-            if (out.size() >= req.top()) {
+        int droppedBoiling = 0;
+        BlendConstraints c = req.constraints();
+        Double minFlash = max(c.minFlashPointC(), c.more().minBlendFlashPointC());
+        Double bMin = c.more().blendBoilingMinC();
+        Double bMax = c.more().blendBoilingMaxC();
+        for (RankedBlend b : blends) {
+            if (out.size() >= top && SuggestionList.ideas(out, top, fixed) >= top) {
                 break;
             }
             PhaseCheck.Verdict v = null;
@@ -109,32 +178,56 @@ public final class BlendDesigner {
                 flashBasis = p.flashPoint().status().name().toLowerCase(Locale.ROOT).replace('_', ' ')
                         + (p.flashPoint().model() == null ? "" : ", " + p.flashPoint().model())
                         + (p.flashPoint().detail().isEmpty() ? "" : "; " + String.join("; ", p.flashPoint().detail()));
-                Double min = req.constraints().minFlashPointC();
-                if (min != null && flash != null && flash < min) {
-                    droppedFlash++; // each component passes, but the blend's own flash point is lower (non-ideal mixing)
+                if (minFlash != null && flash != null && flash < minFlash) {
+                    droppedFlash++; // each component may pass, but the blend's own flash point is lower (non-ideal mixing)
                     continue;
                 }
-                if (min != null && flash == null && p.flashPoint().status() == SafetyProfile.FlashPointStatus.UNKNOWN) {
-                    warnings.add("blend flash point could not be estimated (" + flashBasis + "); only each component's flash point was checked");
+                if (minFlash != null && flash == null && p.flashPoint().status() == SafetyProfile.FlashPointStatus.UNKNOWN) {
+                    warnings.add("blend flash point could not be estimated (" + flashBasis + ")"
+                            + (c.minFlashPointC() != null ? "; only each component's flash point was checked" : "; the blend flash-point limit is NOT checked"));
+                }
+                if (bMin != null || bMax != null) {
+                    Double ibp = p.initialBoilingPointC();
+                    if (ibp == null || (bMin != null && ibp < bMin) || (bMax != null && ibp > bMax)) {
+                        droppedBoiling++; // unknown counts as outside: a window that cannot be checked is not met
+                        continue;
+                    }
                 }
             } catch (IllegalArgumentException e) {
                 cautions = cautions(b);
                 flashBasis = "not estimated: " + e.getMessage();
                 warnings.add("safety profile not available (" + e.getMessage() + "); cautions list the components' hazard statements only");
+                if (bMin != null || bMax != null || c.more().minBlendFlashPointC() != null) {
+                    droppedBoiling += (bMin != null || bMax != null) ? 1 : 0;
+                    droppedFlash += (bMin != null || bMax != null) ? 0 : 1;
+                    continue;
+                }
             }
-            BlendSuggestion sug = new BlendSuggestion(b, v, warnings, cautions, flash, flashBasis);
+            Desirability.Explanation ex = Desirability.explain(b.components(), b.red(), req.redLimit(), req.weights(), refPrice);
+            List<String> why = new ArrayList<>();
+            if (req.rankBy() != RankBy.DESIRABILITY) {
+                why.add("ranked by " + req.rankBy().word() + (req.rankBy() == RankBy.RED ? String.format(Locale.ROOT, " (RED %.3f)", b.red())
+                        : String.format(Locale.ROOT, " (%.3g)", b.secondary())));
+            }
+            why.addAll(ex.why());
+            List<String> flags = new ArrayList<>();
+            for (BlendComponent bc : b.components()) {
+                for (ReactiveFlag rf : ReactiveFlag.of(bc.solvent())) {
+                    flags.add(bc.solvent().name() + ": " + rf.label());
+                }
+            }
+            BlendSuggestion sug = new BlendSuggestion(b, v, warnings, cautions, flash, flashBasis, why, ex.score(), flags, List.of());
             if (v != null && !v.checked()) {
-                untested.add(sug); // not known to be one liquid phase: after every blend that was tested
+                untested.add(sug);
             } else {
                 out.add(sug);
             }
         }
-        for (BlendSuggestion u : untested) {
-            if (out.size() < req.top()) {
-                out.add(u);
-            }
-        }
-        return new Result(out, pool, o.subsets(), o.solved(), dropped, droppedFlash);
+        return new Screened(out, untested, dropped, droppedFlash, droppedBoiling);
+    }
+
+    private static Double max(Double a, Double b) {
+        return a == null ? b : b == null ? a : Double.valueOf(Math.max(a, b));
     }
 
     static List<String> warnings(RankedBlend b, PhaseCheck.Verdict v, Request req) {
@@ -145,6 +238,9 @@ public final class BlendDesigner {
         }
         if (v != null && !v.checked()) {
             w.add("two-phase test NOT made (" + v.detail() + "): check miscibility in the lab before use");
+        }
+        if (b.red() > req.redLimit() * (1 + 1e-9) && req.rankBy() != RankBy.DESIRABILITY) {
+            w.add(String.format(Locale.ROOT, "RED %.2f is above the limit %.2f", b.red(), req.redLimit()));
         }
         if (b.red() >= 1) {
             w.add(String.format(Locale.ROOT, "outside the target sphere (RED %.2f): not expected to dissolve the material", b.red()));

@@ -48,8 +48,16 @@ public final class BlendSearch {
      * @param pruning       false solves every subset (for checks)
      * @param threads       worker threads (≥ 1)
      */
-    public record Settings(int maxComponents, int top, RankBy rankBy, double redLimit, boolean pruning, int threads) {
+    public record Settings(int maxComponents, int top, RankBy rankBy, double redLimit, boolean pruning, int threads,
+            Desirability.Weights weights) {
+
+        /** Settings with the default desirability weights. */
+        public Settings(int maxComponents, int top, RankBy rankBy, double redLimit, boolean pruning, int threads) {
+            this(maxComponents, top, rankBy, redLimit, pruning, threads, Desirability.DEFAULT);
+        }
+
         public Settings {
+            java.util.Objects.requireNonNull(weights, "weights");
             if (maxComponents < 1 || maxComponents > MAX_COMPONENTS) {
                 throw new IllegalArgumentException("components must be 1 to " + MAX_COMPONENTS + ", got " + maxComponents);
             }
@@ -67,6 +75,10 @@ public final class BlendSearch {
 
         public static Settings of(int maxComponents, int top, RankBy rankBy, double redLimit) {
             return new Settings(maxComponents, top, rankBy, redLimit, true, Runtime.getRuntime().availableProcessors());
+        }
+
+        public static Settings of(int maxComponents, int top, RankBy rankBy, double redLimit, Desirability.Weights weights) {
+            return new Settings(maxComponents, top, rankBy, redLimit, true, Runtime.getRuntime().availableProcessors(), weights);
         }
     }
 
@@ -109,12 +121,37 @@ public final class BlendSearch {
 
     private final AtomicReference<Cand> bound = new AtomicReference<>();
 
+    // Desirability ranking: the free solvents in order of falling hazard penalty, so that the first index of a
+    // subset is its worst component and the score's subset part is known before the subset is looked at.
+    private final List<Solvent> order;
+    private final boolean desirability;
+    private final double[] pen;
+    private final double fixedPen;
+    private final double[] relPrice;
+    private final double fixedRelCost;
+    private final double redPerDist;
+
     private BlendSearch(SolubilitySphere target, CandidatePool pool, BlendConstraints constraints, Settings settings) {
         this.target = target;
         this.pool = pool;
         this.constraints = constraints;
         this.settings = settings;
+        desirability = settings.rankBy() == RankBy.DESIRABILITY;
         List<Solvent> free = pool.free();
+        if (desirability) {
+            double[] p0 = Desirability.penalties(free);
+            Integer[] ix = new Integer[free.size()];
+            for (int i = 0; i < ix.length; i++) {
+                ix[i] = i;
+            }
+            java.util.Arrays.sort(ix, (a, b) -> Double.compare(p0[b], p0[a])); // stable: ties keep the pool's order (by Ra)
+            List<Solvent> sorted = new ArrayList<>(free.size());
+            for (Integer i : ix) {
+                sorted.add(free.get(i));
+            }
+            free = List.copyOf(sorted);
+        }
+        order = free;
         n = free.size();
         nFixed = pool.fixed().size();
         double fixedSum = 0;
@@ -170,6 +207,37 @@ public final class BlendSearch {
             }
         }
         costCap = constraints.maxCost() == null ? Double.NaN : (constraints.maxCost() - fixedCost) / s;
+        redPerDist = s / target.r0();
+        if (desirability) {
+            pen = Desirability.penalties(free);
+            double fp = 0;
+            for (BlendComponent f : pool.fixed()) {
+                fp = Math.max(fp, HazardPenalty.of(f.solvent()).points());
+            }
+            fixedPen = fp;
+            List<Solvent> priced = new ArrayList<>(free);
+            pool.fixed().forEach(f -> priced.add(f.solvent()));
+            double ref = Desirability.referencePrice(priced);
+            relPrice = new double[n];
+            double frc = 0;
+            if (!Double.isNaN(ref)) {
+                for (int i = 0; i < n; i++) {
+                    Double pr = free.get(i).pricePerLitre();
+                    relPrice[i] = pr == null ? 0 : pr / ref;
+                }
+                for (BlendComponent f : pool.fixed()) {
+                    if (f.solvent().pricePerLitre() != null) {
+                        frc += f.fraction() * f.solvent().pricePerLitre() / ref;
+                    }
+                }
+            }
+            fixedRelCost = frc;
+        } else {
+            pen = null;
+            fixedPen = 0;
+            relPrice = null;
+            fixedRelCost = 0;
+        }
         shortcut = !settings.rankBy().isLinear();
         double extent = 0;
         for (int i = 0; i < n; i++) {
@@ -353,7 +421,10 @@ public final class BlendSearch {
     }
 
     /** Largest distance (ψ space) a subset of {@code totalK} components may have and still enter, given the bound; −1: none may. */
-    private double distanceThreshold(Cand w, int totalK) {
+    private double distanceThreshold(Cand w, int totalK, int i) {
+        if (desirability) {
+            return desirabilityThreshold(w, totalK, i);
+        }
         if (w == null) {
             return Double.POSITIVE_INFINITY;
         }
@@ -371,6 +442,39 @@ public final class BlendSearch {
             return totalK == w.p1 ? Math.min(rho, w.p2) : rho;
         }
         return rho;
+    }
+
+    /**
+     * The part of the desirability score a subset whose worst (first) member is {@code i} has before its
+     * composition is known: hazard of the worst component and the component count. Cost (≥ 0) and distance
+     * (≥ 0) can only add to it, so it is a lower bound of the score.
+     */
+    private double baseScore(int i, int totalK) {
+        Desirability.Weights wt = settings.weights();
+        return wt.hazard() * Math.max(pen[i], fixedPen) + wt.components() * (totalK - 1) + wt.cost() * fixedRelCost;
+    }
+
+    /** Largest ψ-space distance a subset led by {@code i} may have: inside the RED limit and able to beat the bound; −1: none. */
+    private double desirabilityThreshold(Cand w, int totalK, int i) {
+        if (w == null) {
+            return rho;
+        }
+        double slack = w.p1 - baseScore(i, totalK);
+        double tol = 1e-9 * (1 + Math.abs(w.p1));
+        if (slack < -tol) {
+            return -1;
+        }
+        double wd = settings.weights().distance() * redPerDist;
+        if (wd > 0) {
+            return Math.min(rho, (Math.max(0, slack) + tol) / wd);
+        }
+        return slack > tol ? rho : Math.min(rho, w.p2);
+    }
+
+    /** True when no subset of this size led by {@code i} or by any later-visited index can enter (desirability order only). */
+    private boolean desirabilityExhausted(int i, int totalK) {
+        Cand w = bound.get();
+        return w != null && baseScore(i, totalK) - w.p1 > 1e-9 * (1 + Math.abs(w.p1));
     }
 
     /** Largest linear-key value a subset may have and still enter (infinite unless the bound is a good blend). */
@@ -394,9 +498,15 @@ public final class BlendSearch {
         }
 
         void phase(int k, AtomicInteger next, AtomicLong done, long total, ProgressListener progress) {
-            int i;
-            while ((i = next.getAndIncrement()) <= n - k) {
+            int c;
+            while ((c = next.getAndIncrement()) <= n - k) {
                 checkCancel();
+                // Desirability: visit the least hazardous leaders first; their penalty only grows from there on.
+                int i = desirability && settings.pruning() ? n - k - c : c;
+                if (desirability && settings.pruning() && desirabilityExhausted(i, k + nFixed)) {
+                    progress.onProgress(done.addAndGet(choose(n - 1 - i, k - 1)), total);
+                    continue;
+                }
                 if (!settings.pruning()) {
                     brute(k, i);
                 } else {
@@ -448,7 +558,7 @@ public final class BlendSearch {
             double wz = tz - z[i];
             double ww = wx * wx + wy * wy + wz * wz;
             Cand w = bound.get();
-            double tau = distanceThreshold(w, 2 + nFixed);
+            double tau = distanceThreshold(w, 2 + nFixed, i);
             if (tau < 0) {
                 return;
             }
@@ -489,7 +599,7 @@ public final class BlendSearch {
                 double cy = wz * e1x - wx * e1z;
                 double cz = wx * e1y - wy * e1x;
                 Cand w = bound.get();
-                double tau = distanceThreshold(w, 3 + nFixed);
+                double tau = distanceThreshold(w, 3 + nFixed, i);
                 if (tau < 0) {
                     return;
                 }
@@ -557,7 +667,7 @@ public final class BlendSearch {
                     double az = wx * e2y - wy * e2x;
                     double k3 = nx * wx + ny * wy + nz * wz;
                     Cand w = bound.get();
-                    double tau = distanceThreshold(w, 4 + nFixed);
+                    double tau = distanceThreshold(w, 4 + nFixed, i);
                     if (tau < 0) {
                         return;
                     }
@@ -703,6 +813,15 @@ public final class BlendSearch {
 
         /** Offers a subset whose composition the closed form gave (interior of the bounded face). */
         private void offerDirect(int k, int i, int j, int kk, int l, double a, double b, double c, double d, double dist) {
+            if (desirability) {
+                int[] ix = k == 3 ? new int[] {i, j, kk} : new int[] {i, j, kk, l};
+                double[] psi = k == 3 ? new double[] {a, b, c} : new double[] {a, b, c, d};
+                Cand dc = desirabilityCand(ix, psi, dist);
+                if (dc != null) {
+                    offer(dc);
+                }
+                return;
+            }
             double haz = hazard[i] * a + hazard[j] * b + (k > 2 ? hazard[kk] * c : 0) + (k > 3 ? hazard[l] * d : 0);
             int totalK = k + nFixed;
             int group;
@@ -771,6 +890,13 @@ public final class BlendSearch {
                     dist = Math.sqrt(in.distanceSquared());
                 }
             }
+            if (desirability) {
+                Cand dc = desirabilityCand(java.util.Arrays.copyOf(idx, k), psi, dist);
+                if (dc != null) {
+                    offer(dc);
+                }
+                return;
+            }
             double haz = 0;
             for (int a = 0; a < k; a++) {
                 haz += hazard[idx[a]] * psi[a];
@@ -807,6 +933,27 @@ public final class BlendSearch {
                 }
             }
             offer(new Cand(java.util.Arrays.copyOf(idx, k), psi, dist, group, p1, p2, p3));
+        }
+
+        /** The desirability key of a subset at its closest composition, or null when it does not qualify (RED above the limit). */
+        private Cand desirabilityCand(int[] ix, double[] psi, double dist) {
+            if (dist > rho * (1 + 1e-12)) {
+                return null;
+            }
+            Desirability.Weights wt = settings.weights();
+            double worst = fixedPen;
+            double cost = fixedRelCost;
+            for (int a = 0; a < ix.length; a++) {
+                worst = Math.max(worst, pen[ix[a]]);
+                cost += scale * psi[a] * relPrice[ix[a]];
+            }
+            int totalK = ix.length + nFixed;
+            double score = wt.hazard() * worst + wt.components() * (totalK - 1) + wt.cost() * cost + wt.distance() * dist * redPerDist;
+            Cand w = bound.get();
+            if (w != null && compareTuple(0, score, dist, totalK, w) > 0) {
+                return null;
+            }
+            return new Cand(ix, psi, dist, 0, score, dist, totalK);
         }
 
         private void offer(Cand c) {
@@ -852,7 +999,7 @@ public final class BlendSearch {
         for (int a = 0; a < c.idx.length; a++) {
             double phi = s * c.psi[a];
             sum += phi;
-            comps.add(new BlendComponent(pool.free().get(c.idx[a]), phi));
+            comps.add(new BlendComponent(order.get(c.idx[a]), phi));
         }
         // Normalise away rounding so the fractions sum to exactly 1 within the blend tolerance.
         if (!comps.isEmpty() && Math.abs(sum - 1.0) > 1e-12) {
@@ -872,6 +1019,7 @@ public final class BlendSearch {
         double ra = target.ra(point);
         double red = ra / target.r0();
         double secondary = switch (settings.rankBy()) {
+            case DESIRABILITY -> c.p1;
             case RED -> Double.NaN;
             case COMPONENTS -> comps.size();
             case HAZARD -> comps.stream().mapToDouble(bc -> bc.fraction() * HazardScore.of(bc.solvent())).sum();

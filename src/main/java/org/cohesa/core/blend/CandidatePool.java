@@ -23,6 +23,12 @@ import org.cohesa.core.solvent.Solvent;
 public record CandidatePool(List<Solvent> free, List<BlendComponent> fixed, int librarySize, Map<String, List<String>> leftOut) {
 
     public static final String NO_HANSEN = "no Hansen parameters";
+    /** Reason of the safety-first default (no CMR). */
+    public static final String CMR = "carcinogen, mutagen or reproductive toxicant (H340/H350/H360)";
+    /** Reason of the safety-first default (no ICH class 1). */
+    public static final String ICH_CLASS_1 = "ICH Q3C class 1 (to be avoided)";
+    /** Reason for a solvent ICH Q3C does not list when a class limit is set. */
+    public static final String ICH_NOT_LISTED = "not listed in ICH Q3C (needs justification under Q3C; a class limit is set)";
     static final String WATER_CAS = "7732-18-5";
 
     public CandidatePool {
@@ -83,12 +89,30 @@ public record CandidatePool(List<Solvent> free, List<BlendComponent> fixed, int 
         if (c.exclude().contains(s)) {
             return "excluded by name";
         }
-        String fam = s.family() == null ? "" : s.family().toLowerCase(Locale.ROOT);
-        if (!fixedComponent && !c.families().isEmpty() && c.families().stream().noneMatch(f -> f.equalsIgnoreCase(fam))) {
+        // A solvent belongs to every family it has (chlorobenzene: aromatic and chlorinated); filters look at all of them.
+        List<String> fams = s.families().stream().map(f -> f.toLowerCase(Locale.ROOT)).toList();
+        if (!fixedComponent && !c.families().isEmpty() && c.families().stream().noneMatch(f -> fams.contains(f.toLowerCase(Locale.ROOT)))) {
             return "family not in the allowed families";
         }
-        if (c.excludeFamilies().stream().anyMatch(f -> f.equalsIgnoreCase(fam))) {
+        if (c.excludeFamilies().stream().anyMatch(f -> fams.contains(f.toLowerCase(Locale.ROOT)))) {
             return "family excluded";
+        }
+        if (c.noCmr() && s.isCmr()) {
+            return CMR;
+        }
+        BlendConstraints.More m = c.more();
+        if (m.noIchClass1() && s.ichClass() != null && s.ichClass() == 1) {
+            return ICH_CLASS_1;
+        }
+        for (HazardLimit h : m.healthLimits()) {
+            if (h.rejects(s)) {
+                return "as bad as or worse than the original on " + h.kind() + " (" + h.because() + ")";
+            }
+        }
+        for (ReactiveFlag f : m.excludeReactive()) {
+            if (f.applies(s)) {
+                return "reactive: " + f.label();
+            }
         }
         if (c.boilingMinC() != null || c.boilingMaxC() != null) {
             Double bp = s.boilingPointC();
@@ -110,15 +134,12 @@ public record CandidatePool(List<Solvent> free, List<BlendComponent> fixed, int 
         }
         if (c.maxIchClass() != null) {
             Integer ich = s.ichClass();
-            if (ich == null && !WATER_CAS.equals(s.cas())) {
-                return "not listed in ICH Q3C (a class limit is set)";
+            if (ich == null && !WATER_CAS.equals(s.cas()) && !m.ichUnlistedAllowed()) {
+                return ICH_NOT_LISTED;
             }
             if (ich != null && ich < c.maxIchClass()) {
                 return "ICH Q3C class of greater concern than allowed";
             }
-        }
-        if (c.noCmr() && s.isCmr()) {
-            return "carcinogen, mutagen or reproductive toxicant (H340/H350/H360)";
         }
         if ((c.maxCost() != null || rankBy == RankBy.COST) && s.pricePerLitre() == null) {
             return "no price entered (needed for cost)";

@@ -4,11 +4,17 @@ import java.util.Locale;
 import org.cohesa.core.InvalidInputException;
 
 /**
- * What decides between blends after solvency. RED always comes first: with {@link #RED} the list is
- * ordered by RED alone (ties: fewer components, then lower hazard score); with any other key, blends that
- * reach the "good" region RED ≤ limit come first, ordered by that key, and the rest follow ordered by RED.
+ * What decides between blends after solvency. With {@link #DESIRABILITY} (the default) only blends with
+ * RED ≤ limit qualify and one documented score orders them; with {@link #RED} the list is ordered by RED alone
+ * (ties: fewer components, then lower hazard score); with any other key, blends that reach the "good" region
+ * RED ≤ limit come first, ordered by that key, and the rest follow ordered by RED.
  */
 public enum RankBy {
+    /**
+     * The default: among blends with RED ≤ the limit only (the rest are not suggested), the lowest
+     * {@link Desirability} score first (hazard of the worst component, components, cost, margin).
+     */
+    DESIRABILITY,
     /** Closest to the centre of the target sphere first. */
     RED,
     /** Lowest volume-fraction-weighted {@link HazardScore} first. */
@@ -29,7 +35,7 @@ public enum RankBy {
                 }
             }
         }
-        throw new InvalidInputException(field, String.valueOf(text), "choose one of red, hazard, cost, components, evaporation");
+        throw new InvalidInputException(field, String.valueOf(text), "choose one of desirability, red, hazard, cost, components, evaporation");
     }
 
     public String word() {

@@ -1,0 +1,208 @@
+package org.cohesa.core.blend;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.Objects;
+import org.cohesa.core.InvalidInputException;
+import org.cohesa.core.solvent.BlendComponent;
+import org.cohesa.core.solvent.Solvent;
+
+/**
+ * The one documented desirability that orders qualifying suggestions (RED ≤ the limit and every constraint
+ * met); lower is better:
+ *
+ * <pre>
+ *   score = w_hazard · max_i penalty(solvent i)          (worst component, {@link HazardPenalty})
+ *         + w_components · (k − 1)                       (k components)
+ *         + w_cost · Σ φᵢ priceᵢ / median price           (only solvents with an entered price count)
+ *         + w_distance · RED                             (margin from the surface; tie-breaker)
+ * </pre>
+ *
+ * A blend carries the hazards of its worst component: GHS mixture classification takes every ingredient
+ * above its generic concentration limit (0.1–0.3 % for CMR, 1–10 % for most health classes; UN GHS Rev. 10
+ * ch. 3, from memory), and the search adds nothing below 5 %, so each component brings its hazards with it.
+ * Each subset's composition is the one closest to the sphere centre (the largest margin), so the score is a
+ * function of the subset alone and the search can bound it exactly. Weights and their reasons: docs/methods.md.
+ */
+public final class Desirability {
+
+    private Desirability() {
+    }
+
+    /**
+     * @param hazard     points per hazard point of the worst component
+     * @param components points per component beyond the first
+     * @param cost       points per "one median price per litre"
+     * @param distance   points per unit of RED
+     */
+    public record Weights(double hazard, double components, double cost, double distance) {
+        public Weights {
+            for (double w : new double[] {hazard, components, cost, distance}) {
+                if (!(w >= 0) || !Double.isFinite(w) || w > 1000) {
+                    throw new IllegalArgumentException("weights must be numbers from 0 to 1000, got " + w);
+                }
+            }
+        }
+
+        /** "hazard 1, components 2, cost 1, distance 1". */
+        public String describe() {
+            return "hazard " + HazardPenalty.fmt(hazard) + ", components " + HazardPenalty.fmt(components) + ", cost "
+                    + HazardPenalty.fmt(cost) + ", distance " + HazardPenalty.fmt(distance);
+        }
+    }
+
+    /** What the user leans towards; each preset is a set of weights (docs/methods.md gives the reasons). */
+    public enum Preference {
+        /** The default: no CMR (a constraint), then fewer components, then lower hazard, cost, margin. */
+        BALANCED(new Weights(1, 2, 1, 1)),
+        /** Hazard counts twice, an extra component half as much. */
+        SAFETY(new Weights(2, 1, 0.5, 1)),
+        /** Each extra component costs as much as a CMR-suspect statement: singles and pairs first. */
+        SIMPLICITY(new Weights(1, 6, 1, 1)),
+        /** Price dominates (needs prices). */
+        COST(new Weights(1, 2, 5, 1)),
+        /** Closest to the centre first, hazard and components only break near-ties. */
+        CLOSENESS(new Weights(0.25, 1, 0.25, 10));
+
+        private final Weights weights;
+
+        Preference(Weights w) {
+            this.weights = w;
+        }
+
+        public Weights weights() {
+            return weights;
+        }
+
+        public String word() {
+            return name().toLowerCase(Locale.ROOT);
+        }
+
+        public static Preference parse(String field, String text) {
+            for (Preference p : values()) {
+                if (text != null && p.word().equals(text.strip().toLowerCase(Locale.ROOT))) {
+                    return p;
+                }
+            }
+            throw new InvalidInputException(field, String.valueOf(text), "choose one of safety, simplicity, cost, closeness (or balanced, the default)");
+        }
+    }
+
+    /** Default weights (the balanced preference). */
+    public static final Weights DEFAULT = Preference.BALANCED.weights();
+
+    /**
+     * Parses "hazard=1,components=2" over a base set of weights (weights not named keep their base value).
+     *
+     * @throws InvalidInputException naming the field and the bad part
+     */
+    public static Weights parseWeights(String field, String text, Weights base) {
+        double[] w = {base.hazard(), base.components(), base.cost(), base.distance()};
+        String[] names = {"hazard", "components", "cost", "distance"};
+        for (String part : text.split(",")) {
+            String p = part.strip();
+            if (p.isEmpty()) {
+                continue;
+            }
+            int eq = p.indexOf('=');
+            if (eq <= 0) {
+                throw new InvalidInputException(field, text, "write NAME=NUMBER pairs, e.g. hazard=1,components=2,cost=1,distance=1");
+            }
+            String key = p.substring(0, eq).strip().toLowerCase(Locale.ROOT);
+            int idx = -1;
+            for (int i = 0; i < names.length; i++) {
+                if (names[i].equals(key)) {
+                    idx = i;
+                }
+            }
+            if (idx < 0) {
+                throw new InvalidInputException(field, p, "unknown weight '" + key + "'; weights are hazard, components, cost, distance");
+            }
+            double v;
+            try {
+                v = Double.parseDouble(p.substring(eq + 1).strip());
+            } catch (NumberFormatException e) {
+                throw new InvalidInputException(field, p, "'" + p.substring(eq + 1).strip() + "' is not a number");
+            }
+            if (!(v >= 0) || v > 1000) {
+                throw new InvalidInputException(field, p, "a weight must lie from 0 to 1000");
+            }
+            w[idx] = v;
+        }
+        return new Weights(w[0], w[1], w[2], w[3]);
+    }
+
+    /** Median price per litre of the solvents that have one, or NaN when none has. */
+    public static double referencePrice(List<Solvent> solvents) {
+        double[] p = solvents.stream().map(Solvent::pricePerLitre).filter(Objects::nonNull).mapToDouble(Double::doubleValue).sorted().toArray();
+        if (p.length == 0) {
+            return Double.NaN;
+        }
+        double m = p.length % 2 == 1 ? p[p.length / 2] : (p[p.length / 2 - 1] + p[p.length / 2]) / 2;
+        return m > 0 ? m : Double.NaN;
+    }
+
+    /**
+     * The score of a blend and the terms that make it up, in words.
+     *
+     * @param components the blend
+     * @param red        its RED
+     * @param redLimit   the qualifying limit
+     * @param weights    the weights
+     * @param refPrice   median price per litre (NaN: no prices, the cost term is 0)
+     */
+    public static Explanation explain(List<BlendComponent> components, double red, double redLimit, Weights weights, double refPrice) {
+        List<String> why = new ArrayList<>();
+        why.add(String.format(Locale.ROOT, "inside with margin %.2f (RED %.2f ≤ %.2f)", Math.max(0, 1 - red), red, redLimit));
+        Solvent worst = null;
+        HazardPenalty worstP = null;
+        for (BlendComponent c : components) {
+            HazardPenalty p = HazardPenalty.of(c.solvent());
+            if (worstP == null || p.points() > worstP.points()) {
+                worst = c.solvent();
+                worstP = p;
+            }
+        }
+        double hazard = worstP == null ? 0 : worstP.points();
+        List<String> shown = worstP == null ? List.of() : worstP.terms().stream().filter(t -> !t.endsWith(" 0")).toList();
+        String who = components.size() == 1 ? "" : "worst component " + worst.name() + ": ";
+        why.add(hazard == 0 ? (components.size() == 1 ? "no hazard terms" : "no component has hazard terms")
+                : who + "hazard " + HazardPenalty.fmt(hazard) + " (" + String.join(", ", shown) + ")");
+        int k = components.size();
+        why.add(k + (k == 1 ? " component" : " components"));
+        double cost = 0;
+        boolean allPriced = components.stream().allMatch(c -> c.solvent().pricePerLitre() != null);
+        if (Double.isNaN(refPrice)) {
+            why.add("no prices entered");
+        } else {
+            double price = components.stream().filter(c -> c.solvent().pricePerLitre() != null)
+                    .mapToDouble(c -> c.fraction() * c.solvent().pricePerLitre()).sum();
+            cost = price / refPrice;
+            why.add(String.format(Locale.ROOT, "price %.2f/L%s", price, allPriced ? "" : " (some components without a price)"));
+        }
+        double score = weights.hazard() * hazard + weights.components() * (k - 1) + weights.cost() * cost + weights.distance() * red;
+        why.add(String.format(Locale.ROOT, "score %.2f", score));
+        return new Explanation(score, hazard, worst == null ? null : worst.name(), why);
+    }
+
+    /**
+     * @param score         the desirability score (lower is better)
+     * @param hazard        the worst component's hazard penalty
+     * @param worstSolvent  which component that is
+     * @param why           the terms in words, for the table and JSON
+     */
+    public record Explanation(double score, double hazard, String worstSolvent, List<String> why) {
+        public Explanation {
+            why = List.copyOf(why);
+        }
+    }
+
+    /** Penalties of many solvents at once (search set-up). */
+    static double[] penalties(List<Solvent> solvents) {
+        double[] p = new double[solvents.size()];
+        Arrays.setAll(p, i -> HazardPenalty.of(solvents.get(i)).points());
+        return p;
+    }
+}

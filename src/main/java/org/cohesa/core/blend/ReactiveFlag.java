@@ -1,0 +1,81 @@
+package org.cohesa.core.blend;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.cohesa.core.InvalidInputException;
+import org.cohesa.core.solvent.Solvent;
+
+/**
+ * Process-suitability flags: solvents that take part in reactions a reaction or extraction solvent must not
+ * (common practice, no source). Carboxylic acids protonate bases and esterify; amines (and pyridines) are bases and
+ * nucleophiles; nitroalkanes are energetic and form explosive salts with bases; peroxide formers (EUH019, the
+ * library's flag) concentrate explosive peroxides on distillation.
+ */
+public enum ReactiveFlag {
+    ACID("carboxylic acid"),
+    AMINE("amine or pyridine base"),
+    NITRO("nitroalkane"),
+    PEROXIDE("peroxide former");
+
+    private final String label;
+
+    ReactiveFlag(String label) {
+        this.label = label;
+    }
+
+    public String label() {
+        return label;
+    }
+
+    public String word() {
+        return name().toLowerCase(Locale.ROOT);
+    }
+
+    /** True when the flag applies to the solvent (family keys "acid" and "amine", a nitro group in the structure, the peroxide flag). */
+    public boolean applies(Solvent s) {
+        return switch (this) {
+            case ACID -> s.inFamily("acid") || s.inFamily("carboxylic_acid") || s.name().toLowerCase(Locale.ROOT).endsWith(" acid");
+            case AMINE -> s.inFamily("amine");
+            case NITRO -> (s.smiles() != null && (s.smiles().contains("[N+](=O)[O-]") || s.smiles().contains("N(=O)=O")))
+                    || s.name().toLowerCase(Locale.ROOT).startsWith("nitro");
+            case PEROXIDE -> s.peroxideFormer();
+        };
+    }
+
+    /** The flags that apply to a solvent. */
+    public static List<ReactiveFlag> of(Solvent s) {
+        List<ReactiveFlag> out = new ArrayList<>();
+        for (ReactiveFlag f : values()) {
+            if (f.applies(s)) {
+                out.add(f);
+            }
+        }
+        return out;
+    }
+
+    /** "acid", "amine", "nitro", "peroxide" or "all". */
+    public static List<ReactiveFlag> parse(String field, String text) {
+        List<ReactiveFlag> out = new ArrayList<>();
+        for (String p : text.split(",")) {
+            String w = p.strip().toLowerCase(Locale.ROOT);
+            if (w.isEmpty()) {
+                continue;
+            }
+            if (w.equals("all")) {
+                return List.of(values());
+            }
+            ReactiveFlag f = switch (w) {
+                case "acid", "acids", "carboxylic-acid" -> ACID;
+                case "amine", "amines", "base" -> AMINE;
+                case "nitro", "nitroalkane", "nitroalkanes" -> NITRO;
+                case "peroxide", "peroxides", "peroxide-former" -> PEROXIDE;
+                default -> throw new InvalidInputException(field, p.strip(), "choose from acid, amine, nitro, peroxide, all");
+            };
+            if (!out.contains(f)) {
+                out.add(f);
+            }
+        }
+        return out;
+    }
+}
