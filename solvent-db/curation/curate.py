@@ -234,7 +234,7 @@ def molar_mass(formula):
 SUBGROUP_ATOMS = {
     1: "CH3", 2: "CH2", 3: "CH", 4: "C", 6: "C2H2", 7: "C2H2", 8: "C2H", 9: "CH", 10: "C",
     11: "C2H3", 12: "C2H2", 13: "C2H", 14: "OH", 15: "CH4O", 16: "H2O", 21: "C2H3O2", 22: "C2H2O2",
-    24: "CH3O", 25: "CH2O", 26: "CHO", 27: "CH2O", 35: "CH2N", 54: "CH3NO2", 69: "Cl", 74: "CF3",
+    24: "CH3O", 25: "CH2O", 26: "CHO", 27: "CH2O", 35: "CH2N", 54: "CH3NO2", 55: "CH2NO2", 56: "CHNO2", 69: "Cl", 74: "CF3",
     77: "CO2", 100: "C2H5O2", 101: "C2H4O2",
 }
 
