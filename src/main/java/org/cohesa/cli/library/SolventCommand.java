@@ -5,6 +5,7 @@ import org.cohesa.cli.Output;
 import org.cohesa.cli.TextTable;
 
 import java.util.Map;
+import org.cohesa.core.coverage.Provenance;
 import org.cohesa.core.solvent.Solvent;
 import org.cohesa.store.SolventFields;
 import org.cohesa.store.SourceCatalog;
@@ -27,18 +28,21 @@ public final class SolventCommand extends CohesaSubcommand {
             return;
         }
         Map<String, String> row = SolventFields.toRow(s);
-        TextTable t = new TextTable("property", "value", "source");
+        TextTable t = new TextTable("property", "value", "source", "basis");
         for (String col : SolventFields.VALUES) {
             String v = row.get(col);
             if (v == null || v.isEmpty()) {
                 continue;
             }
-            t.row(col, v, s.sources().getOrDefault(sourceGroup(col), ""));
+            String key = s.sources().get(sourceGroup(col));
+            t.row(col, v, key == null ? "" : key, Provenance.of(key, s.userEntry()).label());
         }
         if (s.pricePerLitre() != null) {
-            t.row("price_per_litre", Output.fmt(s.pricePerLitre(), 2), "your entry");
+            t.row("price_per_litre", Output.fmt(s.pricePerLitre(), 2), "your entry", Provenance.USER.label());
         }
         t.print(out());
+        SolventView.vapourAt25C(s).ifPresent(v -> out().println("vapour pressure at 25 °C: " + Output.fmt(v.kilopascal(), 3) + " kPa — "
+                + v.basis()));
         if (!s.hasHansen()) {
             out().println("No published Hansen parameters in the library: kept for its safety data, left out of searches.");
         }

@@ -2,7 +2,9 @@ package org.cohesa.cli.library;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.cohesa.core.coverage.Provenance;
 import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.solvent.VapourPressure;
 import org.cohesa.store.SolventFields;
 import org.cohesa.store.SourceCatalog;
 
@@ -10,6 +12,25 @@ import org.cohesa.store.SourceCatalog;
 public final class SolventView {
 
     private SolventView() {
+    }
+
+    /**
+     * The source of one property group: its key, whether the value is measured, estimated, from memory, derived or
+     * the user's ({@link Provenance}), and the citation of {@code solvent-db/SOURCES.md}.
+     */
+    record Source(String key, String basis, String citation) {
+    }
+
+    /** The vapour pressure at 25 °C and what it rests on there (a correlation inside its range, extrapolated, or an estimate). */
+    record VapourAt25C(double kilopascal, String kind, String basis) {
+    }
+
+    static java.util.Optional<VapourAt25C> vapourAt25C(Solvent s) {
+        return VapourPressure.of(s).map(vp -> {
+            VapourPressure.Basis b = vp.methodAt(298.15);
+            return new VapourAt25C(Math.round(vp.pressurePa(298.15) / 1e3 * 1e4) / 1e4, b.kind().name().toLowerCase(java.util.Locale.ROOT),
+                    b.label());
+        });
     }
 
     public static Map<String, Object> json(Solvent s, SourceCatalog catalog) {
@@ -39,13 +60,10 @@ public final class SolventView {
         m.put("price_per_litre", s.pricePerLitre());
         m.put("user_entry", s.userEntry());
         Map<String, Object> sources = new LinkedHashMap<>();
-        s.sources().forEach((group, key) -> {
-            Map<String, Object> src = new LinkedHashMap<>();
-            src.put("key", key);
-            src.put("citation", catalog.citation(key).orElse(null));
-            sources.put(group, src);
-        });
+        s.sources().forEach((group, key) -> sources.put(group, new Source(key, Provenance.of(key, s.userEntry()).label(),
+                catalog.citation(key).orElse(null))));
         m.put("sources", sources);
+        m.put("vapour_pressure_at_25c", vapourAt25C(s).orElse(null));
         m.put("note", s.note());
         if (!s.hasHansen()) {
             m.put("searchable", false);

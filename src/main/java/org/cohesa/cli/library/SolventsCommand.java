@@ -16,6 +16,9 @@ import java.util.List;
 import java.util.Map;
 import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.RowError;
+import org.cohesa.core.coverage.LibraryCoverage;
+import org.cohesa.core.coverage.PropertyCoverage;
+import org.cohesa.core.coverage.WorkflowCoverage;
 import org.cohesa.core.solvent.Solvent;
 import org.cohesa.store.SolventCsv;
 import org.cohesa.store.SolventFields;
@@ -36,8 +39,16 @@ public final class SolventsCommand extends CohesaSubcommand {
     @Option(names = "--mine", description = "Only your own entries.")
     boolean mine;
 
+    @Option(names = "--coverage", description = "Per property: how many solvents have a value, and how many of those are measured, "
+            + "estimated or recalled from memory; and how many solvents with Hansen parameters can be dried and flash-point-checked.")
+    boolean coverage;
+
     @Override
     protected void execute() {
+        if (coverage) {
+            printCoverage();
+            return;
+        }
         List<Solvent> hits = ctx().library().search(text).stream().filter(s -> !mine || s.userEntry()).toList();
         if (json()) {
             SourceCatalog cat = SourceCatalog.bundled();
@@ -54,6 +65,43 @@ public final class SolventsCommand extends CohesaSubcommand {
         t.print(out());
         out().println(hits.size() + " of " + ctx().library().size() + " solvents");
     }
+
+    private void printCoverage() {
+        List<Solvent> all = ctx().library().all().stream().filter(s -> !mine || s.userEntry())
+                .filter(s -> text == null || ctx().library().search(text).contains(s)).toList();
+        Solvent partner = ctx().library().all().stream().filter(s -> s.name().equals(COVERAGE_PARTNER)).findFirst()
+                .or(() -> ctx().library().all().stream().filter(s -> s.flashPointC() != null && s.vapourPressure() != null).findFirst())
+                .orElseThrow(() -> new InvalidInputException("--coverage", "-", "the library has no solvent with a flash point and a vapour pressure"));
+        LibraryCoverage c = LibraryCoverage.of(all, partner);
+        if (json()) {
+            Output.json(out(), CoverageReport.of(c));
+            return;
+        }
+        TextTable t = new TextTable("property", "have", "of", "%", "measured", "estimated", "from memory", "derived", "yours");
+        for (PropertyCoverage p : c.properties()) {
+            t.row(p.label(), p.have(), p.solvents(), Output.fmt(100 * p.fraction(), 0), p.measured(), p.estimated(), p.memory(), p.derived(),
+                    p.user());
+        }
+        t.print(out());
+        Map<String, Integer> vp = c.vapourPressureAt25C();
+        out().println("vapour pressure at 25 °C: " + vp.get("correlation") + " from a published correlation inside its range, "
+                + vp.get("extrapolated") + " extrapolated outside it, " + vp.get("estimate") + " estimated, " + vp.get("none") + " none");
+        WorkflowCoverage w = c.workflows();
+        out().println("of " + w.hansenSolvents() + " solvents with Hansen parameters: drying path computable for " + w.dryingComputable()
+                + " (" + Output.fmt(100 * w.dryingFraction(), 1) + " %), blend flash point for " + w.blendFlashPointComputable() + " ("
+                + Output.fmt(100 * w.blendFlashPointFraction(), 1) + " %, tested as 50/50 with " + w.partner() + ")");
+        if (!w.notDrying().isEmpty()) {
+            out().println("no drying path: " + String.join(", ", w.notDrying().stream().map(n -> n.split(":")[0]).toList()));
+        }
+        if (!w.notFlashPoint().isEmpty()) {
+            out().println("no blend flash point: " + String.join(", ", w.notFlashPoint().stream().map(n -> n.split(":")[0]).toList()));
+        }
+        out().println("measured = from a published table or paper; estimated = an estimate (error in docs/methods.md); "
+                + "from memory = recalled, not yet checked; derived = computed from other values. Sources: solvent-db/SOURCES.md.");
+    }
+
+    /** The second component of the 50/50 test blend of the coverage's flash-point check. */
+    static final String COVERAGE_PARTNER = "n-butyl acetate";
 
     /** {@code cohesa solvents add}: a user entry from options. */
     @Command(name = "add", description = "Add your own solvent. Any column of the CSV format can be set with --set column=value.")
