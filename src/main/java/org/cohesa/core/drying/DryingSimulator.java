@@ -24,7 +24,7 @@ import org.cohesa.core.solvent.Solvent;
  * Simulates the isothermal evaporation of a liquid blend from an open film and follows its composition,
  * Hansen parameters and RED to a target along the way.
  *
- * <p>Rate equations: {@link EvaporationRates} (duᵢ/dτ = −cᵢxᵢγᵢ), activity coefficients from
+ * <p>Rate equations: {@link EvaporationRates} (duᵢ/dτ ∝ xᵢγᵢPᵢˢᵃᵗ at the common, evaporatively cooled film temperature), activity coefficients from
  * {@link ActivityModels#choose} (original UNIFAC, Hansen–Flory–Huggins fallback, or ideal). Integrated with
  * Commons Math's adaptive Dormand–Prince 8(5,3) method (Dormand, J. R., Prince, P. J., <i>J. Comput. Appl.
  * Math.</i> 6 (1980) 19; Hairer, Nørsett, Wanner, <i>Solving Ordinary Differential Equations I</i>, 2nd ed.,
@@ -58,6 +58,11 @@ public final class DryingSimulator {
     }
 
     public static DryingPath simulate(DryingRequest request) {
+        return simulate(request, EvaporationRates.Calibration.FITTED);
+    }
+
+    /** With another evaporation calibration (for comparisons and the tests of the calibration). */
+    static DryingPath simulate(DryingRequest request, EvaporationRates.Calibration calibration) {
         Blend blend = request.blend();
         List<Solvent> solvents = blend.solvents();
         int k = solvents.size();
@@ -71,10 +76,10 @@ public final class DryingSimulator {
                 }
             }
         }
-        EvaporationRates rates = EvaporationRates.of(solvents, kelvin);
+        EvaporationRates rates = EvaporationRates.of(solvents, kelvin, calibration);
         ActivityModel model = ActivityModels.choose(solvents, request.ideal());
         double[] v = org.cohesa.core.activity.Composition.molarVolumes(solvents);
-        Film film = new Film(rates.constants(), v, model, kelvin);
+        Film film = new Film(rates, v, model, kelvin);
 
         double[] y = new double[2 * k];
         double[] initial = blend.fractions();
@@ -304,19 +309,19 @@ public final class DryingSimulator {
 
     /** The rate equations; state = remaining volumes u (k), then evaporated volumes e (k), both per initial volume. */
     private static final class Film implements FirstOrderDifferentialEquations {
-        private final double[] c;
+        private final EvaporationRates rates;
         private final double[] v;
         private final ActivityModel model;
         private final double kelvin;
         private final int k;
         boolean[] active;
 
-        Film(double[] c, double[] v, ActivityModel model, double kelvin) {
-            this.c = c;
+        Film(EvaporationRates rates, double[] v, ActivityModel model, double kelvin) {
+            this.rates = rates;
             this.v = v;
             this.model = model;
             this.kelvin = kelvin;
-            this.k = c.length;
+            this.k = v.length;
         }
 
         @Override
@@ -341,11 +346,10 @@ public final class DryingSimulator {
             for (int i = 0; i < k; i++) {
                 x[i] /= total;
             }
-            double[] gamma = model.gamma(x, kelvin);
+            double[] rate = rates.rates(x, model.gamma(x, kelvin), active);
             for (int i = 0; i < k; i++) {
-                double rate = active[i] ? c[i] * x[i] * gamma[i] : 0;
-                yDot[i] = -rate;
-                yDot[k + i] = rate;
+                yDot[i] = -rate[i];
+                yDot[k + i] = rate[i];
             }
         }
     }
