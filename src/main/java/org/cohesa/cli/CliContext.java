@@ -62,7 +62,11 @@ public final class CliContext implements AutoCloseable {
         }
         try (InputStream in = Files.newInputStream(abs)) {
             byte[] head = in.readNBytes(SQLITE_MAGIC.length);
-            if (head.length > 0 && !Arrays.equals(head, SQLITE_MAGIC)) {
+            if (head.length == 0) {
+                throw new InvalidInputException("--db", file.toString(), "is an empty file (0 bytes), not a Cohesa database;"
+                        + " restore it from a backup, or remove it to start a new one");
+            }
+            if (!Arrays.equals(head, SQLITE_MAGIC)) {
                 throw new InvalidInputException("--db", file.toString(), "is not a Cohesa database (not an SQLite file)");
             }
         } catch (IOException e) {

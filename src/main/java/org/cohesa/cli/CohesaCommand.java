@@ -83,6 +83,8 @@ public final class CohesaCommand implements Runnable {
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        // "@name" must stay text: expanding it would file the contents of a file called "name" (e.g. --author @alice)
+        cl.setExpandAtFiles(false);
         // 1e400 parses as Infinity and NaN as a number; neither is a value anyone means
         CommandLine.ITypeConverter<Double> finite = CohesaCommand::finiteNumber;
         cl.registerConverter(Double.class, finite);

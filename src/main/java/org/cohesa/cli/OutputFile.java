@@ -56,7 +56,17 @@ public final class OutputFile {
     public static void write(String field, Path target, boolean overwrite, Writing writing) throws IOException {
         check(field, target, overwrite);
         Path abs = target.toAbsolutePath();
-        Path tmp = Files.createTempFile(abs.getParent(), "." + abs.getFileName(), ".part");
+        Path tmp;
+        try {
+            tmp = Files.createTempFile(abs.getParent(), "." + abs.getFileName(), ".part");
+        } catch (IOException e) {
+            String why = e instanceof FileSystemException fs && fs.getReason() != null ? fs.getReason() : String.valueOf(e.getMessage());
+            if (why.toLowerCase(Locale.ROOT).contains("no space")) {
+                throw new IOException("the disk is full: " + target + " was not written", e);
+            }
+            throw new InvalidInputException(field, target.toString(), "cannot create a file in " + abs.getParent() + " ("
+                    + why.toLowerCase(Locale.ROOT) + ")");
+        }
         boolean done = false;
         try {
             try (OutputStream out = Files.newOutputStream(tmp)) {

@@ -17,7 +17,8 @@ public final class TextTable {
     public TextTable row(Object... cells) {
         List<String> r = new ArrayList<>();
         for (Object c : cells) {
-            r.add(c == null ? "-" : c.toString());
+            // stored text may hold direction overrides or control characters: shown escaped, never interpreted
+            r.add(c == null ? "-" : org.cohesa.core.TextLimits.visible(c.toString()));
         }
         rows.add(r);
         return this;

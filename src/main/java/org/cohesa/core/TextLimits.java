@@ -28,6 +28,33 @@ public final class TextLimits {
         return value == null ? null : check(field, value, MAX_TEXT);
     }
 
+    /**
+     * Text as it may be shown in a terminal table: control characters (other than tab and line breaks) and format
+     * characters such as right-to-left overrides are written as {@code \\uXXXX}, so stored text can never reorder or
+     * hide what is printed around it.
+     */
+    public static String visible(String value) {
+        if (value == null) {
+            return null;
+        }
+        StringBuilder b = null;
+        for (int i = 0; i < value.length(); i++) {
+            char c = value.charAt(i);
+            boolean hidden = c != '\t' && c != '\n' && (Character.isISOControl(c) || Character.getType(c) == Character.FORMAT);
+            if (hidden && b == null) {
+                b = new StringBuilder(value.length() + 8).append(value, 0, i);
+            }
+            if (b != null) {
+                if (hidden) {
+                    b.append(String.format(java.util.Locale.ROOT, "\\u%04X", (int) c));
+                } else {
+                    b.append(c);
+                }
+            }
+        }
+        return b == null ? value : b.toString();
+    }
+
     private static String check(String field, String value, int max) {
         if (value.length() > max) {
             throw new InvalidInputException(field, value.substring(0, 40) + "…", "is longer than " + max + " characters");

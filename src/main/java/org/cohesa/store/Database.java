@@ -59,6 +59,7 @@ public final class Database implements AutoCloseable {
         } catch (IOException e) {
             throw new StoreException("cannot create the folder for the database " + file + ": " + e.getMessage(), e);
         }
+        requireNotEmptyFile(file);
         try {
             Connection c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath());
             try (Statement st = c.createStatement()) {
@@ -70,8 +71,34 @@ public final class Database implements AutoCloseable {
             Migrations.migrate(c);
             return new Database(file, c);
         } catch (SQLException e) {
-            throw new StoreException("cannot open the database " + file + ": " + e.getMessage(), e);
+            throw new StoreException("cannot open the database " + file + ": " + explain(e), e);
         }
+    }
+
+    /**
+     * A zero-length file is not an empty register: SQLite would take it as a new database and the register's history
+     * would silently start again (a truncated or replaced file looks exactly like this). It is refused instead.
+     */
+    static void requireNotEmptyFile(Path file) {
+        try {
+            if (Files.isRegularFile(file) && Files.size(file) == 0) {
+                throw new org.cohesa.core.InvalidInputException("database", file.toString(),
+                        "is an empty file (0 bytes), not a Cohesa database; restore it from a backup, or remove it to start a new one");
+            }
+        } catch (IOException e) {
+            throw new StoreException("cannot read the database " + file + ": " + e.getMessage(), e);
+        }
+    }
+
+    /** A database failure in plain words: a full disk is said to be one (SQLite reports it under several codes). */
+    static String explain(SQLException e) {
+        String m = String.valueOf(e.getMessage());
+        String upper = m.toUpperCase(java.util.Locale.ROOT);
+        if (upper.contains("SQLITE_FULL") || upper.contains("SQLITE_IOERR_SHMSIZE") || upper.contains("DATABASE OR DISK IS FULL")
+                || upper.contains("NO SPACE LEFT")) {
+            return "the disk is full (" + m.replaceAll("\\s+", " ").strip() + ")";
+        }
+        return m;
     }
 
     public Path file() {
@@ -114,7 +141,7 @@ public final class Database implements AutoCloseable {
                 throw e;
             }
         } catch (SQLException e) {
-            throw new StoreException("database write failed, nothing was changed: " + e.getMessage(), e);
+            throw new StoreException("database write failed, nothing was changed: " + explain(e), e);
         }
     }
 
@@ -135,7 +162,7 @@ public final class Database implements AutoCloseable {
                 }
             }
         } catch (SQLException e) {
-            throw new StoreException("database read failed: " + e.getMessage(), e);
+            throw new StoreException("database read failed: " + explain(e), e);
         }
     }
 
@@ -144,18 +171,43 @@ public final class Database implements AutoCloseable {
      * (a read transaction: other processes keep reading and writing meanwhile). The target must not exist.
      */
     public synchronized void backupTo(Path target) {
-        if (Files.exists(target)) {
+        Path abs = target.toAbsolutePath();
+        Path parent = abs.getParent();
+        if (Files.isDirectory(abs)) {
+            throw new org.cohesa.core.InvalidInputException("FILE", target.toString(), "is a folder; give a new file name inside it");
+        }
+        if (Files.exists(abs, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
             throw new org.cohesa.core.InvalidInputException("FILE", target.toString(), "already exists; choose a new file name");
         }
-        Path parent = target.toAbsolutePath().getParent();
-        if (parent != null && !Files.isDirectory(parent)) {
+        if (parent == null || !Files.isDirectory(parent)) {
             throw new org.cohesa.core.InvalidInputException("FILE", target.toString(), "its folder does not exist");
         }
-        try (java.sql.PreparedStatement ps = connection.prepareStatement("VACUUM INTO ?")) {
-            ps.setString(1, target.toAbsolutePath().toString());
-            ps.execute();
+        // the copy is written under a temporary name and moved into place only when complete: a failure (a full disk)
+        // leaves no file behind that would block the retry
+        Path tmp;
+        try {
+            tmp = Files.createTempFile(parent, "." + abs.getFileName(), ".part");
+            Files.delete(tmp); // VACUUM INTO wants to create the file itself
+        } catch (IOException e) {
+            throw new org.cohesa.core.InvalidInputException("FILE", target.toString(), "cannot create a file in " + parent + ": "
+                    + (e instanceof java.nio.file.FileSystemException fs && fs.getReason() != null ? fs.getReason() : e.getMessage()));
+        }
+        try {
+            try (java.sql.PreparedStatement ps = connection.prepareStatement("VACUUM INTO ?")) {
+                ps.setString(1, tmp.toString());
+                ps.execute();
+            }
+            Files.move(tmp, abs, java.nio.file.StandardCopyOption.ATOMIC_MOVE);
         } catch (SQLException e) {
-            throw new StoreException("backup to " + target + " failed: " + e.getMessage(), e);
+            throw new StoreException("backup to " + target + " failed, no file was written: " + explain(e), e);
+        } catch (IOException e) {
+            throw new StoreException("backup to " + target + " failed, no file was written: " + e.getMessage(), e);
+        } finally {
+            try {
+                Files.deleteIfExists(tmp);
+            } catch (IOException ignored) {
+                // a leftover temporary file is hidden and named .part; nothing else to do
+            }
         }
     }
 

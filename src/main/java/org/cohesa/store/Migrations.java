@@ -90,7 +90,41 @@ public final class Migrations {
                     "ALTER TABLE solvent DROP COLUMN antoine_tmin_k",
                     "ALTER TABLE solvent DROP COLUMN antoine_tmax_k",
                     // rebuild the bundled rows from the shipped table on the next start, with the new columns filled
-                    "DELETE FROM meta WHERE key = 'bundled_solvents_sha256'")));
+                    "DELETE FROM meta WHERE key = 'bundled_solvents_sha256'")),
+            new Migration(6, "register: the acting account and an HMAC on every event and on the head; record 0 holds the register's"
+                    + " own settings (the four-eyes rule)", List.of(
+                    // SQLite cannot relax a CHECK in place: the event table is rebuilt with every row and position kept
+                    "DROP TRIGGER IF EXISTS record_event_append_only_update",
+                    "DROP TRIGGER IF EXISTS record_event_append_only_delete",
+                    "CREATE TABLE record_event_v6 ("
+                            + " id INTEGER PRIMARY KEY AUTOINCREMENT,"
+                            + " record_id INTEGER NOT NULL CHECK (record_id >= 0),"
+                            + " seq INTEGER NOT NULL CHECK (seq > 0),"
+                            + " kind TEXT NOT NULL,"
+                            + " payload TEXT NOT NULL,"
+                            + " actor TEXT NOT NULL,"
+                            + " account TEXT,"
+                            + " at TEXT NOT NULL,"
+                            + " prev_record_id INTEGER NOT NULL,"
+                            + " prev_seq INTEGER NOT NULL,"
+                            + " prev_hash TEXT NOT NULL,"
+                            + " hash TEXT NOT NULL UNIQUE,"
+                            + " mac TEXT,"
+                            + " UNIQUE (record_id, seq))",
+                    "INSERT INTO record_event_v6 (id, record_id, seq, kind, payload, actor, account, at, prev_record_id, prev_seq, prev_hash, hash, mac)"
+                            + " SELECT id, record_id, seq, kind, payload, actor, NULL, at, prev_record_id, prev_seq, prev_hash, hash, NULL"
+                            + " FROM record_event ORDER BY id",
+                    // positions are never reused: carry the old counter over (it may be above the highest stored id)
+                    "UPDATE sqlite_sequence SET seq = MAX(seq, COALESCE((SELECT seq FROM sqlite_sequence WHERE name = 'record_event'), 0))"
+                            + " WHERE name = 'record_event_v6'",
+                    "DROP TABLE record_event",
+                    "ALTER TABLE record_event_v6 RENAME TO record_event",
+                    "CREATE TRIGGER record_event_append_only_update BEFORE UPDATE ON record_event"
+                            + " BEGIN SELECT RAISE(ABORT, 'substitution record events are append-only'); END",
+                    "CREATE TRIGGER record_event_append_only_delete BEFORE DELETE ON record_event"
+                            + " BEGIN SELECT RAISE(ABORT, 'substitution record events are append-only'); END",
+                    "ALTER TABLE record_chain_head ADD COLUMN mac TEXT",
+                    "ALTER TABLE record_chain_head ADD COLUMN key_id TEXT")));
 
     private Migrations() {
     }

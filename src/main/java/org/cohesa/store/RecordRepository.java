@@ -1,6 +1,7 @@
 package org.cohesa.store;
 
 import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
@@ -8,80 +9,181 @@ import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.Clock;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
+import java.util.Locale;
 import java.util.Optional;
+import java.util.function.Consumer;
 import org.cohesa.core.InvalidInputException;
+import org.cohesa.core.TextLimits;
+import org.cohesa.core.records.Anchor;
+import org.cohesa.core.records.CanonicalJson;
 import org.cohesa.core.records.ChainHead;
 import org.cohesa.core.records.ChainReport;
 import org.cohesa.core.records.ChainVerifier;
 import org.cohesa.core.records.EventKind;
+import org.cohesa.core.records.FourEyesRule;
 import org.cohesa.core.records.RecordDraft;
 import org.cohesa.core.records.RecordEvent;
 import org.cohesa.core.records.RecordStatus;
+import org.cohesa.core.records.RegisterKey;
+import org.cohesa.core.records.StatusChange;
 import org.cohesa.core.records.SubstitutionRecord;
 
 /**
- * The register of substitution records: an append-only table of hash-chained events. Every write is
- * one transaction that reads the chain's newest hash, appends one event and moves the head note, so
- * concurrent writers (other processes included) queue on the database lock and never fork the chain.
+ * The register of substitution records: an append-only table of hash-chained, HMAC-sealed events in the local SQLite
+ * database or a shared PostgreSQL register ({@link RegisterDb}). Every write is one transaction that takes the
+ * register's write lock, reads the chain's newest event, appends one event and moves the head note, so concurrent
+ * writers (other processes included) queue and never fork the chain. Each event records the name typed and the acting
+ * account; the four-eyes rule (on unless the site switched it off, itself a sealed event) is checked in the same
+ * transaction as the write.
  */
 public final class RecordRepository {
 
-    private final Database db;
+    private final RegisterDb register;
     private final Clock clock;
+    private final Path keyFile;
 
     public RecordRepository(Database db) {
-        this(db, Clock.systemUTC());
+        this(new SqliteRegister(db), Clock.systemUTC(), null);
     }
 
     public RecordRepository(Database db, Clock clock) {
-        this.db = db;
+        this(new SqliteRegister(db), clock, null);
+    }
+
+    /**
+     * @param keyFile the register key file, or null for {@link RegisterKeyFile#defaultPath()}; a write creates it when
+     *                missing, a check without it says what it could not detect
+     */
+    public RecordRepository(RegisterDb register, Clock clock, Path keyFile) {
+        this.register = register;
         this.clock = clock;
+        this.keyFile = keyFile;
+    }
+
+    public RegisterDb register() {
+        return register;
+    }
+
+    public Path keyFile() {
+        return keyFile != null ? keyFile : RegisterKeyFile.defaultPath();
+    }
+
+    /** The register key if its file exists (checks never create one). */
+    public Optional<RegisterKey> key() {
+        return RegisterKeyFile.load("--key", keyFile());
+    }
+
+    private RegisterKey writeKey() {
+        return RegisterKeyFile.loadOrCreate("--key", keyFile());
     }
 
     /** Files a new record in draft; returns it as stored. */
     public SubstitutionRecord create(RecordDraft draft, String author) {
-        requireName("--author", author);
-        long id = db.inTransaction(c -> {
-            long next;
-            try (Statement st = c.createStatement(); ResultSet rs = st.executeQuery("SELECT MAX(COALESCE((SELECT MAX(record_id) FROM record_event), 0),"
-                         + " COALESCE((SELECT max_record_id FROM record_chain_head), 0)) + 1")) {
-                next = rs.next() ? rs.getLong(1) : 1;
-            }
-            append(c, next, 1, EventKind.CREATED, author, draft.toPayload());
+        String name = requireName("--author", author);
+        RegisterKey key = writeKey();
+        long id = register.write(c -> {
+            ChainHead head = head(c);
+            long next = Math.max(head.maxRecordId(), maxRecordId(c)) + 1;
+            append(c, head, next, 1, EventKind.CREATED, name, draft.toPayload(), key);
             return next;
         });
         return find(id).orElseThrow();
     }
 
     /**
-     * Moves a record to {@code next}; illegal moves and unknown records are refused and nothing is written.
-     * The check and the write share one transaction, so two people deciding at once cannot both win.
+     * Moves a record to {@code next}; illegal moves, unknown records and steps the four-eyes rule forbids are refused
+     * and nothing is written. The checks and the write share one transaction, so two people deciding at once cannot
+     * both win.
      */
     public SubstitutionRecord changeStatus(long recordId, RecordStatus next, String by, String comment) {
-        requireName("--by", by);
-        db.inTransaction(c -> {
+        String name = requireName("--by", by);
+        String note = TextLimits.text("--comment", comment);
+        RegisterKey key = writeKey();
+        register.write(c -> {
             List<RecordEvent> events = eventsOf(c, recordId);
             if (events.isEmpty()) {
                 throw unknown(recordId);
             }
             SubstitutionRecord now = SubstitutionRecord.fold(events);
+            if (now.damage() != null) {
+                throw new InvalidInputException("record " + recordId, now.status().label(),
+                        "its stored history is damaged (" + now.damage() + "); nothing was written, run cohesa record verify");
+            }
             now.status().requireMoveTo(next, recordId);
-            append(c, recordId, events.size() + 1, EventKind.movingTo(next), by, SubstitutionRecord.statusPayload(comment));
+            FourEyesRule rule = rule(c);
+            if (rule.on()) {
+                checkFourEyes(now, next, name);
+            }
+            append(c, head(c), recordId, events.size() + 1, EventKind.movingTo(next), name, SubstitutionRecord.statusPayload(note), key);
             return null;
         });
         return find(recordId).orElseThrow();
     }
 
-    public Optional<SubstitutionRecord> find(long recordId) {
-        try {
-            List<RecordEvent> events = eventsOf(db.connection(), recordId);
-            return events.isEmpty() ? Optional.empty() : Optional.of(SubstitutionRecord.fold(events));
-        } catch (SQLException e) {
-            throw new StoreException("cannot read record " + recordId + ": " + e.getMessage(), e);
+    /** Switches the four-eyes rule on or off for the whole register; the switch is itself a sealed event (record 0). */
+    public FourEyesRule setFourEyes(boolean on, String by, String reason) {
+        String name = requireName("--by", by);
+        String why = TextLimits.text("--reason", reason);
+        if (why == null || why.isBlank()) {
+            throw new InvalidInputException("--reason", why == null ? "" : why, "switching a register rule needs a reason");
         }
+        RegisterKey key = writeKey();
+        register.write(c -> {
+            int seq = eventsOf(c, 0).size() + 1;
+            JsonNode payload = CanonicalJson.object().put("rule", FourEyesRule.NAME).put("value", on ? "on" : "off").put("reason", why.strip());
+            append(c, head(c), 0, seq, EventKind.RULE_SET, name, payload, key);
+            return null;
+        });
+        return fourEyes();
+    }
+
+    /** The four-eyes rule as it stands (on unless a sealed event switched it off). */
+    public FourEyesRule fourEyes() {
+        return register.read(RecordRepository::rule);
+    }
+
+    private void checkFourEyes(SubstitutionRecord r, RecordStatus next, String by) {
+        if (next != RecordStatus.IN_REVIEW && next != RecordStatus.APPROVED) {
+            return;
+        }
+        boolean accounts = register.accountIsAuthenticated();
+        String account = register.account();
+        StatusChange filed = r.history().get(0);
+        if (samePerson(filed, by, account, accounts)) {
+            throw new InvalidInputException("--by", by, "four-eyes rule: " + filed.by() + (accounts ? " (" + filed.account() + ")" : "")
+                    + " filed record " + r.id() + ", so someone else must " + (next == RecordStatus.IN_REVIEW ? "review" : "approve")
+                    + " it (a site can switch the rule off: cohesa record rule four-eyes off --by NAME --reason TEXT)");
+        }
+        if (next == RecordStatus.APPROVED) {
+            for (StatusChange c : r.history()) {
+                if (c.status() == RecordStatus.IN_REVIEW && samePerson(c, by, account, accounts)) {
+                    throw new InvalidInputException("--by", by, "four-eyes rule: " + c.by() + (accounts ? " (" + c.account() + ")" : "")
+                            + " reviewed record " + r.id() + ", so a third person must approve it"
+                            + " (a site can switch the rule off: cohesa record rule four-eyes off --by NAME --reason TEXT)");
+                }
+            }
+        }
+    }
+
+    /** The same person: the same name as typed (ignoring case and spacing), or on a shared register the same login. */
+    static boolean samePerson(StatusChange earlier, String by, String account, boolean accountsCount) {
+        if (normalise(earlier.by()).equals(normalise(by))) {
+            return true;
+        }
+        return accountsCount && earlier.account() != null && earlier.account().equals(account);
+    }
+
+    private static String normalise(String name) {
+        return name.strip().replaceAll("\\s+", " ").toLowerCase(Locale.ROOT);
+    }
+
+    public Optional<SubstitutionRecord> find(long recordId) {
+        if (recordId <= 0) {
+            return Optional.empty();
+        }
+        List<RecordEvent> events = register.read(c -> eventsOf(c, recordId));
+        return events.isEmpty() ? Optional.empty() : Optional.of(SubstitutionRecord.fold(events));
     }
 
     /** The record, or bad input naming the number. */
@@ -91,103 +193,210 @@ public final class RecordRepository {
 
     /** One record's events, oldest first (empty for an unknown number). */
     public List<RecordEvent> events(long recordId) {
-        try {
-            return eventsOf(db.connection(), recordId);
-        } catch (SQLException e) {
-            throw new StoreException("cannot read record " + recordId + ": " + e.getMessage(), e);
-        }
+        return register.read(c -> eventsOf(c, recordId));
     }
 
-    /** Every record, oldest first. */
+    /** Every record, oldest first. For large registers prefer {@link #forEachRecord}. */
     public List<SubstitutionRecord> all() {
-        Map<Long, List<RecordEvent>> byRecord = new LinkedHashMap<>();
-        for (RecordEvent e : readChain().events) {
-            byRecord.computeIfAbsent(e.recordId(), k -> new ArrayList<>()).add(e);
-        }
         List<SubstitutionRecord> out = new ArrayList<>();
-        byRecord.entrySet().stream().sorted(Map.Entry.comparingByKey()).forEach(en -> {
-            List<RecordEvent> es = new ArrayList<>(en.getValue());
-            es.sort(java.util.Comparator.comparingInt(RecordEvent::seq));
-            out.add(SubstitutionRecord.fold(es));
-        });
+        forEachRecord(out::add);
         return out;
+    }
+
+    /**
+     * Hands every record to {@code each}, oldest first, from one consistent snapshot, holding one record at a time (a
+     * register of thousands of records with their evidence is listed or exported in little memory). A record whose
+     * filing event is gone or unreadable cannot be shown; it is skipped here and named by {@link #verify()}.
+     *
+     * @return how many records had to be skipped
+     */
+    public int forEachRecord(Consumer<SubstitutionRecord> each) {
+        return register.read(c -> {
+            int skipped = 0;
+            try (PreparedStatement ps = c.prepareStatement("SELECT * FROM record_event WHERE record_id > 0 ORDER BY record_id, seq")) {
+                ps.setFetchSize(200);
+                try (ResultSet rs = ps.executeQuery()) {
+                    List<RecordEvent> one = new ArrayList<>();
+                    while (rs.next()) {
+                        RecordEvent e = row(rs);
+                        if (!one.isEmpty() && one.get(0).recordId() != e.recordId()) {
+                            skipped += emit(one, each);
+                            one.clear();
+                        }
+                        one.add(e);
+                    }
+                    if (!one.isEmpty()) {
+                        skipped += emit(one, each);
+                    }
+                }
+            }
+            return skipped;
+        });
+    }
+
+    private static int emit(List<RecordEvent> events, Consumer<SubstitutionRecord> each) {
+        SubstitutionRecord r;
+        try {
+            r = SubstitutionRecord.fold(events);
+        } catch (RuntimeException unreadable) {
+            return 1;
+        }
+        each.accept(r);
+        return 0;
     }
 
     /** Every stored event in storage order (the chain). */
     public List<RecordEvent> chain() {
-        return readChain().events;
+        List<RecordEvent> out = new ArrayList<>();
+        forEachEvent(out::add);
+        return out;
     }
 
-    /** Walks the whole chain from one consistent snapshot of the database. */
-    public ChainReport verify() {
-        Snapshot s = readChain();
-        return ChainVerifier.verify(s.events, s.head);
-    }
-
-    /** True while both append-only guards are in place (a missing guard means someone removed it). */
-    public boolean guardsInPlace() {
-        try (Statement st = db.connection().createStatement();
-             ResultSet rs = st.executeQuery("SELECT COUNT(*) FROM sqlite_master WHERE type = 'trigger'"
-                     + " AND name IN ('record_event_append_only_update', 'record_event_append_only_delete')")) {
-            return rs.next() && rs.getInt(1) == 2;
-        } catch (SQLException e) {
-            throw new StoreException("cannot read the schema: " + e.getMessage(), e);
-        }
-    }
-
-    private record Snapshot(List<RecordEvent> events, ChainHead head) {
-    }
-
-    private Snapshot readChain() {
-        // one read transaction: in WAL mode it sees a single committed state even while others write
-        return db.inReadTransaction(c -> {
-            List<RecordEvent> events = new ArrayList<>();
-            try (Statement st = c.createStatement(); ResultSet rs = st.executeQuery("SELECT * FROM record_event ORDER BY id")) {
-                while (rs.next()) {
-                    events.add(row(rs));
+    /** Every stored event in storage order, one at a time, from one snapshot; returns the head note of that snapshot. */
+    public ChainHead forEachEvent(Consumer<RecordEvent> each) {
+        return register.read(c -> {
+            try (PreparedStatement ps = c.prepareStatement("SELECT * FROM record_event ORDER BY id")) {
+                ps.setFetchSize(200);
+                try (ResultSet rs = ps.executeQuery()) {
+                    while (rs.next()) {
+                        each.accept(row(rs));
+                    }
                 }
             }
-            return new Snapshot(events, head(c));
+            return head(c);
         });
+    }
+
+    /** Checks the whole register with the key file when it exists, without an anchor. */
+    public ChainReport verify() {
+        return verify(key().orElse(null), null);
+    }
+
+    /**
+     * Checks the whole register from one consistent snapshot, streaming the events.
+     *
+     * @param key    the register key (null: the SHA-256 chain and the status moves only)
+     * @param anchor a state kept elsewhere (null: none)
+     */
+    public ChainReport verify(RegisterKey key, Anchor anchor) {
+        ChainVerifier v = new ChainVerifier(key, anchor);
+        ChainHead head = forEachEvent(v::accept);
+        return v.finish(head);
+    }
+
+    /** The head note as stored. */
+    public ChainHead head() {
+        return register.read(RecordRepository::head);
+    }
+
+    /** True while the database's append-only guards are in place (a missing guard means someone removed it). */
+    public boolean guardsInPlace() {
+        return register.guardsInPlace();
+    }
+
+    /**
+     * Copies every event of {@code source} verbatim (same content, accounts, times, hashes and HMACs) into this register,
+     * which must be empty, and writes the head note, sealed with {@code key} when the events are sealed. One transaction:
+     * a failed copy leaves this register empty.
+     *
+     * @return how many events were copied
+     */
+    public long copyFrom(RecordRepository source, RegisterKey key) {
+        List<RecordEvent> events = source.chain();
+        return register.write(c -> {
+            try (Statement st = c.createStatement(); ResultSet rs = st.executeQuery("SELECT COUNT(*) FROM record_event")) {
+                rs.next();
+                if (rs.getLong(1) > 0) {
+                    throw new InvalidInputException("--to", register.location(), "already holds " + rs.getLong(1)
+                            + " events; a register is copied only into an empty one");
+                }
+            }
+            ChainHead head = ChainHead.EMPTY;
+            for (RecordEvent e : events) {
+                insert(c, e);
+                head = head.after(e, e.mac() == null ? null : key);
+            }
+            writeHead(c, head);
+            return (long) events.size();
+        });
+    }
+
+    private static FourEyesRule rule(Connection c) throws SQLException {
+        FourEyesRule rule = FourEyesRule.DEFAULT;
+        for (RecordEvent e : eventsOf(c, 0)) {
+            JsonNode p;
+            try {
+                p = e.payloadTree();
+            } catch (RuntimeException damaged) {
+                continue;
+            }
+            if (FourEyesRule.NAME.equals(p.path("rule").asText())) {
+                rule = new FourEyesRule(!"off".equals(p.path("value").asText()), e.actor(), e.account(), e.at(), p.path("reason").asText(null));
+            }
+        }
+        return rule;
+    }
+
+    private static long maxRecordId(Connection c) throws SQLException {
+        try (Statement st = c.createStatement(); ResultSet rs = st.executeQuery("SELECT COALESCE(MAX(record_id), 0) FROM record_event")) {
+            return rs.next() ? rs.getLong(1) : 0;
+        }
     }
 
     private static ChainHead head(Connection c) throws SQLException {
         try (Statement st = c.createStatement();
-             ResultSet rs = st.executeQuery("SELECT events, last_hash, last_record_id, last_seq, max_record_id FROM record_chain_head WHERE singleton = 1")) {
-            return rs.next() ? new ChainHead(rs.getLong(1), rs.getString(2), rs.getLong(3), rs.getInt(4), rs.getLong(5)) : ChainHead.EMPTY;
+             ResultSet rs = st.executeQuery("SELECT events, last_hash, last_record_id, last_seq, max_record_id, mac, key_id"
+                     + " FROM record_chain_head WHERE singleton = 1")) {
+            return rs.next() ? new ChainHead(rs.getLong(1), rs.getString(2), rs.getLong(3), rs.getInt(4), rs.getLong(5),
+                    rs.getString(6), rs.getString(7)) : ChainHead.EMPTY;
         }
     }
 
-    private void append(Connection c, long recordId, int seq, EventKind kind, String actor, JsonNode payload) throws SQLException {
+    private void append(Connection c, ChainHead head, long recordId, int seq, EventKind kind, String actor, JsonNode payload,
+                        RegisterKey key) throws SQLException {
         RecordEvent prev = null;
         try (Statement st = c.createStatement(); ResultSet rs = st.executeQuery("SELECT * FROM record_event ORDER BY id DESC LIMIT 1")) {
             if (rs.next()) {
                 prev = row(rs);
             }
         }
-        RecordEvent e = RecordEvent.next(recordId, seq, kind, actor, clock.instant(), payload, prev);
-        try (PreparedStatement ps = c.prepareStatement("INSERT INTO record_event (record_id, seq, kind, payload, actor, at, prev_record_id, prev_seq, prev_hash, hash)"
-                + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
+        RecordEvent e = RecordEvent.next(recordId, seq, kind, actor, register.account(), clock.instant(), payload, prev, key);
+        insert(c, e);
+        // the head's count is carried forward from the stored head, so events removed behind its back stay missing
+        writeHead(c, head.after(e, key));
+    }
+
+    private static void insert(Connection c, RecordEvent e) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO record_event (record_id, seq, kind, payload, actor, account, at,"
+                + " prev_record_id, prev_seq, prev_hash, hash, mac) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
             ps.setLong(1, e.recordId());
             ps.setInt(2, e.seq());
             ps.setString(3, e.kind());
             ps.setString(4, e.payload());
             ps.setString(5, e.actor());
-            ps.setString(6, e.at());
-            ps.setLong(7, e.prevRecordId());
-            ps.setInt(8, e.prevSeq());
-            ps.setString(9, e.prevHash());
-            ps.setString(10, e.hash());
+            ps.setString(6, e.account());
+            ps.setString(7, e.at());
+            ps.setLong(8, e.prevRecordId());
+            ps.setInt(9, e.prevSeq());
+            ps.setString(10, e.prevHash());
+            ps.setString(11, e.hash());
+            ps.setString(12, e.mac());
             ps.executeUpdate();
         }
-        try (PreparedStatement ps = c.prepareStatement("INSERT INTO record_chain_head (singleton, events, last_hash, last_record_id, last_seq, max_record_id)"
-                + " VALUES (1, 1, ?, ?, ?, ?) ON CONFLICT (singleton) DO UPDATE SET events = events + 1,"
+    }
+
+    private static void writeHead(Connection c, ChainHead h) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO record_chain_head (singleton, events, last_hash, last_record_id, last_seq,"
+                + " max_record_id, mac, key_id) VALUES (1, ?, ?, ?, ?, ?, ?, ?) ON CONFLICT (singleton) DO UPDATE SET events = excluded.events,"
                 + " last_hash = excluded.last_hash, last_record_id = excluded.last_record_id, last_seq = excluded.last_seq,"
-                + " max_record_id = MAX(max_record_id, excluded.max_record_id)")) {
-            ps.setString(1, e.hash());
-            ps.setLong(2, e.recordId());
-            ps.setInt(3, e.seq());
-            ps.setLong(4, e.recordId());
+                + " max_record_id = excluded.max_record_id, mac = excluded.mac, key_id = excluded.key_id")) {
+            ps.setLong(1, h.events());
+            ps.setString(2, h.lastHash());
+            ps.setLong(3, h.lastRecordId());
+            ps.setInt(4, h.lastSeq());
+            ps.setLong(5, h.maxRecordId());
+            ps.setString(6, h.mac());
+            ps.setString(7, h.keyId());
             ps.executeUpdate();
         }
     }
@@ -207,9 +416,9 @@ public final class RecordRepository {
 
     private static RecordEvent row(ResultSet rs) throws SQLException {
         return new RecordEvent(rs.getLong("id"), rs.getLong("record_id"), rs.getInt("seq"), nz(rs.getString("kind")),
-                nz(rs.getString("actor")), nz(rs.getString("at")), nz(rs.getString("payload")), rs.getLong("prev_record_id"),
-                rs.getInt("prev_seq"), nz(rs.getString("prev_hash")),
-                nz(rs.getString("hash")));
+                nz(rs.getString("actor")), rs.getString("account"), nz(rs.getString("at")), nz(rs.getString("payload")),
+                rs.getLong("prev_record_id"), rs.getInt("prev_seq"), nz(rs.getString("prev_hash")), nz(rs.getString("hash")),
+                rs.getString("mac"));
     }
 
     private static String nz(String s) {
@@ -220,9 +429,10 @@ public final class RecordRepository {
         return new InvalidInputException("ID", String.valueOf(recordId), "no such record");
     }
 
-    private static void requireName(String field, String name) {
+    private static String requireName(String field, String name) {
         if (name == null || name.isBlank()) {
             throw new InvalidInputException(field, String.valueOf(name), "must name a person");
         }
+        return TextLimits.name(field, name);
     }
 }

@@ -11,6 +11,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.apache.commons.csv.CSVFormat;
+import org.cohesa.core.SpreadsheetCells;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.CSVRecord;
@@ -61,6 +62,7 @@ public final class SolventCsv {
                     continue;
                 }
                 Map<String, String> row = new LinkedHashMap<>(rec.toMap());
+                row.replaceAll((k, v) -> SpreadsheetCells.unguard(v));
                 Solvent s = SolventFields.fromRow(row, line, userEntry, errors);
                 if (s != null && !seen.add(s.name().toLowerCase(Locale.ROOT))) {
                     errors.add(new RowError(line, "name", s.name(), "appears twice in the file"));
@@ -82,7 +84,7 @@ public final class SolventCsv {
         CSVFormat fmt = CSVFormat.RFC4180.builder().setHeader(SolventFields.EXPORT_COLUMNS.toArray(String[]::new)).get();
         try (CSVPrinter printer = new CSVPrinter(out, fmt)) {
             for (Solvent s : solvents) {
-                printer.printRecord(SolventFields.toRow(s).values());
+                printer.printRecord(SolventFields.toRow(s).values().stream().map(SpreadsheetCells::guard).toList());
             }
         }
     }

@@ -37,10 +37,20 @@ public final class SolventRepository {
 
     /** Every solvent with the user's prices applied, sorted by name. */
     public List<Solvent> all() {
+        List<Solvent> out = new ArrayList<>();
+        forEach(false, out::add);
+        return out;
+    }
+
+    /**
+     * Hands every solvent (only the user's own with {@code userOnly}), sorted by name, to {@code each}, one at a time
+     * straight from the database: a library of any size is listed in little memory.
+     */
+    public void forEach(boolean userOnly, java.util.function.Consumer<Solvent> each) {
         try (Statement st = db.connection().createStatement();
              ResultSet rs = st.executeQuery("SELECT s.*, p.price_per_litre FROM solvent s"
-                     + " LEFT JOIN solvent_price p ON p.solvent_name = s.name ORDER BY s.name COLLATE NOCASE")) {
-            List<Solvent> out = new ArrayList<>();
+                     + " LEFT JOIN solvent_price p ON p.solvent_name = s.name" + (userOnly ? " WHERE s.origin = 'user'" : "")
+                     + " ORDER BY s.name COLLATE NOCASE")) {
             List<RowError> errors = new ArrayList<>();
             while (rs.next()) {
                 Map<String, String> row = new HashMap<>();
@@ -52,14 +62,22 @@ public final class SolventRepository {
                 Map<String, String> sources = JsonText.readMap(rs.getString("sources"));
                 sources.forEach((k, v) -> row.put("src_" + k, v));
                 Solvent s = SolventFields.fromRow(row, rs.getLong("id"), "user".equals(rs.getString("origin")), errors);
+                if (!errors.isEmpty()) {
+                    throw new StoreException("the database holds invalid solvent data: " + errors.get(0).describe());
+                }
                 if (s != null) {
-                    out.add(s);
+                    each.accept(s);
                 }
             }
-            if (!errors.isEmpty()) {
-                throw new StoreException("the database holds invalid solvent data: " + errors.get(0).describe());
-            }
-            return out;
+        } catch (SQLException e) {
+            throw new StoreException("cannot read solvents: " + e.getMessage(), e);
+        }
+    }
+
+    /** How many solvents the library holds. */
+    public int count() {
+        try (Statement st = db.connection().createStatement(); ResultSet rs = st.executeQuery("SELECT COUNT(*) FROM solvent")) {
+            return rs.next() ? rs.getInt(1) : 0;
         } catch (SQLException e) {
             throw new StoreException("cannot read solvents: " + e.getMessage(), e);
         }

@@ -170,7 +170,7 @@ class RecordCommandsTest {
         assertEquals(1, j.get("first_record").asInt());
         assertEquals("altered", j.get("problems").get(0).get("kind").asText());
         assertFalse(j.get("append_only_guards").asBoolean());
-        assertTrue(run("record", "verify").out().contains("record 1 was altered"));
+        assertTrue(run("record", "verify").out().contains("record 1 altered"));
     }
 
     @Test

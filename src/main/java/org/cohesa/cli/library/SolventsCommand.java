@@ -20,6 +20,9 @@ import org.cohesa.core.coverage.LibraryCoverage;
 import org.cohesa.core.coverage.PropertyCoverage;
 import org.cohesa.core.coverage.WorkflowCoverage;
 import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.solvent.SolventLibrary;
+import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.databind.SequenceWriter;
 import org.cohesa.store.SolventCsv;
 import org.cohesa.store.SolventFields;
 import org.cohesa.store.SourceCatalog;
@@ -44,26 +47,57 @@ public final class SolventsCommand extends CohesaSubcommand {
     boolean coverage;
 
     @Override
-    protected void execute() {
+    protected void execute() throws IOException {
         if (coverage) {
             printCoverage();
             return;
         }
-        List<Solvent> hits = ctx().library().search(text).stream().filter(s -> !mine || s.userEntry()).toList();
+        // streamed from the database: a library of 100,000 entries is listed without holding it in memory
+        SourceCatalog cat = SourceCatalog.bundled();
+        TextTable t = json() ? null : new TextTable("name", "CAS", "dD", "dP", "dH", "Vm", "bp °C", "flash °C", "ICH", "origin");
+        int[] shown = {0};
+        try (SequenceWriter w = json() ? Output.mapper().writer().without(JsonGenerator.Feature.AUTO_CLOSE_TARGET).writeValuesAsArray(out()) : null) {
+            java.util.function.Consumer<Solvent> show = s -> {
+                shown[0]++;
+                if (w == null) {
+                    row(t, s);
+                    return;
+                }
+                try {
+                    w.write(SolventView.json(s, cat));
+                } catch (IOException e) {
+                    throw new java.io.UncheckedIOException(e);
+                }
+            };
+            if (text == null || text.isBlank()) {
+                ctx().solvents().forEach(mine, show);
+            } else {
+                // best matches first, as the library's search orders them; only the hits are kept
+                List<List<Solvent>> byRelevance = List.of(new ArrayList<>(), new ArrayList<>(), new ArrayList<>(), new ArrayList<>());
+                ctx().solvents().forEach(mine, s -> {
+                    int rank = SolventLibrary.relevance(s, text);
+                    if (rank < 4) {
+                        byRelevance.get(rank).add(s);
+                    }
+                });
+                byRelevance.forEach(l -> l.forEach(show));
+            }
+        } catch (java.io.UncheckedIOException e) {
+            throw e.getCause();
+        }
         if (json()) {
-            SourceCatalog cat = SourceCatalog.bundled();
-            Output.json(out(), hits.stream().map(s -> SolventView.json(s, cat)).toList());
+            out().println();
             return;
         }
-        TextTable t = new TextTable("name", "CAS", "dD", "dP", "dH", "Vm", "bp °C", "flash °C", "ICH", "origin");
-        for (Solvent s : hits) {
-            t.row(s.name(), s.cas(), s.hasHansen() ? Output.fmt(s.hansen().dD(), 1) : "-",
-                    s.hasHansen() ? Output.fmt(s.hansen().dP(), 1) : "-", s.hasHansen() ? Output.fmt(s.hansen().dH(), 1) : "-",
-                    Output.fmt(s.effectiveMolarVolume(), 1), Output.fmt(s.boilingPointC(), 1), Output.fmt(s.flashPointC(), 1),
-                    s.ichClass(), s.userEntry() ? "yours" : "bundled");
-        }
         t.print(out());
-        out().println(hits.size() + " of " + ctx().library().size() + " solvents");
+        out().println(shown[0] + " of " + ctx().solvents().count() + " solvents");
+    }
+
+    private static void row(TextTable t, Solvent s) {
+        t.row(s.name(), s.cas(), s.hasHansen() ? Output.fmt(s.hansen().dD(), 1) : "-",
+                s.hasHansen() ? Output.fmt(s.hansen().dP(), 1) : "-", s.hasHansen() ? Output.fmt(s.hansen().dH(), 1) : "-",
+                Output.fmt(s.effectiveMolarVolume(), 1), Output.fmt(s.boilingPointC(), 1), Output.fmt(s.flashPointC(), 1),
+                s.ichClass(), s.userEntry() ? "yours" : "bundled");
     }
 
     private void printCoverage() {
@@ -187,21 +221,28 @@ public final class SolventsCommand extends CohesaSubcommand {
     }
 
     /** {@code cohesa solvents export FILE}. */
-    @Command(name = "export", description = "Write solvents to a CSV file that 'solvents import' reads back.")
+    @Command(name = "export", description = "Write solvents to a CSV file that 'solvents import' reads back. An existing file is replaced only"
+            + " with --overwrite; text a spreadsheet would run as a formula is written with a leading apostrophe.")
     static final class Export extends CohesaSubcommand {
         @Parameters(paramLabel = "FILE") Path file;
         @Option(names = "--mine", description = "Only your own entries (default: the whole library).") boolean mine;
+        @Option(names = "--overwrite", description = "Replace FILE if it exists (never a folder, device or other non-regular file).")
+        boolean overwrite;
+
+        /** What was written. */
+        record Json(int exported, String file) {
+        }
 
         @Override
         protected void execute() throws IOException {
+            org.cohesa.cli.OutputFile.check("FILE", file, overwrite);
             List<Solvent> all = ctx().library().all().stream().filter(s -> !mine || s.userEntry()).toList();
-            Path tmp = file.toAbsolutePath().resolveSibling(file.getFileName() + ".part");
-            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
+            org.cohesa.cli.OutputFile.write("FILE", file, overwrite, out -> {
+                Writer w = new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8);
                 SolventCsv.write(w, all);
-            }
-            Files.move(tmp, file, java.nio.file.StandardCopyOption.REPLACE_EXISTING, java.nio.file.StandardCopyOption.ATOMIC_MOVE);
+            });
             if (json()) {
-                Output.json(out(), Map.of("exported", all.size(), "file", file.toString()));
+                Output.json(out(), new Json(all.size(), file.toString()));
             } else {
                 out().println("exported " + all.size() + " solvents to " + file);
             }

@@ -1,7 +1,6 @@
 package org.cohesa.cli.records;
 
 import org.cohesa.cli.AppVersion;
-import org.cohesa.cli.CohesaSubcommand;
 import org.cohesa.cli.Output;
 import org.cohesa.cli.Targets;
 
@@ -13,7 +12,6 @@ import org.cohesa.core.records.TargetRef;
 import org.cohesa.core.solvent.Blend;
 import org.cohesa.core.solvent.SolventLibrary;
 import org.cohesa.core.target.Material;
-import org.cohesa.store.RecordRepository;
 import org.cohesa.store.SourceCatalog;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -21,7 +19,7 @@ import picocli.CommandLine.Option;
 
 /** {@code cohesa record add}: files a substitution with a snapshot of its evidence, in draft. */
 @Command(name = "add", description = "File a substitution record (draft) with a snapshot of the evidence.")
-public final class RecordAddCommand extends CohesaSubcommand {
+public final class RecordAddCommand extends RecordSubcommand {
 
     @Option(names = "--process", required = true, paramLabel = "TEXT", description = "Process or product the change applies to.")
     String process;
@@ -72,9 +70,9 @@ public final class RecordAddCommand extends CohesaSubcommand {
         }
         Evidence snapshot = EvidenceAssembler.assemble(from, to, targetRef, catalog.all(), AppVersion.get());
         RecordDraft draft = new RecordDraft(process, site, from.describe(), to.describe(), targetText, reason, snapshot);
-        SubstitutionRecord r = new RecordRepository(ctx().database()).create(draft, author);
+        SubstitutionRecord r = repo().create(draft, author);
         if (json()) {
-            Output.json(out(), RecordView.json(r, true));
+            Output.json(out(), RecordJson.Record.of(r, true));
             return;
         }
         out().println("Filed substitution record " + r.id() + " (draft). Next: cohesa record review " + r.id() + " --by NAME");

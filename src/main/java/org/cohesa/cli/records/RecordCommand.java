@@ -15,6 +15,8 @@ import picocli.CommandLine.Spec;
                 RecordRejectCommand.class,
                 RecordVerifyCommand.class,
                 RecordExportCommand.class,
+                RecordAnchorCommand.class,
+                RecordRuleCommand.class,
         })
 public final class RecordCommand implements Runnable {
 

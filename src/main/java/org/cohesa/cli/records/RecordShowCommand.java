@@ -1,25 +1,23 @@
 package org.cohesa.cli.records;
 
-import org.cohesa.cli.CohesaSubcommand;
 import org.cohesa.cli.Output;
 
 import org.cohesa.core.records.SubstitutionRecord;
-import org.cohesa.store.RecordRepository;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
 
 /** {@code cohesa record show ID}: one record with its history and evidence. */
 @Command(name = "show", description = "Show one record: content, evidence, history.")
-public final class RecordShowCommand extends CohesaSubcommand {
+public final class RecordShowCommand extends RecordSubcommand {
 
     @Parameters(paramLabel = "ID", description = "Record number.")
     String id;
 
     @Override
     protected void execute() {
-        SubstitutionRecord r = new RecordRepository(ctx().database()).get(RecordSupport.parseId(id));
+        SubstitutionRecord r = repo().get(RecordSupport.parseId(id));
         if (json()) {
-            Output.json(out(), RecordView.json(r, true));
+            Output.json(out(), RecordJson.Record.of(r, true));
             return;
         }
         RecordView.printRecord(out(), r);

@@ -1,12 +1,10 @@
 package org.cohesa.cli.records;
 
-import org.cohesa.cli.CohesaSubcommand;
 import org.cohesa.cli.Output;
 
 import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.records.RecordStatus;
 import org.cohesa.core.records.SubstitutionRecord;
-import org.cohesa.store.RecordRepository;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -14,7 +12,7 @@ import picocli.CommandLine.Parameters;
  * Shared body of review / approve / reject: one status step, refused when illegal. The subclasses only
  * name the step; a decision (approve, reject) needs a comment, taking a draft into review does not.
  */
-abstract class RecordStatusCommand extends CohesaSubcommand {
+abstract class RecordStatusCommand extends RecordSubcommand {
 
     @Parameters(paramLabel = "ID", description = "Record number.")
     String id;
@@ -38,9 +36,9 @@ abstract class RecordStatusCommand extends CohesaSubcommand {
                     ? new InvalidInputException("--comment", "", "missing: a decision needs a comment saying why")
                     : new InvalidInputException("--comment", comment, "a decision needs a comment saying why");
         }
-        SubstitutionRecord r = new RecordRepository(ctx().database()).changeStatus(recordId, next(), by, comment);
+        SubstitutionRecord r = repo().changeStatus(recordId, next(), by, comment);
         if (json()) {
-            Output.json(out(), RecordView.json(r, false));
+            Output.json(out(), RecordJson.Record.of(r, false));
             return;
         }
         out().println("Record " + r.id() + " is now " + r.status().label() + " (" + by.strip() + ").");

@@ -1,42 +1,62 @@
 package org.cohesa.cli.records;
 
+import java.nio.file.Files;
 import org.cohesa.cli.CohesaCommand;
-import org.cohesa.cli.CohesaSubcommand;
 import org.cohesa.cli.Output;
 import org.cohesa.cli.TextTable;
-
+import org.cohesa.core.records.Anchor;
 import org.cohesa.core.records.ChainProblem;
 import org.cohesa.core.records.ChainReport;
-import org.cohesa.store.RecordRepository;
+import org.cohesa.core.records.RegisterKey;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
 
-/** {@code cohesa record verify}: walks the hash chain; exit 1 when a stored record was altered, deleted or reordered. */
-@Command(name = "verify", description = "Check that no stored record was altered, deleted or reordered (SHA-256 hash chain). Exit 1 when one was.")
-public final class RecordVerifyCommand extends CohesaSubcommand {
+/**
+ * {@code cohesa record verify [--anchor HASH|FILE]}: checks the SHA-256 chain, the HMACs under the register key, the
+ * status moves and, with an anchor, that the state kept elsewhere is still in the register. Exit 1 when anything is wrong.
+ */
+@Command(name = "verify", description = "Check the register: SHA-256 chain, HMAC seal under the register key, legal status moves, and"
+        + " with --anchor the state kept elsewhere. Says what it could not detect. Exit 1 when a record was altered, deleted, reordered,"
+        + " forged or moved illegally.")
+public final class RecordVerifyCommand extends RecordSubcommand {
+
+    @Option(names = "--anchor", paramLabel = "HASH|FILE", description = "A head hash (64 hex digits) or a file written by 'record anchor'.")
+    String anchor;
 
     private boolean broken;
 
     @Override
     protected void execute() {
-        RecordRepository repo = new RecordRepository(ctx().database());
-        ChainReport report = repo.verify();
-        boolean guards = repo.guardsInPlace();
+        Anchor a = anchor == null ? null : AnchorFile.parse("--anchor", anchor);
+        RegisterKey key = repo().key().orElse(null);
+        ChainReport report = repo().verify(key, a);
+        boolean guards = repo().guardsInPlace();
         broken = !report.intact();
+        String where = repo().register().kind() + " " + repo().register().location();
         if (json()) {
-            Output.json(out(), RecordView.json(report, guards));
+            Output.json(out(), RecordJson.Verify.of(report, where, guards, key == null ? null : key.id()));
             return;
         }
         if (report.intact()) {
-            out().println("Chain intact: " + report.events() + " events in " + report.records() + " records.");
-            out().println("Head hash (keep a copy elsewhere to anchor the chain): " + report.headHash());
+            out().println("Register intact (" + where + "): " + report.events() + " events in " + report.records() + " records.");
+            out().println("Head hash (keep a copy elsewhere, or run cohesa record anchor): " + report.headHash());
         } else {
             ChainProblem first = report.firstProblem().orElseThrow();
-            out().println("CHAIN BROKEN: record " + first.recordId() + " was " + first.kind().label() + " outside Cohesa.");
+            out().println("REGISTER BROKEN (" + where + "): " + first.describe());
             TextTable t = new TextTable("position", "record", "step", "problem", "detail");
             for (ChainProblem p : report.problems()) {
                 t.row(p.position(), p.recordId(), p.seq(), p.kind().label(), p.detail());
             }
             t.print(out());
+        }
+        out().println("Checked: SHA-256 chain, head note, status moves"
+                + (report.keyChecked() ? ", HMAC seal (key " + key.id() + ", " + report.sealedEvents() + " sealed events)" : "")
+                + (report.anchorChecked() ? ", anchor (" + report.sinceAnchor() + " events since)" : "") + ".");
+        for (String limit : report.limits()) {
+            out().println("not detectable in this run: " + limit);
+        }
+        if (key == null && Files.notExists(repo().keyFile())) {
+            out().println("(no key file at " + repo().keyFile() + ")");
         }
         if (!guards) {
             out().println("warning: the append-only guards on the record table were removed from the database.");

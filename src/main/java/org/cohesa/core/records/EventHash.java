@@ -9,8 +9,8 @@ import java.util.HexFormat;
 /**
  * The hash of one event: SHA-256 (NIST FIPS 180-4, Secure Hash Standard, 2015) over the UTF-8 bytes of the
  * canonical JSON object
- * {@code {"actor","at","kind","payload","prev_hash","prev_record_id","prev_seq","record_id","seq"}} (keys sorted, see
- * {@link CanonicalJson}),
+ * {@code {"account","actor","at","kind","payload","prev_hash","prev_record_id","prev_seq","record_id","seq"}} (keys sorted, see
+ * {@link CanonicalJson}; {@code account} is left out for events stored before accounts were recorded, so their hashes stay valid),
  * written as 64 lower-case hex digits. Including {@code prev_hash} chains every event to the one before it,
  * so changing, removing or moving any stored event breaks the chain from that point on (the construction of
  * Haber and Stornetta, "How to time-stamp a digital document", J. Cryptology 3 (1991) 99).
@@ -24,9 +24,12 @@ public final class EventHash {
     }
 
     /** The canonical text the hash is computed over. */
-    public static String content(long recordId, int seq, String kind, String actor, String at, String payload,
+    public static String content(long recordId, int seq, String kind, String actor, String account, String at, String payload,
                                  long prevRecordId, int prevSeq, String prevHash) {
         ObjectNode o = CanonicalJson.object();
+        if (account != null) {
+            o.put("account", account);
+        }
         o.put("record_id", recordId);
         o.put("seq", seq);
         o.put("kind", kind);
@@ -39,14 +42,14 @@ public final class EventHash {
         return CanonicalJson.write(o);
     }
 
-    public static String of(long recordId, int seq, String kind, String actor, String at, String payload,
+    public static String of(long recordId, int seq, String kind, String actor, String account, String at, String payload,
                             long prevRecordId, int prevSeq, String prevHash) {
-        return sha256Hex(content(recordId, seq, kind, actor, at, payload, prevRecordId, prevSeq, prevHash));
+        return sha256Hex(content(recordId, seq, kind, actor, account, at, payload, prevRecordId, prevSeq, prevHash));
     }
 
     /** The hash a stored event should carry, recomputed from its fields. */
     public static String recompute(RecordEvent e) {
-        return of(e.recordId(), e.seq(), e.kind(), e.actor(), e.at(), e.payload(), e.prevRecordId(), e.prevSeq(), e.prevHash());
+        return of(e.recordId(), e.seq(), e.kind(), e.actor(), e.account(), e.at(), e.payload(), e.prevRecordId(), e.prevSeq(), e.prevHash());
     }
 
     public static String sha256Hex(String text) {

@@ -9,7 +9,9 @@ public enum EventKind {
     /** Someone took the draft into review. */
     SENT_TO_REVIEW(RecordStatus.IN_REVIEW),
     APPROVED(RecordStatus.APPROVED),
-    REJECTED(RecordStatus.REJECTED);
+    REJECTED(RecordStatus.REJECTED),
+    /** A register setting changed (filed under record 0, the register itself), e.g. the four-eyes rule switched off. */
+    RULE_SET(null);
 
     private final RecordStatus resultingStatus;
 
@@ -17,6 +19,7 @@ public enum EventKind {
         this.resultingStatus = resultingStatus;
     }
 
+    /** The status a record is left in (null for {@link #RULE_SET}, which is no step of a record). */
     public RecordStatus resultingStatus() {
         return resultingStatus;
     }
@@ -38,7 +41,7 @@ public enum EventKind {
     /** The event that moves a record into {@code status}. */
     public static EventKind movingTo(RecordStatus status) {
         for (EventKind k : values()) {
-            if (k != CREATED && k.resultingStatus == status) {
+            if (k != CREATED && k != RULE_SET && k.resultingStatus == status) {
                 return k;
             }
         }

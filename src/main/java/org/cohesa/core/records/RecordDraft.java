@@ -65,13 +65,8 @@ public record RecordDraft(String process, String site, String replaced, String r
     }
 
     private static String checkLength(String field, String value) {
-        if (value.length() > MAX_TEXT) {
-            throw new InvalidInputException(field, value.substring(0, 40) + "…", "is longer than " + MAX_TEXT + " characters");
-        }
-        if (value.chars().anyMatch(c -> c < 0x20 && c != '\n' && c != '\t')) {
-            throw new InvalidInputException(field, value, "contains control characters");
-        }
-        return value;
+        // the shared rule: length, no control characters, no right-to-left overrides or other format characters
+        return org.cohesa.core.TextLimits.text(field, value);
     }
 
     private static String text(JsonNode p, String key) {

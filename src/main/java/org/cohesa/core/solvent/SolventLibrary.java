@@ -103,6 +103,14 @@ public final class SolventLibrary {
                 .map(Map.Entry::getKey).toList();
     }
 
+    /**
+     * How well {@code s} matches a search for {@code text}: 0 exact name, 1 name starts with it, 2 name contains it,
+     * 3 CAS, synonym or family contains it, 4 no match (what {@link #search} sorts and filters by).
+     */
+    public static int relevance(Solvent s, String text) {
+        return relevance(s, key(text), text.strip());
+    }
+
     private static int relevance(Solvent s, String key, String raw) {
         String name = key(s.name());
         if (name.equals(key)) {

@@ -27,7 +27,7 @@ class ChainVerifierTest {
         for (int i = 0; i < plan.length; i++) {
             int seq = (int) plan[i][1];
             JsonNode p = seq == 1 ? payload("process " + plan[i][0]) : SubstitutionRecord.statusPayload("step " + seq);
-            RecordEvent e = RecordEvent.next(plan[i][0], seq, kinds[seq - 1], "person " + i, t.plusSeconds(i), p, prev);
+            RecordEvent e = RecordEvent.next(plan[i][0], seq, kinds[seq - 1], "person " + i, "account" + i, t.plusSeconds(i), p, prev, null);
             out.add(at(e, i + 1));
             prev = e;
         }
@@ -35,8 +35,7 @@ class ChainVerifierTest {
     }
 
     private static RecordEvent at(RecordEvent e, long position) {
-        return new RecordEvent(position, e.recordId(), e.seq(), e.kind(), e.actor(), e.at(), e.payload(), e.prevRecordId(), e.prevSeq(),
-                e.prevHash(), e.hash());
+        return e.atPosition(position);
     }
 
     private static ChainHead headOf(List<RecordEvent> es) {
@@ -60,8 +59,8 @@ class ChainVerifierTest {
         List<RecordEvent> es = chain();
         ChainHead head = headOf(es);
         RecordEvent e = es.get(3);
-        es.set(3, new RecordEvent(e.position(), e.recordId(), e.seq(), e.kind(), e.actor(), e.at(),
-                e.payload().replace("process 3", "process 3b"), e.prevRecordId(), e.prevSeq(), e.prevHash(), e.hash()));
+        es.set(3, new RecordEvent(e.position(), e.recordId(), e.seq(), e.kind(), e.actor(), e.account(), e.at(),
+                e.payload().replace("process 3", "process 3b"), e.prevRecordId(), e.prevSeq(), e.prevHash(), e.hash(), e.mac()));
         ChainProblem p = ChainVerifier.verify(es, head).firstProblem().orElseThrow();
         assertEquals(ChainProblem.Kind.ALTERED, p.kind());
         assertEquals(3, p.recordId());

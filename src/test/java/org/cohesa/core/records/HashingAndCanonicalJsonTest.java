@@ -46,21 +46,48 @@ class HashingAndCanonicalJsonTest {
     @Test
     void theHashCoversEveryFieldAndThePreviousHash() {
         Instant t = Instant.parse("2026-12-01T22:00:00Z");
-        RecordEvent e = RecordEvent.next(1, 1, EventKind.CREATED, "A. Chemist", t, CanonicalJson.parse("{\"process\":\"p\"}"), null);
+        RecordEvent e = RecordEvent.next(1, 1, EventKind.CREATED, "A. Chemist", "achem", t, CanonicalJson.parse("{\"process\":\"p\"}"), null, null);
         assertEquals(e.hash(), EventHash.recompute(e));
         assertEquals("2026-12-01T22:00:00.000Z", e.at());
         String base = e.hash();
-        assertNotEquals(base, EventHash.of(2, 1, "created", "A. Chemist", e.at(), e.payload(), 0, 0, e.prevHash()));
-        assertNotEquals(base, EventHash.of(1, 2, "created", "A. Chemist", e.at(), e.payload(), 0, 0, e.prevHash()));
-        assertNotEquals(base, EventHash.of(1, 1, "approved", "A. Chemist", e.at(), e.payload(), 0, 0, e.prevHash()));
-        assertNotEquals(base, EventHash.of(1, 1, "created", "B. Chemist", e.at(), e.payload(), 0, 0, e.prevHash()));
-        assertNotEquals(base, EventHash.of(1, 1, "created", "A. Chemist", "2026-12-01T22:00:00.001Z", e.payload(), 0, 0, e.prevHash()));
-        assertNotEquals(base, EventHash.of(1, 1, "created", "A. Chemist", e.at(), "{\"process\":\"q\"}", 0, 0, e.prevHash()));
-        assertNotEquals(base, EventHash.of(1, 1, "created", "A. Chemist", e.at(), e.payload(), 0, 0, "1".repeat(64)));
-        assertNotEquals(base, EventHash.of(1, 1, "created", "A. Chemist", e.at(), e.payload(), 5, 0, e.prevHash()));
+        assertNotEquals(base, EventHash.of(2, 1, "created", "A. Chemist", "achem", e.at(), e.payload(), 0, 0, e.prevHash()));
+        assertNotEquals(base, EventHash.of(1, 2, "created", "A. Chemist", "achem", e.at(), e.payload(), 0, 0, e.prevHash()));
+        assertNotEquals(base, EventHash.of(1, 1, "approved", "A. Chemist", "achem", e.at(), e.payload(), 0, 0, e.prevHash()));
+        assertNotEquals(base, EventHash.of(1, 1, "created", "B. Chemist", "achem", e.at(), e.payload(), 0, 0, e.prevHash()));
+        assertNotEquals(base, EventHash.of(1, 1, "created", "A. Chemist", "achem", "2026-12-01T22:00:00.001Z", e.payload(), 0, 0, e.prevHash()));
+        assertNotEquals(base, EventHash.of(1, 1, "created", "A. Chemist", "achem", e.at(), "{\"process\":\"q\"}", 0, 0, e.prevHash()));
+        assertNotEquals(base, EventHash.of(1, 1, "created", "A. Chemist", "achem", e.at(), e.payload(), 0, 0, "1".repeat(64)));
+        assertNotEquals(base, EventHash.of(1, 1, "created", "A. Chemist", "achem", e.at(), e.payload(), 5, 0, e.prevHash()));
+        assertNotEquals(base, EventHash.of(1, 1, "created", "A. Chemist", "other", e.at(), e.payload(), 0, 0, e.prevHash()));
         // the hash is SHA-256 of exactly the documented canonical content (docs/records.md)
-        assertEquals(EventHash.sha256Hex("{\"actor\":\"A. Chemist\",\"at\":\"2026-12-01T22:00:00.000Z\",\"kind\":\"created\","
+        assertEquals(EventHash.sha256Hex("{\"account\":\"achem\",\"actor\":\"A. Chemist\",\"at\":\"2026-12-01T22:00:00.000Z\",\"kind\":\"created\","
                 + "\"payload\":{\"process\":\"p\"},\"prev_hash\":\"" + EventHash.GENESIS + "\",\"prev_record_id\":0,\"prev_seq\":0,"
                 + "\"record_id\":1,\"seq\":1}"), base);
+    }
+
+    @Test
+    void anEventStoredBeforeAccountsWereRecordedKeepsItsHash() {
+        // schema step 4 events have no account: their hash is over the content without the key, as it was written
+        String at = "2026-12-01T22:00:00.000Z";
+        String legacy = EventHash.of(1, 1, "created", "A. Chemist", null, at, "{\"process\":\"p\"}", 0, 0, EventHash.GENESIS);
+        assertEquals(EventHash.sha256Hex("{\"actor\":\"A. Chemist\",\"at\":\"" + at + "\",\"kind\":\"created\","
+                + "\"payload\":{\"process\":\"p\"},\"prev_hash\":\"" + EventHash.GENESIS + "\",\"prev_record_id\":0,\"prev_seq\":0,"
+                + "\"record_id\":1,\"seq\":1}"), legacy);
+    }
+
+    @Test
+    void theHmacNeedsTheKey() {
+        // RFC 4231 (HMAC-SHA-256 test vectors), test case 2: key "Jefe", data "what do ya want for nothing?"
+        assertEquals("5bdcc146bf60754e6a042426089575c75a003f089d2739839dec58b964ec3843",
+                RegisterKey.hmacSha256Hex("Jefe".getBytes(java.nio.charset.StandardCharsets.US_ASCII), "what do ya want for nothing?"));
+        RegisterKey k1 = RegisterKey.of(new byte[32]);
+        byte[] other = new byte[32];
+        other[0] = 1;
+        RegisterKey k2 = RegisterKey.of(other);
+        String h = "a".repeat(64);
+        assertEquals(k1.mac(h), k1.mac(h));
+        assertNotEquals(k1.mac(h), k2.mac(h));
+        assertNotEquals(k1.id(), k2.id());
+        assertEquals(64, k1.mac(h).length());
     }
 }

@@ -1,0 +1,37 @@
+package org.cohesa.store;
+
+/**
+ * Where the register's tables live: the local SQLite database, or a shared PostgreSQL register. Both hold the same
+ * tables ({@code record_event}, {@code record_chain_head}); what differs is how a writer is serialised, how a consistent
+ * read is taken, and who the acting account is.
+ */
+public interface RegisterDb {
+
+    /**
+     * Runs {@code work} in one transaction that holds the register's write lock from the start (SQLite: BEGIN IMMEDIATE;
+     * PostgreSQL: a transaction-scoped advisory lock), so concurrent writers queue instead of forking the chain.
+     */
+    <T> T write(Database.SqlWork<T> work);
+
+    /** Runs read-only {@code work} on one consistent snapshot of the register. */
+    <T> T read(Database.SqlWork<T> work);
+
+    /** "sqlite" or "postgresql". */
+    String kind();
+
+    /** The file or server address, for messages (never a password). */
+    String location();
+
+    /** The account that acts: the operating-system user for a local file, the database login for a shared register. */
+    String account();
+
+    /**
+     * Whether {@link #account()} is established by someone other than the user (a database server's login) and so can be
+     * held against the four-eyes rule; an operating-system name read by the program on the user's own machine is
+     * recorded, but proves nothing by itself.
+     */
+    boolean accountIsAuthenticated();
+
+    /** True while the database's own append-only guards on {@code record_event} are in place. */
+    boolean guardsInPlace();
+}
