@@ -173,7 +173,7 @@ class WorkflowTest {
         org.cohesa.core.records.Evidence filed = records.getItems().get(0).evidence();
         assertTrue(filed.section(org.cohesa.core.records.Evidence.Sections.SAFETY).isPresent(), filed.sections().toString());
         assertTrue(filed.section(org.cohesa.core.records.Evidence.Sections.DRYING).isPresent(), filed.sections().toString());
-        robot.interact(() -> fx.workbench.recordsModel().changeStatus(id, org.cohesa.core.records.RecordStatus.IN_REVIEW, "tester", null, null));
+        robot.interact(() -> fx.workbench.recordsModel().changeStatus(id, org.cohesa.core.records.RecordStatus.IN_REVIEW, "reviewer", null, null));
         fx.awaitJobs();
         robot.interact(() -> fx.workbench.recordsModel().changeStatus(id, org.cohesa.core.records.RecordStatus.APPROVED, "lead", "ok", null));
         fx.awaitJobs();

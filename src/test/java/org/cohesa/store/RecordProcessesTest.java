@@ -63,7 +63,8 @@ class RecordProcessesTest {
     private Writer start(int count, String tag) throws IOException {
         String cp = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
         ProcessBuilder pb = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-XX:TieredStopAtLevel=1", "-Xshare:auto", "-cp", cp, RecordWriterProcess.class.getName(),
+                "-XX:TieredStopAtLevel=1", "-Xshare:auto",
+                "-Dcohesa.register.key=" + org.cohesa.store.RegisterKeyFile.defaultPath(), "-cp", cp, RecordWriterProcess.class.getName(),
                 file.toString(), String.valueOf(count), tag).redirectErrorStream(true);
         Process p = pb.start();
         AtomicInteger committed = new AtomicInteger();

@@ -43,6 +43,8 @@ public final class ChainVerifier {
     private final Map<Long, RecordStatus> statusByRecord = new HashMap<>();
     private final Map<Long, Integer> lastSeqByRecord = new HashMap<>();
     private final List<BrokenLink> brokenLinks = new ArrayList<>();
+    /** HMAC mismatches: reported unless the head shows the whole register is sealed with another key. */
+    private final List<ChainProblem> macMismatches = new ArrayList<>();
     private String expectedPrev = EventHash.GENESIS;
     private String lastHash = EventHash.GENESIS;
     private long lastPosition;
@@ -103,7 +105,10 @@ public final class ChainVerifier {
             explainLink(b);
         }
         checkTail(head);
-        checkHeadSeal(head);
+        if (!checkHeadSeal(head)) {
+            // the wrong key: one verdict for the register instead of one per event
+            problems.addAll(macMismatches);
+        }
         List<String> limits = new ArrayList<>();
         long sinceAnchor = checkAnchor(limits);
         if (key == null) {
@@ -146,7 +151,7 @@ public final class ChainVerifier {
                                 + " it was written by someone without the register key"));
             }
         } else if (!RegisterKey.sameMac(e.mac(), key.mac(e.hash()))) {
-            problems.add(new ChainProblem(ChainProblem.Kind.FORGED, e.position(), e.recordId(), e.seq(),
+            macMismatches.add(new ChainProblem(ChainProblem.Kind.FORGED, e.position(), e.recordId(), e.seq(),
                     "step " + e.seq() + " at position " + e.position() + " has an HMAC that does not match the register key:"
                             + " it was written or rewritten without the key (or the key file is not this register's)"));
         }
@@ -242,9 +247,10 @@ public final class ChainVerifier {
         }
     }
 
-    private void checkHeadSeal(ChainHead head) {
+    /** @return true when the head is sealed with another key (so every event's MAC mismatch is that, not a forgery) */
+    private boolean checkHeadSeal(ChainHead head) {
         if (key == null || head == null || seen.isEmpty()) {
-            return;
+            return false;
         }
         if (head.mac() == null) {
             problems.add(new ChainProblem(ChainProblem.Kind.FORGED, lastPosition + 1, 0, 0,
@@ -254,11 +260,13 @@ public final class ChainVerifier {
             problems.add(new ChainProblem(ChainProblem.Kind.OTHER_KEY, lastPosition + 1, 0, 0,
                     "the register is sealed with key " + head.keyId() + ", not with the given key " + key.id()
                             + ": another register, or the wrong key file"));
+            return true;
         } else if (!RegisterKey.sameMac(head.mac(), key.headMac(head.events(), head.lastHash(), head.maxRecordId()))) {
             problems.add(new ChainProblem(ChainProblem.Kind.FORGED, lastPosition + 1, 0, 0,
                     "the head note's HMAC does not match (" + head.events() + " events, newest " + shortHash(head.lastHash())
                             + "): it was moved by someone without the key, e.g. to hide removed events"));
         }
+        return false;
     }
 
     private long checkAnchor(List<String> limits) {
