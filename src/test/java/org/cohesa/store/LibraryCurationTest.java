@@ -117,7 +117,7 @@ class LibraryCurationTest {
     void gammaButyrolactoneAndCyreneCarryTheCorrectedValues() {
         // gamma-butyrolactone: Hansen, Hansen Solubility Parameters: A User's Handbook, 2nd ed. (2007), solvent table:
         // 19.0, 16.6, 7.4 (from memory; the earlier bundle had δD 18.0). Cyrene: Sherwood et al., Chem. Commun. 50
-        // (2014) 9650: 18.8, 12.4, 7.1 (as quoted in issue 12; the earlier bundle had δP 10.6).
+        // (2014) 9650: 18.8, 12.4, 7.1 (from memory of the paper; the earlier bundle had δP 10.6).
         assertHsp("96-48-0", 19.0, 16.6, 7.4);
         assertHsp("53716-82-8", 18.8, 12.4, 7.1);
         assertEquals("memory-sherwood-2014", solvent("53716-82-8").get("src_hsp"));
