@@ -2,6 +2,7 @@ package org.cohesa.store;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.ByteArrayInputStream;
 import java.io.InputStreamReader;
@@ -55,7 +56,44 @@ class TestSeriesCsvTest {
     @Test
     void headerWithoutScoreIsRefused() throws Exception {
         BadRowsException e = assertThrows(BadRowsException.class,
-                () -> TestSeriesCsv.read("t.csv", new StringReader("liquid,result\ntoluene,1\n"), library()));
-        assertEquals("score", e.errors().get(0).column());
+                () -> TestSeriesCsv.read("t.csv", new StringReader("liquid,outcome\ntoluene,1\n"), library()));
+        assertEquals(List.of("outcome", "score"), e.errors().stream().map(x -> x.column()).toList());
+        assertEquals("the header has no result column: name it score, result or soluble", e.errors().get(1).reason());
+    }
+
+    @Test
+    void headersAsLabsTypeThemInAnyCaseWithSemicolonsOrTabsAndABom() throws Exception {
+        SolventLibrary lib = library();
+        List<TestResult> semi = TestSeriesCsv.read("t.csv", new StringReader("\uFEFFSolvent;Result\ntoluene;yes\nethanol;No\nacetone;partial\n"
+                + "\"1,4-dioxane\";0,5\n"), lib);
+        assertEquals(List.of(1.0, 0.0, 0.5, 0.5), semi.stream().map(TestResult::score).toList());
+        assertEquals("toluene", semi.get(0).label());
+        List<TestResult> tab = TestSeriesCsv.read("t.tsv", new StringReader("NAME\tSOLUBLE\ntoluene\t+\nwater\t-\nacetone\t±\nethanol\t−\n"), lib);
+        assertEquals(List.of(1.0, 0.0, 0.5, 0.0), tab.stream().map(TestResult::score).toList());
+        // by CAS number alone: 108-88-3 is toluene (CAS Registry; the bundled table's cas column)
+        List<TestResult> cas = TestSeriesCsv.read("t.csv", new StringReader("CAS,score\n108-88-3,1\n64-17-5,0\n67-64-1,1\n"), lib);
+        assertEquals(lib.resolve("t", "toluene").hansen(), cas.get(0).liquid());
+        List<TestResult> words = TestSeriesCsv.read("t.csv", new StringReader("liquid,score\ntoluene,Y\nwater,n\nacetone,+/-\nxylene,1\n"), lib);
+        assertEquals(List.of(1.0, 0.0, 0.5, 1.0), words.stream().map(TestResult::score).toList());
+    }
+
+    @Test
+    void anUnreadableResultOrColumnIsOneLineNamingTheColumn() throws Exception {
+        SolventLibrary lib = library();
+        BadRowsException e = assertThrows(BadRowsException.class,
+                () -> TestSeriesCsv.read("t.csv", new StringReader("solvent;result\ntoluene;maybe\n"), lib));
+        assertEquals(1, e.errors().size());
+        assertEquals("line 2, column result, value 'maybe': not a result: write 1, 0 or a graded number between, yes/no/partial, or +/-/±",
+                e.errors().get(0).describe());
+        BadRowsException u = assertThrows(BadRowsException.class,
+                () -> TestSeriesCsv.read("t.csv", new StringReader("liquid,score,colour\ntoluene,1,red\n"), lib));
+        assertEquals("colour", u.errors().get(0).column());
+        BadRowsException twice = assertThrows(BadRowsException.class,
+                () -> TestSeriesCsv.read("t.csv", new StringReader("liquid,solvent,score\ntoluene,toluene,1\n"), lib));
+        assertEquals("a second liquid column (the first is 'liquid'); keep one", twice.errors().get(0).reason());
+        // a comma-separated file with an unquoted 1,4-dioxane: the row is too long, and the message says to quote it
+        BadRowsException comma = assertThrows(BadRowsException.class,
+                () -> TestSeriesCsv.read("t.csv", new StringReader("liquid,score\n1,4-dioxane,1\n"), lib));
+        assertTrue(comma.errors().get(0).reason().contains("quote names that hold a comma"), comma.errors().get(0).reason());
     }
 }

@@ -27,7 +27,7 @@ import picocli.CommandLine.Option;
  * unit tests). Each workflow adds its own subcommand.
  */
 @Command(name = "bench", description = "Time the heavy computations on this machine (median of several runs).",
-        subcommands = {BenchCommand.Fit.class, BenchCommand.Dry.class, BenchBlendCommand.class, BenchCommand.Hazards.class})
+        subcommands = {BenchCommand.Fit.class, BenchFitChecksCommand.class, BenchCommand.Dry.class, BenchBlendCommand.class, BenchCommand.Hazards.class})
 public final class BenchCommand implements Runnable {
 
     @CommandLine.Spec
@@ -52,7 +52,7 @@ public final class BenchCommand implements Runnable {
     }
 
     /** What {@code bench fit --json} prints. */
-    record FitBench(String benchmark, int results, int resamples, @JsonUnwrapped Timing timing) {
+    record FitBench(String benchmark, String method, int results, int resamples, @JsonUnwrapped Timing timing) {
     }
 
     /**
@@ -114,6 +114,7 @@ public final class BenchCommand implements Runnable {
         @Option(names = "--resamples", description = "Bootstrap resamples (default ${DEFAULT-VALUE}).") int resamples = 200;
         @Option(names = "--runs", description = "Timed runs (default ${DEFAULT-VALUE}).") int runs = 7;
         @Option(names = "--seed", description = "Seed of the invented data and of the fit (default ${DEFAULT-VALUE}).") long seed = 5;
+        @Option(names = "--method", description = "Fit method: likelihood (default), classic or consensus.") String method = "likelihood";
 
         @Override
         protected void execute() {
@@ -126,16 +127,22 @@ public final class BenchCommand implements Runnable {
             if (resamples < 0 || resamples > 10_000) {
                 throw new org.cohesa.core.InvalidInputException("--resamples", String.valueOf(resamples), "must lie between 0 and 10000");
             }
+            org.cohesa.core.target.FitMethod fitMethod;
+            try {
+                fitMethod = org.cohesa.core.target.FitMethod.parse(method);
+            } catch (IllegalArgumentException e) {
+                throw new org.cohesa.core.InvalidInputException("--method", method, "must be one of " + org.cohesa.core.target.FitMethod.allowed());
+            }
             List<TestResult> data = invented(results, seed);
-            FitOptions options = new FitOptions(seed, resamples, 12, 5);
+            FitOptions options = new FitOptions(seed, resamples, 12, 5).withMethod(fitMethod);
             double[] t = time(1, runs, () -> SphereFitter.fit(data, List.of(), options));
             Timing timing = Timing.of(t);
             if (json()) {
-                Output.json(out(), new FitBench("fit", results, resamples, timing));
+                Output.json(out(), new FitBench("fit", fitMethod.key(), results, resamples, timing));
                 return;
             }
-            out().printf(Locale.ROOT, "sphere fit, %d results, %d bootstrap resamples, %d cores: median %.3f s (min %.3f, max %.3f) over %d runs%n",
-                    results, resamples, timing.cores(), timing.medianS(), timing.minS(), timing.maxS(), runs);
+            out().printf(Locale.ROOT, "sphere fit (%s), %d results, %d bootstrap resamples, %d cores: median %.3f s (min %.3f, max %.3f) over %d runs%n",
+                    fitMethod.key(), results, resamples, timing.cores(), timing.medianS(), timing.minS(), timing.maxS(), runs);
         }
 
         /**

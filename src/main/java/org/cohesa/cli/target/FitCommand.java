@@ -36,9 +36,11 @@ import picocli.CommandLine.Parameters;
 /** {@code cohesa fit FILE.csv}: a solubility sphere from the user's dissolving tests. */
 @Command(name = "fit", description = {
         "Fit a solubility sphere to your dissolving tests.",
-        "FILE is CSV with a header: liquid (library name, CAS, or a blend \"NAME:FRACTION;NAME:FRACTION\" in quotes),",
-        "score (1 dissolves, 0 does not, graded values between), optional dD,dP,dH for liquids not in the library,",
-        "optional temperature_c and note."})
+        "FILE is a table with a header, comma, semicolon or tab separated (UTF-8, a byte-order mark is fine); header names in any case:",
+        "  liquid, solvent or name: a library name, synonym or CAS, or a blend \"NAME:FRACTION;NAME:FRACTION\" in quotes; or a CAS column;",
+        "  score, result or soluble: 1/0 or a graded number between, yes/no/partial (y/n), or +/-/±;",
+        "  optional dD,dP,dH for liquids not in the library, temperature_c and note.",
+        "With semicolons or tabs a decimal comma (0,5) is read as 0.5."})
 public final class FitCommand extends CohesaSubcommand {
 
     @Parameters(paramLabel = "FILE", description = "CSV file of test results.")

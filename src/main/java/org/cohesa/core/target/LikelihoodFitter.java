@@ -134,7 +134,7 @@ public final class LikelihoodFitter {
         ConfidenceRegion confidence = new ConfidenceRegion(level, inside.size(), box[0], box[1], box[2], box[3], warnings);
 
         List<ResultProbability> probabilities = probabilities(results, sphere, model);
-        List<NextTest> next = InformationAdvisor.suggest(sphere, pts, w, untested, model, options.nextTests());
+        List<NextTest> next = InformationAdvisor.suggest(best, data, cloud, untested, model, prior, options.nextTests());
         List<String> notes = notes(probabilities, model, prior);
         return new FitResult(sphere, SphereFitter.quality(results, sphere), confidence, next, results.size(), FitMethod.LIKELIHOOD,
                 probabilities, region, prior, notes);

@@ -1,0 +1,151 @@
+package org.cohesa.cli.bench;
+
+import com.fasterxml.jackson.annotation.JsonProperty;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.cohesa.cli.CohesaSubcommand;
+import org.cohesa.cli.Output;
+import org.cohesa.cli.TextTable;
+import org.cohesa.core.InvalidInputException;
+import org.cohesa.core.hsp.SolubilitySphere;
+import org.cohesa.core.target.CommonTestLiquids;
+import org.cohesa.core.target.FitValidation;
+import org.cohesa.core.target.Material;
+import org.cohesa.core.target.NamedPoint;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/**
+ * {@code cohesa bench fit-checks}: the sphere fit measured on seeded synthetic series (issue 14): centre and R0
+ * error, coverage of the 95 % region, detection of flipped results, the classic baseline side by side, and the
+ * next-test benefit curve. The figures in docs/methods.md come from this command.
+ */
+@Command(name = "fit-checks", description = {
+        "Measure the sphere fit on seeded synthetic series: published library spheres, series of 15, 20 and 30 of the",
+        "35 common test liquids, clean and with two results flipped near the surface (RED 0.8-1.25); likelihood fit",
+        "and classic baseline side by side; then the centre error after 5 suggested tests vs 5 random common liquids."})
+final class BenchFitChecksCommand extends CohesaSubcommand {
+
+    /** The five spheres of issue 14. */
+    static final List<String> ISSUE_SPHERES = List.of("polystyrene", "poly(methyl methacrylate)", "polycarbonate",
+            "cellulose acetate butyrate", "ethyl cellulose");
+
+    @Option(names = "--trials", paramLabel = "N", description = "Trials per scenario (default ${DEFAULT-VALUE}).")
+    int trials = 30;
+
+    @Option(names = "--design-trials", paramLabel = "N", description = "Trials of the next-test curve (default ${DEFAULT-VALUE}).")
+    int designTrials = 30;
+
+    @Option(names = "--classic-resamples", paramLabel = "N", description = "Bootstrap resamples of the classic fit's box (default ${DEFAULT-VALUE}; 0 skips its coverage).")
+    int classicResamples = 100;
+
+    @Option(names = "--spheres", paramLabel = "SET", description = "issue (the five spheres of issue 14, default) or library (every library sphere with at least 4 of the common liquids inside and 4 outside).")
+    String spheres = "issue";
+
+    @Option(names = "--seed", paramLabel = "N", description = "Seed (default ${DEFAULT-VALUE}).")
+    long seed = 14;
+
+    record Row(int liquids, int flips, int trials, @JsonProperty("centre_error_median") double centreMedian,
+               @JsonProperty("centre_error_max") double centreMax, @JsonProperty("r0_error_median") double r0Median,
+               @JsonProperty("region_coverage") double regionCoverage, @JsonProperty("box_coverage") double boxCoverage,
+               @JsonProperty("flips_detected") Double flipsDetected, double bounded,
+               @JsonProperty("classic_centre_error_median") double classicCentreMedian,
+               @JsonProperty("classic_r0_error_median") double classicR0Median,
+               @JsonProperty("classic_box_coverage") Double classicBoxCoverage,
+               @JsonProperty("classic_flips_detected") Double classicFlipsDetected) {
+    }
+
+    record Curve(int trials, @JsonProperty("start_liquids") int startLiquids, List<Double> suggested, List<Double> random) {
+    }
+
+    record Report(String benchmark, String spheres, long seed, @JsonProperty("common_liquids") List<String> commonLiquids, List<Row> rows,
+                  @JsonProperty("next_tests") Curve nextTests, @JsonProperty("seconds") double seconds) {
+    }
+
+    @Override
+    protected void execute() {
+        if (trials < 1 || trials > 1000) {
+            throw new InvalidInputException("--trials", String.valueOf(trials), "must lie between 1 and 1000");
+        }
+        if (designTrials < 0 || designTrials > 1000) {
+            throw new InvalidInputException("--design-trials", String.valueOf(designTrials), "must lie between 0 and 1000");
+        }
+        if (classicResamples < 0 || classicResamples > 1000) {
+            throw new InvalidInputException("--classic-resamples", String.valueOf(classicResamples), "must lie between 0 and 1000");
+        }
+        if (!spheres.equals("issue") && !spheres.equals("library")) {
+            throw new InvalidInputException("--spheres", spheres, "must be issue or library");
+        }
+        long start = System.nanoTime();
+        List<NamedPoint> pool = CommonTestLiquids.resolve(ctx().library());
+        List<SolubilitySphere> truths = new ArrayList<>();
+        for (Material m : ctx().materials().library().all()) {
+            if (m.userEntry()) {
+                continue;
+            }
+            long in = pool.stream().filter(p -> m.sphere().contains(p.point())).count();
+            if (spheres.equals("issue") ? ISSUE_SPHERES.contains(m.name()) : in >= 4 && pool.size() - in >= 4) {
+                truths.add(m.sphere());
+            }
+        }
+        List<Row> rows = new ArrayList<>();
+        for (int size : new int[] {15, 20, 30}) {
+            for (int flips : new int[] {0, 2}) {
+                FitValidation.Figures f = FitValidation.run(truths, pool, new FitValidation.Scenario(size, flips, 0), trials,
+                        seed * 1000 + size * 10 + flips, true, classicResamples);
+                double n = f.trials();
+                rows.add(new Row(size, flips, f.trials(), Output.round(f.centreMedian(), 3), Output.round(f.centreMax(), 3),
+                        Output.round(f.r0Median(), 3), Output.round(f.regionCovered() / n, 3), Output.round(f.boxCovered() / n, 3),
+                        flips > 0 ? Output.round(f.detected() / n, 3) : null, Output.round(f.bounded() / n, 3),
+                        Output.round(f.classicCentreMedian(), 3), Output.round(f.classicR0Median(), 3),
+                        f.classicBoxCovered() < 0 ? null : Output.round(f.classicBoxCovered() / n, 3),
+                        flips > 0 ? Output.round(f.classicDetected() / n, 3) : null));
+            }
+        }
+        Curve curve = null;
+        if (designTrials > 0) {
+            List<NamedPoint> candidates = ctx().library().searchable().stream().map(s -> new NamedPoint(s.name(), s.hansen())).toList();
+            FitValidation.DesignCurve c = FitValidation.nextTestBenefit(truths, pool, candidates, 15, 5, designTrials, seed, true);
+            List<Double> s = new ArrayList<>();
+            List<Double> r = new ArrayList<>();
+            for (int k = 0; k < c.suggested().length; k++) {
+                s.add(Output.round(c.suggested()[k], 3));
+                r.add(Output.round(c.random()[k], 3));
+            }
+            curve = new Curve(c.trials(), c.startSize(), s, r);
+        }
+        double seconds = Output.round((System.nanoTime() - start) / 1e9, 1);
+        Report report = new Report("fit-checks", spheres + " (" + truths.size() + " spheres)", seed, CommonTestLiquids.NAMES, rows, curve, seconds);
+        if (json()) {
+            Output.json(out(), report);
+            return;
+        }
+        out().printf(Locale.ROOT, "sphere fit on synthetic series: %s, %d trials per row, seed %d; centre error |Δ(δD, δP, δH)| and R0 error in MPa^½%n",
+                report.spheres(), trials, seed);
+        TextTable t = new TextTable("liquids", "flips", "centre med", "centre max", "R0 med", "region cover", "box cover", "flips found",
+                "bounded", "classic centre", "classic R0", "classic box", "classic flips found");
+        for (Row x : rows) {
+            t.row(x.liquids(), x.flips(), Output.fmt(x.centreMedian(), 2), Output.fmt(x.centreMax(), 2), Output.fmt(x.r0Median(), 2),
+                    pct(x.regionCoverage()), pct(x.boxCoverage()), x.flipsDetected() == null ? "-" : pct(x.flipsDetected()), pct(x.bounded()),
+                    Output.fmt(x.classicCentreMedian(), 2), Output.fmt(x.classicR0Median(), 2),
+                    x.classicBoxCoverage() == null ? "-" : pct(x.classicBoxCoverage()),
+                    x.classicFlipsDetected() == null ? "-" : pct(x.classicFlipsDetected()));
+        }
+        t.print(out());
+        if (curve != null) {
+            out().printf(Locale.ROOT, "%nnext-test benefit (%d trials, clean series of %d liquids, median centre error after k added tests):%n",
+                    curve.trials(), curve.startLiquids());
+            TextTable c = new TextTable("added", "5 suggested tests", "5 random common liquids");
+            for (int k = 0; k < curve.suggested().size(); k++) {
+                c.row(k, Output.fmt(curve.suggested().get(k), 2), Output.fmt(curve.random().get(k), 2));
+            }
+            c.print(out());
+        }
+        out().printf(Locale.ROOT, "%.1f s on %d cores%n", seconds, Runtime.getRuntime().availableProcessors());
+    }
+
+    private static String pct(double share) {
+        return Output.fmt(100 * share, 0) + " %";
+    }
+}
