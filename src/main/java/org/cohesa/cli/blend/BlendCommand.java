@@ -68,7 +68,7 @@ public final class BlendCommand extends CohesaSubcommand {
         if (json()) {
             BlendReport.Target t = new BlendReport.Target(sphere.centre().dD(), sphere.centre().dP(), sphere.centre().dH(), sphere.r0(),
                     material == null ? null : material.name(), material == null ? null : material.source(), null);
-            Output.json(out(), new BlendReport.Blends(t, rankBy.word(), redLimit, options.ranking(r), BlendReport.search(r),
+            Output.json(out(), new BlendReport.Blends(t, rankBy.word(), redLimit, options.ranking(r, req.weights()), BlendReport.search(r),
                     BlendView.appliedLimits(c), BlendReport.suggestions(r, null), BlendView.SCREENING));
             return;
         }
@@ -76,7 +76,7 @@ public final class BlendCommand extends CohesaSubcommand {
                 + Output.fmt(sphere.centre().dH(), 1) + ", R0 " + Output.fmt(sphere.r0(), 1) + " MPa^½"
                 + (material == null ? "" : " (" + material.name() + ", source " + material.source() + ")"));
         out().println(BlendView.summary(r));
-        BlendView.header(out(), r, c, options);
+        BlendView.header(out(), r, c, options, req.weights());
         String secondary = BlendView.secondaryLabel(rankBy);
         List<String> header = new ArrayList<>(List.of("#", "blend (volume %)", "dD", "dP", "dH", "Ra", "RED"));
         if (secondary != null) {

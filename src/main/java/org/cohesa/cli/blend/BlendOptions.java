@@ -150,8 +150,8 @@ public final class BlendOptions {
     }
 
     /** The ranking settings as printed under --json. */
-    BlendReport.Ranking ranking(org.cohesa.core.blend.BlendDesigner.Result r) {
-        return new BlendReport.Ranking(rankBy().word(), preferWord(), weights().describe(), redLimit(), BlendView.costNote(this, r));
+    BlendReport.Ranking ranking(org.cohesa.core.blend.BlendDesigner.Result r, Desirability.Weights w) {
+        return new BlendReport.Ranking(rankBy().word(), preferWord(), w.describe(), redLimit(), BlendView.costNote(this, r));
     }
 
     /** Ranking or limiting by cost needs prices: with none in the library, say so in one line with the command that sets them. */
@@ -167,6 +167,11 @@ public final class BlendOptions {
         if (rankBy() == RankBy.COST) {
             throw new InvalidInputException("--rank-by", rankBy, why);
         }
+    }
+
+    /** True when the expert named the boiling weight. */
+    boolean boilingWeightGiven() {
+        return weights != null && weights.toLowerCase(Locale.ROOT).contains("boiling");
     }
 
     /** The preference word shown in the output. */

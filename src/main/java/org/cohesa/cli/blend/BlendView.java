@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.stream.Collectors;
 import org.cohesa.core.blend.BlendConstraints;
 import org.cohesa.core.blend.BlendDesigner;
+import org.cohesa.core.blend.Desirability;
 import org.cohesa.core.blend.HazardLimit;
 import org.cohesa.core.blend.ReactiveFlag;
 import org.cohesa.core.blend.BlendSuggestion;
@@ -133,7 +134,7 @@ public final class BlendView {
     }
 
     /** Prints the lines above a table: defaults, limits, cost note. */
-    static void header(PrintWriter out, BlendDesigner.Result r, BlendConstraints c, BlendOptions o) {
+    static void header(PrintWriter out, BlendDesigner.Result r, BlendConstraints c, BlendOptions o, Desirability.Weights w) {
         defaultsText(r.pool()).forEach(out::println);
         appliedLimits(c).forEach(out::println);
         String cost = costNote(o, r);
@@ -141,7 +142,7 @@ public final class BlendView {
             out.println(cost);
         }
         if (o.rankBy() == RankBy.DESIRABILITY) {
-            out.println("ranked by desirability (" + o.preferWord() + ": " + o.weights().describe() + "; RED ≤ " + Output.fmt(o.redLimit(), 2)
+            out.println("ranked by desirability (" + o.preferWord() + ": " + w.describe() + "; RED ≤ " + Output.fmt(o.redLimit(), 2)
                     + " qualifies; docs/methods.md) — --rank-by red gives the closest blends first");
         }
     }

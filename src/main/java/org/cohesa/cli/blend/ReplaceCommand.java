@@ -15,6 +15,7 @@ import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.blend.BlendConstraints;
 import org.cohesa.core.blend.BlendDesigner;
 import org.cohesa.core.blend.BlendSuggestion;
+import org.cohesa.core.blend.Desirability;
 import org.cohesa.core.blend.HazardLimit;
 import org.cohesa.core.safety.FlammableLiquidClass;
 import org.cohesa.core.target.Material;
@@ -112,7 +113,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
             throw new InvalidInputException("--max-components", String.valueOf(k), "must exceed the number of fixed components (" + c.fixed().size() + ")");
         }
         BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, k, options.top(), options.rankBy(), options.redLimit(),
-                options.keepTwoPhase, options.kelvin(), options.weights());
+                options.keepTwoPhase, options.kelvin(), replaceWeights(options, original));
         BlendDesigner.Result r = BlendDesigner.design(lib.all(), req, PhaseChecks.miscibility(), BlendView.progress(spec.commandLine().getErr()), null);
         boolean centred = target == null && material == null;
         List<String> replacedFor = why.words();
@@ -122,7 +123,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
                     original.flashPointC(), replacedFor, comparison(List.of(new BlendComponent(original, 1.0)), oh, original));
             BlendReport.Target t = new BlendReport.Target(sphere.centre().dD(), sphere.centre().dP(), sphere.centre().dH(), sphere.r0(),
                     mat == null ? null : mat.name(), mat == null ? null : mat.source(), centred);
-            Output.json(out(), new BlendReport.Replacement(o, t, options.rankBy().word(), options.ranking(r), BlendReport.search(r),
+            Output.json(out(), new BlendReport.Replacement(o, t, options.rankBy().word(), options.ranking(r, req.weights()), BlendReport.search(r),
                     BlendView.appliedLimits(c), BlendReport.suggestions(r, s -> comparison(s.blend().components(), s.blend().point(), original)),
                     BlendView.SCREENING));
             return;
@@ -134,7 +135,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
                 ? "replaced for: nothing named, and " + original.name() + " carries no CMR, organ-damage or acute-toxicity statement; --because says what must improve"
                 : "replaced for: " + String.join("; ", replacedFor));
         out().println(BlendView.summary(r));
-        BlendView.header(out(), r, c, options);
+        BlendView.header(out(), r, c, options, req.weights());
         TextTable t = new TextTable("", "solvent or blend (volume %)", "dD", "dP", "dH", "Ra to original", "RED", "score", "bp °C", "flash °C", "ICH",
                 "hazard statements", "phases");
         HansenParameters oh = original.hansen();
@@ -159,6 +160,17 @@ public final class ReplaceCommand extends CohesaSubcommand {
         out().println("For blends: bp is the range of the components, flash °C the blend's computed flash point (Liaw et al. 2002; '-' when not flammable or unknown, see --json), ICH the worst component class.");
         BlendView.notes(out(), r.suggestions(), options.all);
         out().println(BlendView.SCREENING);
+    }
+
+    /**
+     * Weight of the boiling term in replace: a substitute should leave the process the way the original does, so each
+     * 50 °C between a component's boiling point and the original's costs a point (as much as a flammability category).
+     */
+    public static final double BOILING_WEIGHT = 1.0;
+
+    static Desirability.Weights replaceWeights(BlendOptions o, Solvent original) {
+        Desirability.Weights w = o.weights();
+        return w.withBoiling(o.boilingWeightGiven() ? w.boiling() : BOILING_WEIGHT, original.boilingPointC());
     }
 
     /** The reasons the user named, or by default the original's own health statements. */

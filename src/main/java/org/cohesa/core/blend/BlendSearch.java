@@ -139,7 +139,7 @@ public final class BlendSearch {
         desirability = settings.rankBy() == RankBy.DESIRABILITY;
         List<Solvent> free = pool.free();
         if (desirability) {
-            double[] p0 = Desirability.penalties(free);
+            double[] p0 = Desirability.penalties(free, settings.weights());
             Integer[] ix = new Integer[free.size()];
             for (int i = 0; i < ix.length; i++) {
                 ix[i] = i;
@@ -209,10 +209,10 @@ public final class BlendSearch {
         costCap = constraints.maxCost() == null ? Double.NaN : (constraints.maxCost() - fixedCost) / s;
         redPerDist = s / target.r0();
         if (desirability) {
-            pen = Desirability.penalties(free);
+            pen = Desirability.penalties(free, settings.weights());
             double fp = 0;
             for (BlendComponent f : pool.fixed()) {
-                fp = Math.max(fp, HazardPenalty.of(f.solvent()).points());
+                fp = Math.max(fp, Desirability.componentPenalty(f.solvent(), settings.weights()));
             }
             fixedPen = fp;
             List<Solvent> priced = new ArrayList<>(free);
@@ -446,12 +446,12 @@ public final class BlendSearch {
 
     /**
      * The part of the desirability score a subset whose worst (first) member is {@code i} has before its
-     * composition is known: hazard of the worst component and the component count. Cost (≥ 0) and distance
+     * composition is known: the worst component's weighted penalty and the component count. Cost (≥ 0) and distance
      * (≥ 0) can only add to it, so it is a lower bound of the score.
      */
     private double baseScore(int i, int totalK) {
         Desirability.Weights wt = settings.weights();
-        return wt.hazard() * Math.max(pen[i], fixedPen) + wt.components() * (totalK - 1) + wt.cost() * fixedRelCost;
+        return Math.max(pen[i], fixedPen) + wt.components() * (totalK - 1) + wt.cost() * fixedRelCost;
     }
 
     /** Largest ψ-space distance a subset led by {@code i} may have: inside the RED limit and able to beat the bound; −1: none. */
@@ -948,7 +948,7 @@ public final class BlendSearch {
                 cost += scale * psi[a] * relPrice[ix[a]];
             }
             int totalK = ix.length + nFixed;
-            double score = wt.hazard() * worst + wt.components() * (totalK - 1) + wt.cost() * cost + wt.distance() * dist * redPerDist;
+            double score = worst + wt.components() * (totalK - 1) + wt.cost() * cost + wt.distance() * dist * redPerDist;
             Cand w = bound.get();
             if (w != null && compareTuple(0, score, dist, totalK, w) > 0) {
                 return null;

@@ -36,21 +36,52 @@ public final class Desirability {
      * @param components points per component beyond the first
      * @param cost       points per "one median price per litre"
      * @param distance   points per unit of RED
+     * @param boiling    points per 50 °C between a component's boiling point and {@code boilingReferenceC} (replace: the
+     *                   original's), capped at 3 × the weight, also when the boiling point is unknown
+     * @param boilingReferenceC the boiling point the boiling term measures from, °C; null: no boiling term
      */
-    public record Weights(double hazard, double components, double cost, double distance) {
+    public record Weights(double hazard, double components, double cost, double distance, double boiling, Double boilingReferenceC) {
         public Weights {
-            for (double w : new double[] {hazard, components, cost, distance}) {
+            for (double w : new double[] {hazard, components, cost, distance, boiling}) {
                 if (!(w >= 0) || !Double.isFinite(w) || w > 1000) {
                     throw new IllegalArgumentException("weights must be numbers from 0 to 1000, got " + w);
                 }
             }
         }
 
+        /** Weights without a boiling term. */
+        public Weights(double hazard, double components, double cost, double distance) {
+            this(hazard, components, cost, distance, 0, null);
+        }
+
+        /** The same weights measuring boiling points from {@code referenceC} with weight {@code w}. */
+        public Weights withBoiling(double w, Double referenceC) {
+            return new Weights(hazard, components, cost, distance, w, referenceC);
+        }
+
         /** "hazard 1, components 2, cost 1, distance 1". */
         public String describe() {
             return "hazard " + HazardPenalty.fmt(hazard) + ", components " + HazardPenalty.fmt(components) + ", cost "
-                    + HazardPenalty.fmt(cost) + ", distance " + HazardPenalty.fmt(distance);
+                    + HazardPenalty.fmt(cost) + ", distance " + HazardPenalty.fmt(distance)
+                    + (boilingReferenceC == null || boiling == 0 ? "" : ", boiling " + HazardPenalty.fmt(boiling) + " per 50 °C from "
+                    + HazardPenalty.fmt(Math.round(boilingReferenceC)) + " °C");
         }
+    }
+
+    /** Points of the boiling term per 50 °C, unweighted, for one solvent (0 without a reference). */
+    static double boilingPoints(Solvent s, Double referenceC) {
+        if (referenceC == null) {
+            return 0;
+        }
+        if (s.boilingPointC() == null) {
+            return 3; // unknown: as far as the cap (a substitute must be shown to leave the process like the original)
+        }
+        return Math.min(3, Math.abs(s.boilingPointC() - referenceC) / 50.0);
+    }
+
+    /** The weighted penalty one component brings: hazard and (replace) boiling distance. The blend takes its worst component's. */
+    static double componentPenalty(Solvent s, Weights w) {
+        return w.hazard() * HazardPenalty.of(s).points() + (w.boilingReferenceC() == null ? 0 : w.boiling() * boilingPoints(s, w.boilingReferenceC()));
     }
 
     /** What the user leans towards; each preset is a set of weights (docs/methods.md gives the reasons). */
@@ -99,8 +130,8 @@ public final class Desirability {
      * @throws InvalidInputException naming the field and the bad part
      */
     public static Weights parseWeights(String field, String text, Weights base) {
-        double[] w = {base.hazard(), base.components(), base.cost(), base.distance()};
-        String[] names = {"hazard", "components", "cost", "distance"};
+        double[] w = {base.hazard(), base.components(), base.cost(), base.distance(), base.boiling()};
+        String[] names = {"hazard", "components", "cost", "distance", "boiling"};
         for (String part : text.split(",")) {
             String p = part.strip();
             if (p.isEmpty()) {
@@ -118,7 +149,7 @@ public final class Desirability {
                 }
             }
             if (idx < 0) {
-                throw new InvalidInputException(field, p, "unknown weight '" + key + "'; weights are hazard, components, cost, distance");
+                throw new InvalidInputException(field, p, "unknown weight '" + key + "'; weights are hazard, components, cost, distance, boiling");
             }
             double v;
             try {
@@ -131,7 +162,7 @@ public final class Desirability {
             }
             w[idx] = v;
         }
-        return new Weights(w[0], w[1], w[2], w[3]);
+        return new Weights(w[0], w[1], w[2], w[3], w[4], base.boilingReferenceC());
     }
 
     /** Median price per litre of the solvents that have one, or NaN when none has. */
@@ -155,21 +186,30 @@ public final class Desirability {
      */
     public static Explanation explain(List<BlendComponent> components, double red, double redLimit, Weights weights, double refPrice) {
         List<String> why = new ArrayList<>();
-        why.add(String.format(Locale.ROOT, "inside with margin %.2f (RED %.2f ≤ %.2f)", Math.max(0, 1 - red), red, redLimit));
+        why.add(red <= redLimit * (1 + 1e-9) ? String.format(Locale.ROOT, "inside with margin %.2f (RED %.2f ≤ %.2f)", Math.max(0, 1 - red), red, redLimit)
+                : String.format(Locale.ROOT, "RED %.2f, above the limit %.2f", red, redLimit));
         Solvent worst = null;
-        HazardPenalty worstP = null;
+        double worstPen = -1;
         for (BlendComponent c : components) {
-            HazardPenalty p = HazardPenalty.of(c.solvent());
-            if (worstP == null || p.points() > worstP.points()) {
+            double p = componentPenalty(c.solvent(), weights);
+            if (p > worstPen) {
                 worst = c.solvent();
-                worstP = p;
+                worstPen = p;
             }
         }
+        HazardPenalty worstP = worst == null ? null : HazardPenalty.of(worst);
         double hazard = worstP == null ? 0 : worstP.points();
-        List<String> shown = worstP == null ? List.of() : worstP.terms().stream().filter(t -> !t.endsWith(" 0")).toList();
+        List<String> shown = worstP == null ? List.of() : worstP.terms();
         String who = components.size() == 1 ? "" : "worst component " + worst.name() + ": ";
-        why.add(hazard == 0 ? (components.size() == 1 ? "no hazard terms" : "no component has hazard terms")
-                : who + "hazard " + HazardPenalty.fmt(hazard) + " (" + String.join(", ", shown) + ")");
+        String boil = "";
+        if (worst != null && weights.boilingReferenceC() != null && weights.boiling() > 0) {
+            double b = boilingPoints(worst, weights.boilingReferenceC());
+            boil = worst.boilingPointC() == null ? "; boiling point unknown (+" + HazardPenalty.fmt(weights.boiling() * b) + ")"
+                    : String.format(Locale.ROOT, "; boils %.0f °C from the original (+%s)", Math.abs(worst.boilingPointC() - weights.boilingReferenceC()),
+                    HazardPenalty.fmt(Math.round(weights.boiling() * b * 100) / 100.0));
+        }
+        why.add((hazard == 0 ? (components.size() == 1 ? "no hazard terms" : who + "no hazard terms")
+                : who + "hazard " + HazardPenalty.fmt(hazard) + " (" + String.join(", ", shown) + ")") + boil);
         int k = components.size();
         why.add(k + (k == 1 ? " component" : " components"));
         double cost = 0;
@@ -182,7 +222,7 @@ public final class Desirability {
             cost = price / refPrice;
             why.add(String.format(Locale.ROOT, "price %.2f/L%s", price, allPriced ? "" : " (some components without a price)"));
         }
-        double score = weights.hazard() * hazard + weights.components() * (k - 1) + weights.cost() * cost + weights.distance() * red;
+        double score = Math.max(0, worstPen) + weights.components() * (k - 1) + weights.cost() * cost + weights.distance() * red;
         why.add(String.format(Locale.ROOT, "score %.2f", score));
         return new Explanation(score, hazard, worst == null ? null : worst.name(), why);
     }
@@ -200,9 +240,9 @@ public final class Desirability {
     }
 
     /** Penalties of many solvents at once (search set-up). */
-    static double[] penalties(List<Solvent> solvents) {
+    static double[] penalties(List<Solvent> solvents, Weights w) {
         double[] p = new double[solvents.size()];
-        Arrays.setAll(p, i -> HazardPenalty.of(solvents.get(i)).points());
+        Arrays.setAll(p, i -> componentPenalty(solvents.get(i), w));
         return p;
     }
 }

@@ -32,7 +32,8 @@ import org.cohesa.core.solvent.Solvent;
  *   <li>solvent guide (CHEM21 ranking by default): recommended 0, problematic 1, hazardous 2.5;</li>
  *   <li>ICH Q3C: class 1 5, class 2 1.5, class 3 0, not listed 0.5 (needs justification under Q3C);</li>
  *   <li>environment: ozone H420 3; aquatic acute/chronic 1–2 (H400, H410, H411) 1, (H412, H413) 0.5;
- *       peroxide former 0.5.</li>
+ *       peroxide former 0.5; halogenated (Cl, Br, I in the formula, or the chlorinated family) 1.5: halogenated waste
+ *       must be segregated and incinerated, and the published selection guides place most of them low.</li>
  * </ul>
  * A solvent with no hazard statements and no source for them (the library does not know) gets 2 points: unknown is
  * not safe, and it must not outrank a liquid whose statements are known to be mild. Water scores 0.
@@ -139,6 +140,9 @@ public record HazardPenalty(double points, List<String> terms) {
         if (s.peroxideFormer()) {
             t.add(new Term(0.5, "peroxide former"));
         }
+        if (halogenated(s)) {
+            t.add(new Term(1.5, "halogenated (Cl/Br/I)"));
+        }
         t.sort((a, b) -> Double.compare(b.points(), a.points()));
         double sum = t.stream().mapToDouble(Term::points).sum();
         return new HazardPenalty(sum, t.stream().map(x -> x.label() + " " + fmt(x.points())).toList());
@@ -153,6 +157,15 @@ public record HazardPenalty(double points, List<String> terms) {
             }
         }
         return SafetyProfiler.labelledCategory(s);
+    }
+
+    /** Chlorine, bromine or iodine in the Hill formula, or the chlorinated family. */
+    static boolean halogenated(Solvent s) {
+        String f = s.formula();
+        if (f != null && f.matches(".*(Cl|Br|I)(?![a-z]).*")) {
+            return true;
+        }
+        return s.inFamily("chlorinated");
     }
 
     private static boolean has(Solvent s, String... families) {

@@ -1,0 +1,199 @@
+package org.cohesa.cli.blend;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayInputStream;
+import java.io.InputStreamReader;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import org.cohesa.core.activity.BundledLiquids;
+import org.cohesa.core.blend.BlendConstraints;
+import org.cohesa.core.blend.BlendDesigner;
+import org.cohesa.core.blend.BlendSuggestion;
+import org.cohesa.core.blend.CandidatePool;
+import org.cohesa.core.blend.Desirability;
+import org.cohesa.core.blend.HazardLimit;
+import org.cohesa.core.blend.RankBy;
+import org.cohesa.core.hsp.SolubilitySphere;
+import org.cohesa.core.solvent.BlendComponent;
+import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.target.Material;
+import org.cohesa.store.BundledData;
+import org.cohesa.store.MaterialCsv;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The default ranking over the real bundled library and every bundled material: the checks of issue 11 (safety-first
+ * defaults, singles and pairs in view, diversity) and published replacement outcomes as outside checks.
+ */
+class RankingChecksTest {
+
+    private static List<Solvent> library;
+    private static List<Material> materials;
+    private static final Map<String, BlendDesigner.Result> DEFAULT_RESULTS = new HashMap<>();
+
+    @BeforeAll
+    static void load() throws Exception {
+        library = BundledLiquids.library().all();
+        BundledData b = BundledData.resource("materials.csv");
+        materials = MaterialCsv.read(b.name(), new InputStreamReader(new ByteArrayInputStream(b.bytes()), StandardCharsets.UTF_8), false);
+    }
+
+    /** The command line's defaults: no CMR, no ICH class 1, RED ≤ 0.8, 3 components, top 10, desirability. */
+    static BlendConstraints defaults(List<HazardLimit> limits, Solvent exclude) {
+        BlendConstraints c = new BlendConstraints(List.of(), exclude == null ? List.of() : List.of(exclude), Set.of(), Set.of(), List.of(),
+                BlendConstraints.DEFAULT_MIN_FRACTION, 1.0, Map.of(), null, null, null, null, true, null);
+        return c.with(new BlendConstraints.More(true, false, limits, Set.of(), null, null, null));
+    }
+
+    static BlendDesigner.Result design(SolubilitySphere sphere, BlendConstraints c) {
+        return design(sphere, c, Desirability.DEFAULT);
+    }
+
+    static BlendDesigner.Result design(SolubilitySphere sphere, BlendConstraints c, Desirability.Weights w) {
+        BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, 3, 10, RankBy.DESIRABILITY, 0.8, false, 298.15, w);
+        return BlendDesigner.design(library, req, PhaseChecks.miscibility(), null, null);
+    }
+
+    private static synchronized BlendDesigner.Result forMaterial(Material m) {
+        return DEFAULT_RESULTS.computeIfAbsent(m.name(), k -> design(m.sphere(), defaults(List.of(), null)));
+    }
+
+    private static List<Solvent> solvents(BlendSuggestion s) {
+        return s.blend().components().stream().map(BlendComponent::solvent).toList();
+    }
+
+    @Test
+    void noDefaultSuggestionForAnyMaterialContainsACmrOrIchClassOneSolvent() {
+        int checked = 0;
+        for (Material m : materials) {
+            for (BlendSuggestion s : forMaterial(m).suggestions()) {
+                for (Solvent v : solvents(s)) {
+                    assertFalse(v.isCmr(), m.name() + ": " + v.name() + " " + v.hazardStatements());
+                    assertFalse(v.ichClass() != null && v.ichClass() == 1, m.name() + ": " + v.name() + " is ICH class 1");
+                }
+                checked++;
+            }
+        }
+        assertTrue(checked > 100, "enough suggestions to make the check bite: " + checked);
+    }
+
+    @Test
+    void aQualifyingSingleSolventOrPairIsAlwaysAmongTheFirstFive() {
+        BlendConstraints c = defaults(List.of(), null);
+        int materialsWithSingle = 0;
+        for (Material m : materials) {
+            CandidatePool pool = CandidatePool.of(library, c, m.sphere(), RankBy.DESIRABILITY);
+            boolean single = pool.free().stream().anyMatch(v -> m.sphere().red(v.hansen()) <= 0.6);
+            if (!single) {
+                continue;
+            }
+            materialsWithSingle++;
+            List<BlendSuggestion> top = forMaterial(m).suggestions();
+            boolean simple = top.stream().limit(5).anyMatch(s -> s.blend().size() <= 2);
+            assertTrue(simple, m.name() + ": no single solvent or pair in the top 5: " + top.stream().limit(5).map(s -> s.blend().blend().describe()).toList());
+        }
+        assertTrue(materialsWithSingle >= 20, "materials with a single solvent at RED ≤ 0.6: " + materialsWithSingle);
+    }
+
+    @Test
+    void noSolventFillsMoreThanHalfOfADefaultTopTen() {
+        for (Material m : materials) {
+            List<BlendSuggestion> top = forMaterial(m).suggestions();
+            if (top.size() < 10) {
+                continue; // fewer than ten distinct ideas qualify: the rule gives way
+            }
+            Map<Solvent, Integer> uses = new HashMap<>();
+            top.forEach(s -> solvents(s).forEach(v -> uses.merge(v, 1, Integer::sum)));
+            uses.forEach((v, n) -> assertTrue(n <= 5, m.name() + ": " + v.name() + " in " + n + " of 10"));
+            for (int i = 0; i < top.size(); i++) {
+                for (int j = i + 1; j < top.size(); j++) {
+                    assertFalse(top.get(i).blend().components().equals(top.get(j).blend().components()), "a suggestion appears twice");
+                }
+            }
+        }
+    }
+
+    /**
+     * Published preferred replacements. Sources: the CHEM21 guide (Prat, D. et al., Green Chem. 18 (2016) 288) and the
+     * ACS GCI Pharmaceutical Roundtable solvent selection guide (2011) with its companion replacement table for
+     * dipolar aprotics and chlorinated solvents; the lists below are recalled from memory of those publications:
+     * DMF and NMP → DMSO, Cyrene, N-butyl-2-pyrrolidone, γ-valerolactone, sulfolane, propylene carbonate;
+     * dichloromethane → ethyl acetate, 2-methyltetrahydrofuran, methyl tert-butyl ether, cyclopentyl methyl ether,
+     * toluene; diethyl ether → 2-methyltetrahydrofuran, methyl tert-butyl ether, cyclopentyl methyl ether;
+     * n-hexane → n-heptane, cyclohexane, methylcyclohexane.
+     */
+    private static final Map<String, List<String>> PUBLISHED = Map.of(
+            "N,N-dimethylformamide", List.of("dimethyl sulfoxide", "Cyrene", "N-butyl-2-pyrrolidone", "gamma-valerolactone", "sulfolane", "propylene carbonate"),
+            "N-methyl-2-pyrrolidone", List.of("dimethyl sulfoxide", "Cyrene", "N-butyl-2-pyrrolidone", "gamma-valerolactone", "sulfolane", "propylene carbonate"),
+            "dichloromethane", List.of("ethyl acetate", "2-methyltetrahydrofuran", "methyl tert-butyl ether", "cyclopentyl methyl ether", "toluene"),
+            "diethyl ether", List.of("2-methyltetrahydrofuran", "methyl tert-butyl ether", "cyclopentyl methyl ether"),
+            "n-hexane", List.of("n-heptane", "cyclohexane", "methylcyclohexane"));
+
+    @Test
+    void publishedReplacementsAreOfferedOrTheOutputShowsWhyNot() {
+        StringBuilder report = new StringBuilder();
+        for (Map.Entry<String, List<String>> e : PUBLISHED.entrySet()) {
+            Solvent original = BundledLiquids.get(e.getKey());
+            SolubilitySphere sphere = new SolubilitySphere(original.hansen(), ReplaceCommand.DEFAULT_RADIUS);
+            List<HazardLimit> limits = HazardLimit.from(original, HazardLimit.DEFAULT_KINDS);
+            // as replace does: the boiling term measures from the original's boiling point
+            BlendDesigner.Result r = design(sphere, defaults(limits, original), Desirability.DEFAULT.withBoiling(ReplaceCommand.BOILING_WEIGHT, original.boilingPointC()));
+            List<String> offered = new ArrayList<>();
+            r.suggestions().forEach(s -> solvents(s).forEach(v -> offered.add(v.name())));
+            List<String> found = e.getValue().stream().filter(offered::contains).toList();
+            List<String> whyNot = new ArrayList<>();
+            for (String name : e.getValue()) {
+                if (found.contains(name)) {
+                    continue;
+                }
+                Optional<Solvent> s = library.stream().filter(v -> v.name().equalsIgnoreCase(name)).findFirst();
+                String why;
+                if (s.isEmpty()) {
+                    why = "not in the library";
+                } else if (!s.get().hasHansen()) {
+                    why = "no Hansen parameters";
+                } else {
+                    String out = r.pool().leftOut().entrySet().stream().filter(x -> x.getValue().contains(s.get().name())).map(Map.Entry::getKey)
+                            .findFirst().orElse(null);
+                    double red = sphere.red(s.get().hansen());
+                    why = out != null ? "left out: " + out : red > 0.8 ? String.format("outside the replaced solvent's sphere (RED %.2f > 0.8)", red)
+                            : "ranked below ten other ideas";
+                }
+                whyNot.add(name + ": " + why);
+            }
+            report.append(e.getKey()).append(" → found ").append(found).append("; not: ").append(whyNot).append('\n');
+            boolean explained = whyNot.stream().noneMatch(w -> w.endsWith("ranked below ten other ideas"));
+            assertTrue(!found.isEmpty() || explained, "replacing " + e.getKey() + ": no published replacement in the top 10 and no reason:\n" + report);
+        }
+        // The dipolar aprotics are the published success stories: their own-sphere search must find a published answer.
+        assertTrue(report.toString().lines().filter(l -> l.startsWith("N")).allMatch(l -> !l.contains("found []")), report.toString());
+        System.out.println(report);
+    }
+
+    @Test
+    void replaceNeverOffersACandidateWithAStatementTheOriginalIsReplacedFor() {
+        for (String name : List.of("N-methyl-2-pyrrolidone", "N,N-dimethylformamide", "dichloromethane", "toluene", "chloroform", "1,4-dioxane")) {
+            Solvent original = BundledLiquids.get(name);
+            List<HazardLimit> limits = HazardLimit.from(original, HazardLimit.DEFAULT_KINDS);
+            assertFalse(limits.isEmpty(), name + " is replaced for its health statements");
+            BlendDesigner.Result r = design(new SolubilitySphere(original.hansen(), ReplaceCommand.DEFAULT_RADIUS), defaults(limits, original));
+            for (BlendSuggestion s : r.suggestions()) {
+                for (Solvent v : solvents(s)) {
+                    for (HazardLimit h : limits) {
+                        assertTrue(HazardLimit.level(h.kind(), v) < h.level(), name + " → " + v.name() + " is as bad on " + h.kind());
+                    }
+                }
+            }
+        }
+        assertEquals(2, HazardLimit.level("reprotoxic", BundledLiquids.get("N-methyl-2-pyrrolidone")), "H360D: category 1B (GHS)");
+    }
+}
