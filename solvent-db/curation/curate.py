@@ -299,6 +299,7 @@ def main(argv):
     alshehri = by_cas(p("alshehri-hansen-solubility-parameters.tsv"))
     schrier = by_cas(p("schrier-hansen-solubility-parameters.tsv"))
     vapour_tables = vapour.load_tables(ref)
+    vapour_points = vapour.load_points(os.path.join(HERE, "vapour-points.csv"))
     structures = structure_columns.read_structures()
     hvap = by_cas(p("crc-handbook-heat-of-vaporization.tsv"))
     phys = by_cas(p("physical-constants-of-organic-compounds.csv"))
@@ -483,7 +484,7 @@ def main(argv):
         # vapour pressure: one correlation per solvent, checked against the normal boiling point (curation/vapour.py)
         hv_pair = (num(hvap[cas][4]), num(hvap[cas][5])) if cas in hvap else None
         fp_k = float(r["flash_point_c"]) + 273.15 if r["flash_point_c"] else None
-        r.update(vapour.choose(cas, tb, vapour_tables, notes, proxy_tb, hv_pair, fp_k))
+        r.update(vapour.choose(cas, tb, vapour_tables, notes, proxy_tb, hv_pair, fp_k, vapour_points.get(cas)))
 
         # enthalpy of vaporisation at 25 °C (kJ/mol)
         if cas in hvap and num(hvap[cas][5]) is not None:

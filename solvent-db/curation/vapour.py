@@ -163,6 +163,34 @@ PROXIES = {
 
 # Source key of the stored estimate made from the CRC enthalpies of vaporisation (SOURCES.md, docs/methods.md).
 ESTIMATE_KEY = "estimate-clapeyron-crc-hvap"
+# Source key of the curve through the normal boiling point and one published vapour-pressure point (vapour-points.csv).
+POINT_KEY = "estimate-clapeyron-tb-point"
+MMHG_PA = 133.322
+
+
+def load_points(path):
+    """cas -> (T in K, P in Pa, source key, note) from curation/vapour-points.csv (one published point per solvent)."""
+    out = {}
+    if not os.path.exists(path):
+        return out
+    import csv
+    with open(path, encoding="utf-8", newline="") as f:
+        for row in csv.DictReader(f):
+            if row["cas"] in out:
+                raise SystemExit(f"vapour-points.csv: two points for {row['cas']}")
+            out[row["cas"]] = (float(row["t_c"]) + 273.15, float(row["p_pa"]), row["src"].strip(), row["note"].strip())
+    return out
+
+
+def point_curve(tb_k, point):
+    """Clausius–Clapeyron with constant ΔHvap through (Tb, 101.325 kPa) and one published point (T1, P1):
+    ΔHvap = R ln(101325/P1) / (1/T1 - 1/Tb). Range: T1..Tb (interpolation between the two data points)."""
+    t1, p1, src, _ = point
+    if tb_k is None or not t1 < tb_k - 10 or not 0 < p1 < ATM:
+        return None
+    h = R * math.log(ATM / p1) / (1 / t1 - 1 / tb_k)
+    coeffs = [f"{tb_k:.2f}", "101325", f"{h:.0f}", "0"]
+    return Candidate(POINT_KEY, "clapeyron", coeffs, f"{t1:.2f}", f"{tb_k:.2f}", label="curve through Tb and a published point")
 
 
 def crc_estimate(tb_k, hvap_tb, hvap_298):
@@ -184,7 +212,7 @@ def crc_estimate(tb_k, hvap_tb, hvap_298):
     return cand
 
 
-def choose(cas, tb_k, tables, notes, proxy_tb=None, hvap=None, flash_k=None):
+def choose(cas, tb_k, tables, notes, proxy_tb=None, hvap=None, flash_k=None, point=None):
     """The columns of the chosen correlation for one solvent ({} when none passes), adding reasons to notes.
 
     Rule (SOURCES.md, "Vapour pressure"): among the published candidates (of the solvent's CAS, else of its PROXIES
@@ -194,7 +222,8 @@ def choose(cas, tb_k, tables, notes, proxy_tb=None, hvap=None, flash_k=None):
     solvent's own normal boiling point within MAX_DEV_AT_TB (101.325 kPa ± 5 %, evaluated even where Tb lies outside
     its range) is taken. For a proxy without a boiling point of the solvent's own, the proxy's CRC boiling point
     (proxy_tb: cas -> K) is the check. When none passes, the estimate of crc_estimate (hvap: (ΔHvap at Tb, ΔHvap at
-    298.15 K) in J/mol, each or both None) is stored."""
+    298.15 K) in J/mol, each or both None) is stored — after a curve through Tb and a published point (point: see
+    load_points), which comes first because it rests on a measured value near room temperature."""
     cands = tables.get(cas, [])
     if not cands and cas in PROXIES:
         proxy, reason = PROXIES[cas]
@@ -216,6 +245,13 @@ def choose(cas, tb_k, tables, notes, proxy_tb=None, hvap=None, flash_k=None):
         if not cand.inside(ROOM_K):
             notes.append(f"vapour pressure at 25 °C extrapolated: {cand.label} fit covers {cand.range_text()}")
         return cand.columns()
+    if point is not None:
+        cur = point_curve(tb_k, point)
+        if cur is not None:
+            notes.append(f"vapour pressure: Clausius–Clapeyron curve through the boiling point and the published point "
+                         f"{point[1]:g} Pa at {point[0] - 273.15:g} °C (source {point[2]}: {point[3]}); an interpolation "
+                         f"between two data points, stored as an estimate")
+            return cur.columns()
     est = crc_estimate(tb_k, *(hvap or (None, None)))
     if est is not None:
         notes.append(f"vapour pressure estimated (Clausius–Clapeyron from the boiling point and CRC "
