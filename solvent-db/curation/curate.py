@@ -83,7 +83,9 @@ ICH_WRITE_CLASS_4 = False
 # Hazard-statement basis (manual.csv column hazard_basis) -> source key. "harmonised": the solvent has an entry in
 # CLP Regulation (EC) No 1272/2008 Annex VI Table 3 (the list recalled from memory); "self": no harmonised entry
 # recalled, so the statements are the usual supplier self-classification.
-HAZARD_BASIS_KEYS = {"harmonised": "memory-clp-annex-vi", "self": "memory-supplier-classification"}
+HAZARD_BASIS_KEYS = {"harmonised": "memory-clp-annex-vi", "self": "memory-supplier-classification",
+                     # checked against a stored copy (SOURCES.md names the copy for each solvent)
+                     "harmonised-checked": "clp-annex-vi-checked", "sds-checked": "supplier-sds-checked"}
 SELF_CLASSIFICATION_NOTE = "hazard statements: supplier self-classification, check the SDS"
 # A solvent without published Hansen parameters keeps all its other data and says so (never silently dropped).
 HSP_MISSING_NOTE = ("no published Hansen parameters found: left for the structure-based estimate "
