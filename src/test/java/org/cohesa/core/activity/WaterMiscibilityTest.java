@@ -175,4 +175,54 @@ class WaterMiscibilityTest {
 
     /** Measured with the bundled table (see docs/methods.md). */
     private static final double HIT_RATE_MEASURED = 87.0 / 110;
+    /**
+     * Where the model is used, how close are its mutual solubilities to the published ones? For every partly miscible
+     * pair with data that the model also splits, the predicted solubility of the solvent in water and of water in the
+     * solvent (mass %) against the table, as a factor exp|ln(predicted/published)|. Measured 2026-12-03 (docs/methods.md);
+     * asserted at those figures.
+     */
+    @Test
+    void modelMutualSolubilitiesAgainstTheData() {
+        List<Double> inWater = new ArrayList<>();
+        List<Double> waterIn = new ArrayList<>();
+        StringBuilder report = new StringBuilder();
+        Solvent water = BundledLiquids.get("water");
+        for (WaterSolubility row : DATA.rows()) {
+            Optional<Solvent> s = BundledLiquids.library().lookup(row.name()).stream().findFirst();
+            if (s.isEmpty() || row.miscible() || row.lcstC() != null) {
+                continue;
+            }
+            Optional<BinaryLle.Phases> ph;
+            try {
+                ph = BinaryLle.solve(List.of(s.get(), water), 273.15 + row.temperatureC());
+            } catch (IllegalArgumentException e) {
+                continue;
+            }
+            if (ph.isEmpty()) {
+                continue;
+            }
+            double m = s.get().molarMass();
+            double w1 = massPct(ph.get().x1Lean(), m);
+            double w2 = 100 - massPct(ph.get().x1Rich(), m);
+            inWater.add(Math.exp(Math.abs(Math.log(w1 / row.solventInWaterWtPct()))));
+            waterIn.add(Math.exp(Math.abs(Math.log(w2 / row.waterInSolventWtPct()))));
+            report.append(String.format(Locale.ROOT, "%s %.3g/%.3g %.3g/%.3g; ", row.name(), w1, row.solventInWaterWtPct(), w2, row.waterInSolventWtPct()));
+        }
+        java.util.Collections.sort(inWater);
+        java.util.Collections.sort(waterIn);
+        double m1 = inWater.get(inWater.size() / 2);
+        double m2 = waterIn.get(waterIn.size() / 2);
+        System.out.printf(Locale.ROOT, "model mutual solubilities, %d pairs: solvent in water median factor %.2f (worst %.3g), water in solvent %.2f (worst %.3g): %s%n",
+                inWater.size(), m1, inWater.get(inWater.size() - 1), m2, waterIn.get(waterIn.size() - 1), report);
+        assertTrue(inWater.size() >= 40, "pairs " + inWater.size());
+        assertTrue(m1 <= MEDIAN_IN_WATER + 0.01, "solvent in water: median factor " + m1);
+        assertTrue(m2 <= MEDIAN_WATER_IN + 0.01, "water in solvent: median factor " + m2);
+    }
+
+    private static double massPct(double x1, double m1) {
+        return 100 * x1 * m1 / (x1 * m1 + (1 - x1) * 18.015);
+    }
+
+    private static final double MEDIAN_IN_WATER = 2.51;
+    private static final double MEDIAN_WATER_IN = 1.42;
 }
