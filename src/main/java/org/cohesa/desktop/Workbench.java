@@ -63,9 +63,12 @@ public final class Workbench {
     private final DryingModel dryingModel;
     private final RecordsModel recordsModel;
     private final BlendModel blendModel;
+    private final Label startText = new Label();
+    private final VBox startOverlay;
 
     public Workbench(Session session, SceneAntialiasing antialiasing) {
         this.session = session;
+        startOverlay = startOverlay();
         root.setId("workbench");
         libraryModel = new LibraryModel(session);
         libraryView = new LibraryView(libraryModel);
@@ -84,7 +87,7 @@ public final class Workbench {
         tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         tabs.setId("screens");
         root.setTop(menus());
-        root.setCenter(tabs);
+        root.setCenter(new javafx.scene.layout.StackPane(tabs, startOverlay));
         root.setBottom(statusBar());
     }
 
@@ -139,9 +142,57 @@ public final class Workbench {
         return targetView;
     }
 
-    /** Loads the library off the FX thread; {@code then} runs on the FX thread once it is shown. */
+    /**
+     * Loads the library off the FX thread; {@code then} runs on the FX thread once it is shown. Until then the
+     * window says what is happening (on a first start the database is built from the bundled tables, which takes a while).
+     */
     public void load(Runnable then) {
-        libraryModel.reload(() -> recordsModel.reload(then));
+        boolean first = !java.nio.file.Files.exists(session.databaseFile());
+        startText.setText(first
+                ? "First start: building the solvent database from the bundled tables (every value with its source). This takes a moment, once."
+                : "Opening the solvent database…");
+        startOverlay.setVisible(true);
+        Runnable done = () -> {
+            startOverlay.setVisible(false);
+            if (then != null) {
+                then.run();
+            }
+        };
+        libraryModel.reload(() -> recordsModel.reload(done));
+        // a failed load must not leave the cover up: the status bar then says why
+        session.jobs().runningProperty().addListener(new javafx.beans.value.ChangeListener<>() {
+            @Override
+            public void changed(javafx.beans.value.ObservableValue<? extends Boolean> o, Boolean a, Boolean running) {
+                if (!running && session.jobs().failedProperty().get()) {
+                    startOverlay.setVisible(false);
+                    o.removeListener(this);
+                } else if (!running && !startOverlay.isVisible()) {
+                    o.removeListener(this);
+                }
+            }
+        });
+    }
+
+    /** True while the first load covers the window (for tests). */
+    public boolean starting() {
+        return startOverlay.isVisible();
+    }
+
+    private VBox startOverlay() {
+        javafx.scene.control.ProgressIndicator spin = new javafx.scene.control.ProgressIndicator();
+        spin.setMaxSize(56, 56);
+        startText.setWrapText(true);
+        startText.setMaxWidth(520);
+        startText.getStyleClass().add("headline");
+        Label status = new Label();
+        status.textProperty().bind(session.jobs().messageProperty());
+        status.getStyleClass().add("hint");
+        VBox v = new VBox(14, spin, startText, status);
+        v.setAlignment(Pos.CENTER);
+        v.setId("start-overlay");
+        v.getStyleClass().add("start-overlay");
+        v.setVisible(false);
+        return v;
     }
 
     public void show(Screen s) {

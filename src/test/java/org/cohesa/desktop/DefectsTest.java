@@ -138,4 +138,81 @@ class DefectsTest {
         });
         assertEquals(4, fx.workbench.blendModel().maxComponents.get(), "a typed value beyond the range is clamped to 4");
     }
+
+    @Test
+    void aDryingPathThatCannotBeComputedSaysWhyInThePane(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        // first a path that works, so there is a curve and an axis to be left over
+        robot.interact(() -> {
+            fx.session.targetProperty().set(DEMO);
+            fx.workbench.show(Screen.DRYING);
+            fx.workbench.dryingModel().blendTextProperty().set("acetone:0.3,n-butyl acetate:0.4,toluene:0.3");
+            fx.workbench.dryingModel().run(null);
+        });
+        fx.awaitJobs();
+        javafx.scene.chart.LineChart<?, ?> red = robot.lookup("#drying-red-chart").queryAs(javafx.scene.chart.LineChart.class);
+        assertFalse(red.getData().isEmpty());
+        // then one that cannot be computed (a liquid the library does not know stands for any failure of the computation)
+        String blend = "acetone:0.5,no such liquid:0.5";
+        robot.interact(() -> {
+            fx.workbench.dryingModel().blendTextProperty().set(blend);
+            fx.workbench.dryingModel().run(null);
+        });
+        fx.awaitJobs();
+        Label problem = robot.lookup("#drying-problem").queryAs(Label.class);
+        assertTrue(problem.isVisible() && problem.getText().contains("could not be computed"), problem.getText());
+        assertTrue(problem.getText().contains("no such liquid"), problem.getText());
+        String summary = robot.lookup("#drying-summary").queryAs(javafx.scene.control.TextArea.class).getText();
+        assertTrue(summary.contains("could not be computed"), "the summary pane says it too, instead of the Type-a-blend prompt: " + summary);
+        assertTrue(red.getData().isEmpty(), "no curve of an earlier blend is left");
+        assertEquals(1.5, ((javafx.scene.chart.NumberAxis) red.getYAxis()).getUpperBound(), 1e-9, "the RED axis is reset");
+    }
+
+    @Test
+    void theRegisterFormTakesTheReplacedLiquidFromTheCaseNotFromALibraryClick(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        robot.interact(() -> fx.session.selectedSolventProperty().set(fx.session.solvents().get(0)));
+        assertEquals("", fx.workbench.recordsModel().startingFiling().replaced(), "browsing the library decides nothing");
+        robot.interact(() -> fx.session.replacingProperty().set("toluene"));
+        assertEquals("toluene", fx.workbench.recordsModel().startingFiling().replaced());
+    }
+
+    @Test
+    void recordDetailsShowTheEvidenceWithItsContent(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        robot.interact(() -> {
+            fx.session.targetProperty().set(DEMO);
+            fx.workbench.show(Screen.RECORDS);
+            fx.workbench.recordsModel().file(new org.cohesa.desktop.records.RecordsModel.Filing("test line (invented)", null,
+                    "toluene", "acetone:0.5,ethyl acetate:0.5", "test of the record details", "tester", true), null);
+        });
+        fx.awaitJobs();
+        @SuppressWarnings("unchecked")
+        javafx.scene.control.TableView<org.cohesa.core.records.SubstitutionRecord> records =
+                robot.lookup("#records-table").queryAs(javafx.scene.control.TableView.class);
+        robot.interact(() -> records.getSelectionModel().select(records.getItems().size() - 1));
+        String details = robot.lookup("#record-details").queryAs(javafx.scene.control.TextArea.class).getText();
+        String evidence = details.substring(details.indexOf("Evidence"));
+        assertTrue(evidence.contains("Safety"), evidence);
+        assertTrue(evidence.toLowerCase(java.util.Locale.ROOT).contains("flash point"), "the sections' content, not only their names: " + evidence);
+        assertTrue(evidence.contains("ethyl acetate"), evidence);
+        assertFalse(details.contains("Z  "), "times are local, not raw UTC stamps: " + details);
+    }
+
+    @Test
+    void aFirstStartSaysTheDatabaseIsBeingBuilt(FxRobot robot) throws Exception {
+        java.nio.file.Path fresh = java.nio.file.Files.createTempDirectory("cohesa-first-start");
+        org.cohesa.desktop.common.Session s = new org.cohesa.desktop.common.Session(fresh.resolve("cohesa.db"));
+        Workbench[] w = new Workbench[1];
+        robot.interact(() -> {
+            w[0] = new Workbench(s, javafx.scene.SceneAntialiasing.DISABLED);
+            w[0].load(null);
+        });
+        assertTrue(w[0].starting(), "the window is covered by the start notice while the database is built");
+        Label text = (Label) w[0].root().lookup("#start-overlay").lookupAll(".headline").iterator().next();
+        assertTrue(text.getText().startsWith("First start: building the solvent database"), text.getText());
+        WaitForAsyncUtils.waitFor(90, TimeUnit.SECONDS, () -> !s.jobs().runningProperty().get() && !s.solvents().isEmpty());
+        WaitForAsyncUtils.waitForFxEvents();
+        assertFalse(w[0].starting(), "the notice goes once the library is shown");
+    }
 }

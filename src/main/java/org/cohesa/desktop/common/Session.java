@@ -4,6 +4,8 @@ import java.nio.file.Path;
 import java.util.List;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.cohesa.core.hsp.HansenParameters;
@@ -28,6 +30,7 @@ public final class Session {
     private final ObjectProperty<Solvent> selectedSolvent = new SimpleObjectProperty<>();
     private final ObjectProperty<Blend> selectedBlend = new SimpleObjectProperty<>();
     private final ObjectProperty<List<HansenParameters>> dryingPath = new SimpleObjectProperty<>(List.of());
+    private final StringProperty replacing = new SimpleStringProperty("");
 
     public Session(Path databaseFile) {
         this.databaseFile = databaseFile;
@@ -69,6 +72,11 @@ public final class Session {
 
     public ObjectProperty<Blend> selectedBlendProperty() {
         return selectedBlend;
+    }
+
+    /** The liquid the case replaces (a solvent name or NAME:FRACTION,…), empty when the case only seeks a liquid. */
+    public StringProperty replacingProperty() {
+        return replacing;
     }
 
     /** The selected blend's parameters along its drying path (empty when none was computed). */

@@ -35,6 +35,7 @@ public final class DryingModel {
     private final StringProperty temperatureC = new SimpleStringProperty("25");
     private final BooleanProperty ideal = new SimpleBooleanProperty(false);
     private final ObjectProperty<Result> result = new SimpleObjectProperty<>();
+    private final StringProperty problem = new SimpleStringProperty("");
     private boolean publishing;
 
     public DryingModel(Session session) {
@@ -68,6 +69,11 @@ public final class DryingModel {
         return result;
     }
 
+    /** Why the last run failed, in one line for the drying pane itself (empty after a success). */
+    public StringProperty problemProperty() {
+        return problem;
+    }
+
     /** Computes the path and the safety profile of the blend in the form; {@code then} runs on success. */
     public void run(Runnable then) {
         run(then, null);
@@ -80,6 +86,7 @@ public final class DryingModel {
         double kelvin = parseTemperature(temperatureC.get()) + 273.15;
         boolean idealModel = ideal.get();
         SolubilitySphere target = session.target() == null ? null : session.target().sphere();
+        problem.set("");
         session.jobs().run("Computing the drying path", p -> {
             Blend blend = parseBlend(library, text);
             p.update(0.1, "Simulating evaporation of " + blend.describe() + "…");
@@ -104,6 +111,9 @@ public final class DryingModel {
                 then.run();
             }
         }, err -> {
+            result.set(null);
+            session.dryingPathProperty().set(List.of());
+            problem.set("The drying path of " + (text.isEmpty() ? "this blend" : text) + " could not be computed: " + err);
             if (otherwise != null) {
                 otherwise.run();
             }

@@ -41,6 +41,7 @@ public final class DryingView {
     private final LineChart<Number, Number> redChart;
     private final LineChart<Number, Number> compositionChart;
     private final TextArea summary = new TextArea();
+    private final Label problem = new Label();
 
     public DryingView(DryingModel model) {
         this.model = model;
@@ -87,9 +88,24 @@ public final class DryingView {
         summary.setPromptText("Type a blend (or pick one on the blend screen) and compute its path.");
         SplitPane split = new SplitPane(charts, summary);
         split.setDividerPositions(0.62);
-        root.setTop(bar);
         root.setCenter(split);
         model.resultProperty().addListener((o, a, r) -> show(r));
+        problem.setId("drying-problem");
+        problem.getStyleClass().add("problem-box");
+        problem.setWrapText(true);
+        problem.setMaxWidth(Double.MAX_VALUE);
+        problem.setPadding(new Insets(8, 10, 8, 10));
+        problem.textProperty().bind(model.problemProperty());
+        problem.visibleProperty().bind(model.problemProperty().isNotEmpty());
+        problem.managedProperty().bind(problem.visibleProperty());
+        model.problemProperty().addListener((o, a, p) -> {
+            if (p != null && !p.isEmpty()) {
+                show(null);
+                summary.setText(p + (p.contains("vapour") ? "\n\nWhat helps: pick a blend whose components all have vapour-pressure "
+                        + "data in the library (the library lists the source of each), or add the missing data as your own entry." : ""));
+            }
+        });
+        root.setTop(new javafx.scene.layout.VBox(bar, problem));
     }
 
     public Node node() {
@@ -122,9 +138,16 @@ public final class DryingView {
         redChart.getData().clear();
         compositionChart.getData().clear();
         if (r == null) {
+            // back to the empty frame: no axis left over from the last path
+            NumberAxis y = (NumberAxis) redChart.getYAxis();
+            y.setAutoRanging(false);
+            y.setLowerBound(0);
+            y.setUpperBound(1.5);
+            y.setTickUnit(0.25);
             summary.clear();
             return;
         }
+        ((NumberAxis) redChart.getYAxis()).setAutoRanging(true);
         DryingPath path = r.path();
         boolean hasRed = path.points().stream().anyMatch(p -> p.red() != null);
         if (hasRed) {

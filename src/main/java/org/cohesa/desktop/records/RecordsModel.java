@@ -66,6 +66,16 @@ public final class RecordsModel {
     }
 
     /** Files a record as a draft; the evidence is the parameters, distances, safety profiles, drying path and sources at this moment. */
+    /**
+     * What the new-record form starts with: the liquid the case replaces (never whatever was last clicked in the
+     * library: a click there is browsing, not a decision) and the blend chosen as its replacement.
+     */
+    public Filing startingFiling() {
+        String replaced = session.replacingProperty().get() == null ? "" : session.replacingProperty().get();
+        String replacement = session.selectedBlendProperty().get() == null ? "" : session.selectedBlendProperty().get().describe();
+        return new Filing("", null, replaced, replacement, "", System.getProperty("user.name", ""), session.target() != null);
+    }
+
     public void file(Filing f, java.util.function.Consumer<SubstitutionRecord> then) {
         SolventLibrary library = new SolventLibrary(List.copyOf(session.solvents()));
         TargetChoice target = f.withTarget() ? session.target() : null;

@@ -29,6 +29,7 @@ import org.cohesa.core.records.SubstitutionRecord;
 import org.cohesa.desktop.common.Columns;
 import org.cohesa.desktop.common.Dialogs;
 import org.cohesa.desktop.common.ErrorText;
+import org.cohesa.desktop.common.LocalTimes;
 import org.cohesa.desktop.common.TableTools;
 
 /**
@@ -77,7 +78,7 @@ public final class RecordsView {
                 Columns.<SubstitutionRecord>text("Replacement", r -> r.content().replacement(), 220),
                 Columns.<SubstitutionRecord>text("Reason", r -> r.content().reason(), 150),
                 Columns.<SubstitutionRecord>text("Filed by", SubstitutionRecord::author, 90),
-                Columns.<SubstitutionRecord>text("Filed (UTC)", SubstitutionRecord::created, 150)));
+                Columns.<SubstitutionRecord>text("Filed (local time)", r -> LocalTimes.of(r.created()), 130)));
         table.setPlaceholder(new Label("No substitution records yet. File one with \"New record…\"."));
         TableTools.equip(table, this::exportCsv);
         table.getSelectionModel().selectedItemProperty().addListener((o, a, r) -> details.setText(r == null ? "" : describe(r)));
@@ -111,10 +112,10 @@ public final class RecordsView {
         }
         b.append("Reason: ").append(r.content().reason()).append("\n\nHistory\n");
         for (StatusChange c : r.history()) {
-            b.append(c.seq()).append(". ").append(c.at()).append("  ").append(c.kind()).append(" by ").append(c.by())
+            b.append(c.seq()).append(". ").append(LocalTimes.of(c.at())).append("  ").append(c.kind()).append(" by ").append(c.by())
                     .append(c.comment() == null ? "" : " — " + c.comment()).append('\n');
         }
-        b.append("\nEvidence sections: ").append(String.join(", ", r.evidence().sections())).append('\n');
+        b.append("\nEvidence (snapshot taken when the record was filed)\n").append(EvidenceText.of(r.evidence()));
         return b.toString();
     }
 
@@ -126,12 +127,9 @@ public final class RecordsView {
         TextField site = new TextField();
         TextField replaced = new TextField();
         TextField replacement = new TextField();
-        if (model.session().selectedBlendProperty().get() != null) {
-            replacement.setText(model.session().selectedBlendProperty().get().describe());
-        }
-        if (model.session().selectedSolventProperty().get() != null) {
-            replaced.setText(model.session().selectedSolventProperty().get().name());
-        }
+        RecordsModel.Filing start = model.startingFiling();
+        replaced.setText(start.replaced());
+        replacement.setText(start.replacement());
         TextField reason = new TextField();
         TextField author = new TextField(System.getProperty("user.name", ""));
         CheckBox withTarget = new CheckBox(model.session().target() == null ? "No target set" : "Include the target: " + model.session().target().name());
