@@ -215,4 +215,38 @@ class DefectsTest {
         WaitForAsyncUtils.waitForFxEvents();
         assertFalse(w[0].starting(), "the notice goes once the library is shown");
     }
+
+    @Test
+    void noCandidateNameIsClippedAt1280By800(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        // the eight longest names of the library that can take part in a search: the hardest case for the layout
+        String longest = fx.session.solvents().stream().filter(x -> x.hasHansen() && !x.isCmr())
+                .sorted(java.util.Comparator.comparingInt((org.cohesa.core.solvent.Solvent x) -> x.name().length()).reversed())
+                .limit(8).map(org.cohesa.core.solvent.Solvent::name).collect(java.util.stream.Collectors.joining(";"));
+        robot.interact(() -> {
+            fx.session.targetProperty().set(DEMO);
+            fx.workbench.show(Screen.BLENDS);
+            fx.workbench.blendModel().maxComponents.set(3);
+            fx.workbench.blendModel().include.set(longest);
+            fx.workbench.blendModel().redLimit.set("3");
+            fx.workbench.blendModel().search(null);
+        });
+        fx.awaitJobs();
+        assertFalse(fx.workbench.blendModel().rows().isEmpty(), fx.session.jobs().messageProperty().get());
+        javafx.scene.Node list = robot.lookup("#blend-cards").query();
+        javafx.geometry.Bounds frame = list.localToScene(list.getLayoutBounds());
+        var chips = list.lookupAll(".card-component");
+        assertFalse(chips.isEmpty());
+        for (javafx.scene.Node n : chips) {
+            Label chip = (Label) n;
+            if (!chip.isVisible() || chip.getScene() == null) {
+                continue;
+            }
+            javafx.scene.text.Text shown = (javafx.scene.text.Text) chip.lookup(".text");
+            assertEquals(chip.getText(), shown.getText(), "the name is shown whole, not shortened");
+            javafx.geometry.Bounds b = chip.localToScene(chip.getLayoutBounds());
+            assertTrue(b.getMinX() >= frame.getMinX() - 0.5 && b.getMaxX() <= frame.getMaxX() + 0.5,
+                    chip.getText() + " lies inside the list: " + b + " in " + frame);
+        }
+    }
 }

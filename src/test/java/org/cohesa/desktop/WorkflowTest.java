@@ -96,11 +96,13 @@ class WorkflowTest {
         @SuppressWarnings("unchecked")
         ListView<Material> materials = robot.lookup("#material-list").queryAs(ListView.class);
         assertFalse(materials.getItems().isEmpty(), "the material library is listed");
+        // PMMA: a resin a coatings plant's solvents dissolve (the list's first entry depends on the bundled data)
+        Material picked = materials.getItems().stream().filter(m -> m.name().equals("poly(methyl methacrylate)")).findFirst()
+                .orElse(materials.getItems().get(0));
         robot.interact(() -> {
-            materials.getSelectionModel().select(0);
+            materials.getSelectionModel().select(picked);
             robot.lookup("#material-use").queryAs(Button.class).fire();
         });
-        Material picked = materials.getItems().get(0);
         assertNotNull(fx.session.target());
         assertEquals(picked.name(), fx.session.target().name());
         assertTrue(robot.lookup("#target-current").queryAs(Label.class).getText().startsWith(picked.name()));
@@ -118,12 +120,13 @@ class WorkflowTest {
         });
         fx.awaitJobs();
         @SuppressWarnings("unchecked")
-        javafx.scene.control.TableView<org.cohesa.desktop.blend.BlendModel.Row> blends =
-                robot.lookup("#blend-table").queryAs(javafx.scene.control.TableView.class);
+        javafx.scene.control.ListView<org.cohesa.desktop.blend.BlendModel.Row> blends =
+                robot.lookup("#blend-cards").queryAs(javafx.scene.control.ListView.class);
         assertFalse(blends.getItems().isEmpty(), "the search suggests blends");
         var first = blends.getItems().get(0);
         // ranked by hazard among the blends inside the sphere (the default), which come first
-        assertTrue(first.suggestion().blend().red() < 1, "the best suggestion lies inside the target sphere");
+        assertTrue(first.suggestion().blend().red() <= 1.0 + 1e-9, "the best suggestion lies within the RED limit 1.0: " + fx.session.target()
+                + " " + first.blend().describe() + " RED " + first.suggestion().blend().red());
         for (var r : blends.getItems()) {
             assertTrue(r.blend().size() <= 2);
             assertTrue(r.blend().components().stream().allMatch(c -> c.solvent().vapourPressure() != null), "only the included solvents");

@@ -147,7 +147,7 @@ public final class BlendModel {
         }, out -> {
             rows.setAll(out);
             compared.clear();
-            session.jobs().say(out.size() + " suggestions for " + target.name() + (out.isEmpty() ? ": loosen the constraints." : "."));
+            session.jobs().say(out.size() + " candidates for " + target.name() + (out.isEmpty() ? ": loosen the constraints." : "."));
             if (then != null) {
                 then.run();
             }
@@ -185,15 +185,15 @@ public final class BlendModel {
                 fix.add(new BlendComponent(lib.resolve("fixed", part.substring(0, colon).strip()), frac));
             }
         }
-        double minF = number("least fraction (%)", minFractionPercent.get(), 5.0) / 100;
+        double minF = number("minimum fraction (%)", minFractionPercent.get(), 5.0) / 100;
         if (minF < 0 || minF >= 1) {
-            throw new InvalidInputException("least fraction (%)", minFractionPercent.get(), "must lie between 0 and 100");
+            throw new InvalidInputException("minimum fraction (%)", minFractionPercent.get(), "must lie between 0 and 100");
         }
         Integer ich = "any".equals(maxIchClass.get()) || maxIchClass.get() == null ? null : Integer.valueOf(maxIchClass.get().substring(0, 1));
         try {
             return new BlendConstraints(inc, exc, Set.of(), Set.of(), fix, minF, 1.0, java.util.Map.of(),
-                    optional("lowest boiling point", boilingMin.get()), optional("highest boiling point", boilingMax.get()),
-                    optional("least flash point", minFlashPoint.get()), ich, noCmr.get(), optional("highest cost", maxCost.get()));
+                    optional("boiling point min.", boilingMin.get()), optional("boiling point max.", boilingMax.get()),
+                    optional("minimum flash point", minFlashPoint.get()), ich, noCmr.get(), optional("maximum cost", maxCost.get()));
         } catch (IllegalArgumentException e) {
             throw e instanceof InvalidInputException ? e : new InvalidInputException("constraints", "", e.getMessage());
         }

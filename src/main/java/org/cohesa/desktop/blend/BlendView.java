@@ -13,6 +13,8 @@ import javafx.scene.control.Button;
 import javafx.scene.control.CheckBox;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.SelectionMode;
 import javafx.scene.control.Spinner;
@@ -47,7 +49,7 @@ public final class BlendView {
 
     private final BlendModel model;
     private final BorderPane root = new BorderPane();
-    private final TableView<BlendModel.Row> table = new TableView<>();
+    private final ListView<BlendModel.Row> table = new ListView<>();
     private final TextArea details = new TextArea();
     private final TableView<List<String>> comparison = new TableView<>();
     private final TabPane right = new TabPane();
@@ -59,29 +61,27 @@ public final class BlendView {
         this.showDrying = showDrying;
         root.setId("blend-screen");
         root.setLeft(form());
-        table.setId("blend-table");
+        table.setId("blend-cards");
+        table.getStyleClass().add("candidate-list");
         table.setItems(model.rows());
-        table.getColumns().addAll(List.of(
-                Columns.<BlendModel.Row>number("#", r -> (double) r.rank(), 40, 0),
-                Columns.<BlendModel.Row>text("Blend (volume %)", r -> percentText(r.blend()), 250),
-                Columns.<BlendModel.Row>number("δD", r -> r.suggestion().blend().point().dD(), 52, 1),
-                Columns.<BlendModel.Row>number("δP", r -> r.suggestion().blend().point().dP(), 52, 1),
-                Columns.<BlendModel.Row>number("δH", r -> r.suggestion().blend().point().dH(), 52, 1),
-                Columns.<BlendModel.Row>number("RED", r -> r.suggestion().blend().red(), 56, 2),
-                Columns.<BlendModel.Row>number("Flash pt (°C)", r -> r.safety() == null ? null : r.safety().flashPoint().celsius(), 100, 0),
-                Columns.<BlendModel.Row>text("ICH", r -> ichText(r.blend()), 60),
-                cautionColumn(),
-                Columns.<BlendModel.Row>text("Phases", BlendView::phaseText, 110)));
+        table.setCellFactory(list -> new ListCell<>() {
+            @Override
+            protected void updateItem(BlendModel.Row r, boolean empty) {
+                super.updateItem(r, empty);
+                setText(null);
+                setGraphic(empty || r == null ? null : CandidateCard.of(r, list.widthProperty()));
+            }
+        });
         Label placeholder = new Label();
         placeholder.setId("blend-placeholder");
+        placeholder.setWrapText(true);
         placeholder.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(() -> model.session().target() == null
-                ? "Set a target, then Search: suggestions appear here, best first."
-                : "Press Search: suggestions for " + model.session().target().name() + " appear here, best first.",
+                ? "Set a target, then Search: candidates appear here, best first."
+                : "Press Search: candidates for " + model.session().target().name() + " appear here, best first.",
                 model.session().targetProperty()));
         table.setPlaceholder(placeholder);
         table.getSelectionModel().setSelectionMode(SelectionMode.MULTIPLE);
-        TableTools.equip(table, () -> { });
-        table.getSelectionModel().setSelectionMode(SelectionMode.MULTIPLE);
+        equipCopy();
         model.rows().addListener((javafx.collections.ListChangeListener<BlendModel.Row>) ch -> {
             if (!model.rows().isEmpty()) {
                 table.getSelectionModel().clearAndSelect(0);
@@ -132,27 +132,39 @@ public final class BlendView {
         Spinner<Integer> top = Spinners.integer(1, 100, model.top);
         top.setId("blend-top");
         ComboBox<RankBy> rank = new ComboBox<>();
-        rank.getItems().setAll(RankBy.values());
+        rank.setId("blend-rank-by");
+        rank.getItems().setAll(RankBy.HAZARD, RankBy.COMPONENTS, RankBy.COST, RankBy.RED, RankBy.EVAPORATION);
+        rank.setConverter(new javafx.util.StringConverter<>() {
+            @Override
+            public String toString(RankBy r) {
+                return rankWord(r);
+            }
+
+            @Override
+            public RankBy fromString(String s) {
+                return java.util.Arrays.stream(RankBy.values()).filter(r -> rankWord(r).equals(s)).findFirst().orElse(RankBy.HAZARD);
+            }
+        });
         rank.valueProperty().bindBidirectional(model.rankBy);
         ComboBox<String> ich = new ComboBox<>();
         ich.getItems().setAll("any", "2 or 3 (no class 1)", "3 only");
         ich.valueProperty().bindBidirectional(model.maxIchClass);
-        CheckBox cmr = new CheckBox("Leave out carcinogens, mutagens, reprotoxics");
+        CheckBox cmr = new CheckBox("No CMR (carcinogens, mutagens, reprotoxics)");
         cmr.selectedProperty().bindBidirectional(model.noCmr);
         g.addRow(row++, new Label("Most components"), k);
-        g.addRow(row++, new Label("Suggestions"), top);
-        g.addRow(row++, new Label("Then rank by"), rank);
+        g.addRow(row++, new Label("Candidates listed"), top);
+        g.addRow(row++, new Label("Rank by"), rank);
         g.addRow(row++, new Label("Include only (a;b)"), field(model.include, "blend-include"));
         g.addRow(row++, new Label("Exclude (a;b)"), field(model.exclude, "blend-exclude"));
         g.addRow(row++, new Label("Fixed (NAME:FRACTION)"), field(model.fixed, "blend-fixed"));
-        g.addRow(row++, new Label("Least fraction (%)"), field(model.minFractionPercent, "blend-min-fraction"));
-        g.addRow(row++, new Label("Boiling point from (°C)"), field(model.boilingMin, "blend-bp-min"));
-        g.addRow(row++, new Label("Boiling point to (°C)"), field(model.boilingMax, "blend-bp-max"));
-        g.addRow(row++, new Label("Least flash point (°C)"), field(model.minFlashPoint, "blend-min-flash"));
+        g.addRow(row++, new Label("Minimum fraction (%)"), field(model.minFractionPercent, "blend-min-fraction"));
+        g.addRow(row++, new Label("Boiling point min. (°C)"), field(model.boilingMin, "blend-bp-min"));
+        g.addRow(row++, new Label("Boiling point max. (°C)"), field(model.boilingMax, "blend-bp-max"));
+        g.addRow(row++, new Label("Minimum flash point (°C)"), field(model.minFlashPoint, "blend-min-flash"));
         g.addRow(row++, new Label("ICH Q3C classes"), ich);
         g.add(cmr, 0, row++, 2, 1);
-        g.addRow(row++, new Label("Highest cost per litre"), field(model.maxCost, "blend-max-cost"));
-        g.addRow(row++, new Label("Good up to RED"), field(model.redLimit, "blend-red-limit"));
+        g.addRow(row++, new Label("Maximum cost per litre"), field(model.maxCost, "blend-max-cost"));
+        g.addRow(row++, new Label("RED limit"), field(model.redLimit, "blend-red-limit"));
         g.addRow(row++, new Label("Temperature (°C)"), field(model.temperatureC, "blend-temperature"));
         Button search = new Button("_Search blends");
         search.setId("blend-search");
@@ -192,26 +204,41 @@ public final class BlendView {
         return tf;
     }
 
-    private static TableColumn<BlendModel.Row, Integer> cautionColumn() {
-        TableColumn<BlendModel.Row, Integer> c = new TableColumn<>("Cautions");
-        c.setCellValueFactory(cd -> new ReadOnlyObjectWrapper<>(cd.getValue().safety() == null ? null
-                : SafetyText.cautions(cd.getValue().safety()).size() - 1));
-        c.setCellFactory(col -> new TableCell<>() {
-            @Override
-            protected void updateItem(Integer n, boolean empty) {
-                super.updateItem(n, empty);
-                setText(null);
-                setGraphic(null);
-                if (!empty) {
-                    Label badge = new Label(n == null ? "?" : "⚠ " + n);
-                    badge.getStyleClass().add("caution-badge");
-                    setGraphic(badge);
-                    setAlignment(Pos.CENTER);
-                }
+    /** The trade's words for the ranking keys after solvency. */
+    static String rankWord(RankBy r) {
+        return r == null ? "" : switch (r) {
+            case HAZARD -> "safety";
+            case COMPONENTS -> "simplicity";
+            case COST -> "cost";
+            case RED -> "closeness";
+            case EVAPORATION -> "evaporation rate";
+        };
+    }
+
+    /** Ctrl+C and the context menu copy the selected candidates as tab-separated rows (they paste into a spreadsheet as cells). */
+    private void equipCopy() {
+        javafx.scene.control.MenuItem copy = new javafx.scene.control.MenuItem("Copy");
+        copy.setOnAction(e -> copySelected());
+        table.setContextMenu(new javafx.scene.control.ContextMenu(copy));
+        table.setOnKeyPressed(e -> {
+            if (e.isShortcutDown() && e.getCode() == javafx.scene.input.KeyCode.C) {
+                copySelected();
             }
         });
-        c.setPrefWidth(80);
-        return c;
+    }
+
+    private void copySelected() {
+        StringBuilder b = new StringBuilder("rank\tblend (volume %)\tδD\tδP\tδH\tRED\tflash point and GHS\tICH Q3C\tcost\n");
+        for (BlendModel.Row r : table.getSelectionModel().getSelectedItems()) {
+            var p = r.suggestion().blend().point();
+            b.append(r.rank()).append('\t').append(percentText(r.blend())).append('\t').append(Numbers.one(p.dD())).append('\t')
+                    .append(Numbers.one(p.dP())).append('\t').append(Numbers.one(p.dH())).append('\t').append(Numbers.two(r.suggestion().blend().red()))
+                    .append('\t').append(CandidateFacts.flash(r.safety(), r.blend())).append('\t').append(CandidateFacts.worstIch(r.blend()))
+                    .append('\t').append(CandidateFacts.cost(r.blend())).append('\n');
+        }
+        javafx.scene.input.ClipboardContent c = new javafx.scene.input.ClipboardContent();
+        c.putString(b.toString());
+        javafx.scene.input.Clipboard.getSystemClipboard().setContent(c);
     }
 
     static String percentText(Blend b) {
