@@ -45,7 +45,7 @@ public final class BlendModel {
     private final Session session;
     public final ObjectProperty<Integer> maxComponents = new SimpleObjectProperty<>(3);
     public final ObjectProperty<Integer> top = new SimpleObjectProperty<>(20);
-    public final ObjectProperty<RankBy> rankBy = new SimpleObjectProperty<>(RankBy.HAZARD);
+    public final ObjectProperty<RankBy> rankBy = new SimpleObjectProperty<>(RankBy.DESIRABILITY); // as the command line
     public final StringProperty include = new SimpleStringProperty("");
     public final StringProperty exclude = new SimpleStringProperty("");
     public final StringProperty fixed = new SimpleStringProperty("");
@@ -56,7 +56,7 @@ public final class BlendModel {
     public final ObjectProperty<String> maxIchClass = new SimpleObjectProperty<>("any");
     public final BooleanProperty noCmr = new SimpleBooleanProperty(true);
     public final StringProperty maxCost = new SimpleStringProperty("");
-    public final StringProperty redLimit = new SimpleStringProperty("1.0");
+    public final StringProperty redLimit = new SimpleStringProperty("0.8"); // as the command line: a margin of 0.2 from the surface
     public final StringProperty temperatureC = new SimpleStringProperty("25");
     private final ObservableList<Row> rows = FXCollections.observableArrayList();
     private final ObservableList<Row> compared = FXCollections.observableArrayList();

@@ -133,7 +133,7 @@ public final class BlendView {
         top.setId("blend-top");
         ComboBox<RankBy> rank = new ComboBox<>();
         rank.setId("blend-rank-by");
-        rank.getItems().setAll(RankBy.HAZARD, RankBy.COMPONENTS, RankBy.COST, RankBy.RED, RankBy.EVAPORATION);
+        rank.getItems().setAll(RankBy.DESIRABILITY, RankBy.HAZARD, RankBy.COMPONENTS, RankBy.COST, RankBy.RED, RankBy.EVAPORATION);
         rank.setConverter(new javafx.util.StringConverter<>() {
             @Override
             public String toString(RankBy r) {
@@ -207,6 +207,7 @@ public final class BlendView {
     /** The trade's words for the ranking keys after solvency. */
     static String rankWord(RankBy r) {
         return r == null ? "" : switch (r) {
+            case DESIRABILITY -> "overall (safety first)";
             case HAZARD -> "safety";
             case COMPONENTS -> "simplicity";
             case COST -> "cost";

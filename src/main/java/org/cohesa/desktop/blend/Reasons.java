@@ -5,7 +5,8 @@ import org.cohesa.core.blend.RankBy;
 import org.cohesa.core.blend.RankedBlend;
 
 /**
- * Why a candidate stands where it does, from the search's own scores ({@link RankedBlend#withinLimit()},
+ * Why a candidate stands where it does: the ranking's own reasons ({@code BlendSuggestion.why()}), or when a
+ * suggestion carries none, the search's own scores ({@link RankedBlend#withinLimit()},
  * {@link RankedBlend#rankBy()}, {@link RankedBlend#secondary()}): solvency is the condition, then the chosen key.
  */
 final class Reasons {
@@ -14,6 +15,9 @@ final class Reasons {
     }
 
     static String of(BlendModel.Row r) {
+        if (!r.suggestion().why().isEmpty()) {
+            return String.join("; ", r.suggestion().why()); // the ranking's own account of what placed it
+        }
         RankedBlend b = r.suggestion().blend();
         String solvency = b.withinLimit() ? "inside the RED limit" : "outside the RED limit (listed after every blend inside it, closest first)";
         if (!b.withinLimit() || b.rankBy() == RankBy.RED) {
@@ -25,7 +29,7 @@ final class Reasons {
             case COST -> Double.isNaN(v) ? "then by cost: price unknown, so after the priced blends" : "then by cost: " + two(v) + " per litre";
             case COMPONENTS -> "then by simplicity: " + b.size() + (b.size() == 1 ? " liquid" : " liquids");
             case EVAPORATION -> "then by evaporation: " + two(v) + " kPa at 25 °C (volume-weighted vapour pressure, higher dries faster)";
-            case RED -> "";
+            case RED, DESIRABILITY -> "";
         };
         return solvency + "; " + then;
     }
