@@ -110,6 +110,14 @@ public final class BlendFlashPoint {
             return new Result(Double.NaN, bubble, notes);
         }
         double t = VapourLiquid.solve(leChatelier, lo, hi);
+        // The sum is evaluated at the blend's flash point too: say where a curve is used outside its published range there.
+        for (int i = 0; i < n; i++) {
+            VapourPressure a = psat.get(i);
+            if (flashPointK.get(i) != null && x[i] > 0 && a.methodAt(t).kind() == VapourPressure.Kind.EXTRAPOLATED
+                    && !a.isEstimate(flashPointK.get(i))) {
+                notes.add(names.get(i) + ": vapour pressure at the blend flash point " + kelvinToC(t) + " " + a.methodAt(t).label());
+            }
+        }
         return new Result(t, bubble, notes);
     }
 
