@@ -129,6 +129,30 @@ class FitCommandTest {
     }
 
     @Test
+    void aLabsSemicolonFileWithABomFitsAndAnUnknownResultIsOneLine() throws Exception {
+        Path f = dir.resolve("lab.csv");
+        StringBuilder b = new StringBuilder("\uFEFFSolvent;Result\n");
+        for (String good : List.of("acetone", "methyl ethyl ketone", "ethyl acetate", "tetrahydrofuran", "dichloromethane", "cyclohexanone")) {
+            b.append(good).append(";yes\n");
+        }
+        for (String bad : List.of("n-hexane", "methanol", "water", "ethanol", "cyclohexane", "ethylene glycol")) {
+            b.append(bad).append(";no\n");
+        }
+        b.append("toluene;partial\n");
+        Files.writeString(f, b.toString());
+        Run ok = run("fit", f.toString(), "--json");
+        assertEquals(0, ok.code(), ok.err());
+        assertEquals(13, new ObjectMapper().readTree(ok.out()).get("results").size());
+        Files.writeString(f, b + "xylene;maybe\n");
+        Run bad = run("fit", f.toString());
+        assertEquals(2, bad.code());
+        // the summary line of every bad file, then one line for the one bad cell, naming its column
+        assertTrue(bad.err().startsWith("error: " + f + ": 1 bad cell"), bad.err());
+        assertEquals(1, bad.err().lines().filter(l -> l.strip().startsWith("line ")).count(), bad.err());
+        assertTrue(bad.err().contains("line 15, column Result, value 'maybe': not a result"), bad.err());
+    }
+
+    @Test
     void saveWithoutNameIsRefused() {
         Run r = run("fit", demo().toString(), "--save");
         assertEquals(2, r.code());

@@ -189,6 +189,7 @@ public final class FitCommand extends CohesaSubcommand {
                 }
                 nt.print(out());
                 out().println("(shrinkage of the region's spread expected once this and the tests above it are scored)");
+                out().println("Before testing a liquid, read its SDS: many test liquids are flammable or toxic, some reprotoxic.");
             } else {
                 out().println("most useful next tests (library liquids the plausible spheres disagree about):");
                 TextTable nt = new TextTable("liquid", "RED", "resampled fits holding it");
