@@ -141,9 +141,11 @@ public final class RecordPdf {
         rows.add(new String[] {"Filed", r.author() + ", " + stamp(r.created())});
         StatusChange last = r.history().get(r.history().size() - 1);
         rows.add(new String[] {"Status", r.status().label().replace('_', ' ') + " (" + last.by() + ", " + stamp(last.at()) + ")"});
-        rows.add(new String[] {"Register integrity", chain.intact()
-                ? "hash chain intact when printed (" + chain.events() + " events, head " + chain.headHash().substring(0, 16) + "…)"
-                : "HASH CHAIN BROKEN when printed: " + chain.firstProblem().map(p -> p.describe()).orElse("")});
+        rows.add(new String[] {"Register integrity", (chain.intact()
+                ? "register intact when printed (" + chain.events() + " events" + (chain.keyChecked() ? ", HMAC seal checked" : ", seal not checked: no key")
+                + ")" : "REGISTER BROKEN when printed: " + chain.firstProblem().map(p -> p.describe()).orElse(""))});
+        // the whole head hash, so this page can later be checked with: cohesa record verify --anchor HASH
+        rows.add(new String[] {"Register head hash", chain.headHash()});
         rows.add(new String[] {"Evidence taken with", "Cohesa " + ev.section(Evidence.Sections.APP_VERSION).map(JsonNode::asText).orElse("?")});
         l.table(new float[] {0.22f, 0.78f}, rows, false, true, 8.6f);
     }
@@ -326,7 +328,9 @@ public final class RecordPdf {
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"Step", "Event", "Status after", "By", "When (UTC)", "Comment"});
         for (StatusChange c : r.history()) {
-            rows.add(new String[] {String.valueOf(c.seq()), c.kind().replace('_', ' '), c.status().label().replace('_', ' '), c.by(),
+            // who did it: the name typed and, beneath it, the account that acted (OS user, or the shared register's login)
+            rows.add(new String[] {String.valueOf(c.seq()), c.kind().replace('_', ' '), c.status().label().replace('_', ' '),
+                    c.by() + (c.account() == null ? "" : " (" + c.account() + ")"),
                     stamp(c.at()).replace(" UTC", ""),
                     c.comment() == null ? "" : c.comment()});
         }

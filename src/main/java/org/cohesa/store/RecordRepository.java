@@ -74,18 +74,33 @@ public final class RecordRepository {
         return RegisterKeyFile.load("--key", keyFile());
     }
 
-    private RegisterKey writeKey() {
-        return RegisterKeyFile.loadOrCreate("--key", keyFile());
+    /**
+     * The key a write seals with: the key file's; a new key file only for a register no key has sealed yet; refused
+     * when the register is sealed with another key (another person's key file, or the wrong one), so one register is
+     * never sealed with two keys.
+     */
+    private RegisterKey writeKey(ChainHead head) {
+        Path file = keyFile();
+        Optional<RegisterKey> existing = RegisterKeyFile.load("--key", file);
+        if (existing.isEmpty() && head.keyId() != null) {
+            throw new InvalidInputException("--key", file.toString(), "does not exist, and this register is sealed with key " + head.keyId()
+                    + "; use that key file (--key FILE or COHESA_REGISTER_KEY)");
+        }
+        RegisterKey key = existing.orElseGet(() -> RegisterKeyFile.loadOrCreate("--key", file));
+        if (head.keyId() != null && !head.keyId().equals(key.id())) {
+            throw new InvalidInputException("--key", file.toString(), "holds key " + key.id() + ", but this register is sealed with key "
+                    + head.keyId() + "; use that register's key file (--key FILE or COHESA_REGISTER_KEY)");
+        }
+        return key;
     }
 
     /** Files a new record in draft; returns it as stored. */
     public SubstitutionRecord create(RecordDraft draft, String author) {
         String name = requireName("--author", author);
-        RegisterKey key = writeKey();
         long id = register.write(c -> {
             ChainHead head = head(c);
             long next = Math.max(head.maxRecordId(), maxRecordId(c)) + 1;
-            append(c, head, next, 1, EventKind.CREATED, name, draft.toPayload(), key);
+            append(c, head, next, 1, EventKind.CREATED, name, draft.toPayload());
             return next;
         });
         return find(id).orElseThrow();
@@ -99,7 +114,6 @@ public final class RecordRepository {
     public SubstitutionRecord changeStatus(long recordId, RecordStatus next, String by, String comment) {
         String name = requireName("--by", by);
         String note = TextLimits.text("--comment", comment);
-        RegisterKey key = writeKey();
         register.write(c -> {
             List<RecordEvent> events = eventsOf(c, recordId);
             if (events.isEmpty()) {
@@ -115,7 +129,7 @@ public final class RecordRepository {
             if (rule.on()) {
                 checkFourEyes(now, next, name);
             }
-            append(c, head(c), recordId, events.size() + 1, EventKind.movingTo(next), name, SubstitutionRecord.statusPayload(note), key);
+            append(c, head(c), recordId, events.size() + 1, EventKind.movingTo(next), name, SubstitutionRecord.statusPayload(note));
             return null;
         });
         return find(recordId).orElseThrow();
@@ -128,11 +142,10 @@ public final class RecordRepository {
         if (why == null || why.isBlank()) {
             throw new InvalidInputException("--reason", why == null ? "" : why, "switching a register rule needs a reason");
         }
-        RegisterKey key = writeKey();
         register.write(c -> {
             int seq = eventsOf(c, 0).size() + 1;
             JsonNode payload = CanonicalJson.object().put("rule", FourEyesRule.NAME).put("value", on ? "on" : "off").put("reason", why.strip());
-            append(c, head(c), 0, seq, EventKind.RULE_SET, name, payload, key);
+            append(c, head(c), 0, seq, EventKind.RULE_SET, name, payload);
             return null;
         });
         return fourEyes();
@@ -352,8 +365,9 @@ public final class RecordRepository {
         }
     }
 
-    private void append(Connection c, ChainHead head, long recordId, int seq, EventKind kind, String actor, JsonNode payload,
-                        RegisterKey key) throws SQLException {
+    private void append(Connection c, ChainHead head, long recordId, int seq, EventKind kind, String actor, JsonNode payload)
+            throws SQLException {
+        RegisterKey key = writeKey(head);
         RecordEvent prev = null;
         try (Statement st = c.createStatement(); ResultSet rs = st.executeQuery("SELECT * FROM record_event ORDER BY id DESC LIMIT 1")) {
             if (rs.next()) {

@@ -232,6 +232,42 @@ class RegisterHardeningTest {
         }
     }
 
+    @Test
+    void selfApprovalIsRefusedWithExit2UnlessTheSiteSwitchesTheRuleOff() {
+        assertEquals(0, run("record", "review", "1", "--by", "Q. Reviewer").exitCode());
+        Result self = run("record", "approve", "1", "--by", "q. reviewer", "--comment", "fine");
+        assertEquals(2, self.exitCode(), self.err());
+        assertTrue(self.err().contains("four-eyes rule") && self.err().contains("reviewed record 1"), self.err());
+        assertEquals(1, self.err().strip().lines().count(), self.err());
+        Result off = run("record", "rule", "four-eyes", "off", "--by", "M. Manager", "--reason", "one-person lab (invented)", "--json");
+        assertEquals(0, off.exitCode(), off.err());
+        assertFalse(off.json().get("on").asBoolean());
+        assertEquals(0, run("record", "approve", "1", "--by", "Q. Reviewer", "--comment", "fine").exitCode());
+        assertTrue(run("record", "rule", "four-eyes").out().contains("off (set by M. Manager"));
+        assertEquals(0, run("record", "verify").exitCode(), "the switch is part of the intact chain");
+    }
+
+    @Test
+    void anAnchorFileChecksTheRegisterLater() throws Exception {
+        Path anchor = dir.resolve("anchor.json");
+        Result a = run("record", "anchor", anchor.toString(), "--json");
+        assertEquals(0, a.exitCode(), a.err());
+        assertEquals(64, a.json().get("head_hash").asText().length());
+        assertEquals(64, a.json().get("mac").asText().length(), "sealed with the register key");
+        assertEquals(2, run("record", "anchor", anchor.toString()).exitCode(), "an anchor is not overwritten by accident");
+        assertEquals(0, run("record", "review", "1", "--by", "Q. Reviewer").exitCode());
+        Result later = run("record", "verify", "--anchor", anchor.toString(), "--json");
+        assertEquals(0, later.exitCode(), later.out());
+        assertEquals(1, later.json().get("events_since_anchor").asInt());
+        Result hash = run("record", "verify", "--anchor", a.json().get("head_hash").asText());
+        assertEquals(0, hash.exitCode(), hash.out());
+        Result wrong = run("record", "verify", "--anchor", "ab".repeat(32));
+        assertEquals(1, wrong.exitCode(), wrong.out());
+        assertTrue(wrong.out().contains("anchor_mismatch"), wrong.out());
+        Result junk = run("record", "verify", "--anchor", "not-a-hash");
+        assertEquals(2, junk.exitCode(), junk.err());
+    }
+
     @AfterAll
     static void nothing() {
         // the mounts are removed in each test's finally block

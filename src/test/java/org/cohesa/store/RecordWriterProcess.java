@@ -16,12 +16,33 @@ public final class RecordWriterProcess {
     }
 
     public static void main(String[] args) {
-        Path db = Path.of(args[0]);
         int count = Integer.parseInt(args[1]);
         String tag = args[2];
+        if (PostgresRegister.isAddress(args[0])) {
+            // a shared register: args[3] is a local database that only supplies the solvent library for the drafts
+            try (Database d = Database.openWithoutSync(Path.of(args[3])); PostgresRegister shared = PostgresRegister.open("register", args[0])) {
+                SolventLibrary library = new SolventRepository(d).library();
+                write(new RecordRepository(shared, java.time.Clock.systemUTC(), null), library, count, tag);
+            }
+            return;
+        }
+        Path db = Path.of(args[0]);
         try (Database d = Database.openWithoutSync(db)) {
-            SolventLibrary library = new SolventRepository(d).library();
-            RecordRepository repo = new RecordRepository(d);
+            SolventLibrary library;
+            if (args.length > 3) {
+                // the register file holds no solvents: the library comes from args[3]
+                try (Database lib = Database.openWithoutSync(Path.of(args[3]))) {
+                    library = new SolventRepository(lib).library();
+                }
+            } else {
+                library = new SolventRepository(d).library();
+            }
+            write(new RecordRepository(d), library, count, tag);
+        }
+    }
+
+    private static void write(RecordRepository repo, SolventLibrary library, int count, String tag) {
+        {
             RecordDraft draft = RecordFixtures.draft(library, "writer " + tag, "toluene", "ethyl acetate:0.5,ethanol:0.5");
             System.out.println("ready");
             System.out.flush();

@@ -51,7 +51,7 @@ public final class RecordAddCommand extends RecordSubcommand {
     }
 
     @Override
-    protected void execute() {
+    protected void run() {
         SolventLibrary library = ctx().library();
         Blend from = RecordSupport.liquid(library, "--replaced", replaced);
         Blend to = RecordSupport.liquid(library, "--replacement", replacement);

@@ -25,7 +25,7 @@ public final class RecordAnchorCommand extends RecordSubcommand {
     boolean overwrite;
 
     @Override
-    protected void execute() throws Exception {
+    protected void run() throws Exception {
         OutputFile.check("FILE", file, overwrite);
         RegisterKey key = repo().key().orElse(null);
         ChainReport chain = repo().verify(key, null);

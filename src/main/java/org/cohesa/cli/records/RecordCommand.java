@@ -17,6 +17,7 @@ import picocli.CommandLine.Spec;
                 RecordExportCommand.class,
                 RecordAnchorCommand.class,
                 RecordRuleCommand.class,
+                RecordCopyCommand.class,
         })
 public final class RecordCommand implements Runnable {
 

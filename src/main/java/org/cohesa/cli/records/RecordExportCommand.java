@@ -45,7 +45,7 @@ public final class RecordExportCommand extends RecordSubcommand {
     }
 
     @Override
-    protected void execute() throws IOException {
+    protected void run() throws IOException {
         Path file = format.pdf != null ? format.pdf : format.csv;
         String field = format.pdf != null ? "--pdf" : "--csv";
         OutputFile.check(field, file, overwrite);

@@ -14,7 +14,7 @@ import picocli.CommandLine.Command;
 public final class RecordListCommand extends RecordSubcommand {
 
     @Override
-    protected void execute() throws IOException {
+    protected void run() throws IOException {
         if (json()) {
             int skipped;
             try (SequenceWriter w = Output.mapper().writer().without(JsonGenerator.Feature.AUTO_CLOSE_TARGET).writeValuesAsArray(out())) {

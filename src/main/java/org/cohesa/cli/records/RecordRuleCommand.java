@@ -37,7 +37,7 @@ public final class RecordRuleCommand extends RecordSubcommand {
     }
 
     @Override
-    protected void execute() {
+    protected void run() {
         FourEyesRule r;
         if (value == null) {
             r = repo().fourEyes();

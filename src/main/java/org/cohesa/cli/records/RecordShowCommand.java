@@ -14,7 +14,7 @@ public final class RecordShowCommand extends RecordSubcommand {
     String id;
 
     @Override
-    protected void execute() {
+    protected void run() {
         SubstitutionRecord r = repo().get(RecordSupport.parseId(id));
         if (json()) {
             Output.json(out(), RecordJson.Record.of(r, true));

@@ -26,7 +26,7 @@ abstract class RecordStatusCommand extends RecordSubcommand {
     protected abstract RecordStatus next();
 
     @Override
-    protected void execute() {
+    protected void run() {
         long recordId = RecordSupport.parseId(id);
         if (by == null || by.isBlank()) {
             throw new InvalidInputException("--by", by == null ? "" : by, "must name a person");

@@ -26,7 +26,7 @@ public final class RecordVerifyCommand extends RecordSubcommand {
     private boolean broken;
 
     @Override
-    protected void execute() {
+    protected void run() {
         Anchor a = anchor == null ? null : AnchorFile.parse("--anchor", anchor);
         RegisterKey key = repo().key().orElse(null);
         ChainReport report = repo().verify(key, a);

@@ -1,0 +1,309 @@
+package org.cohesa.store;
+
+import java.net.URI;
+import java.net.URISyntaxException;
+import java.net.URLDecoder;
+import java.nio.charset.StandardCharsets;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.List;
+import java.util.Properties;
+import org.cohesa.core.InvalidInputException;
+
+/**
+ * The shared register on a PostgreSQL server ({@code --register postgresql://[USER[:PASSWORD]@]HOST[:PORT]/DB}): the
+ * same tables, steps and chain as the local register. The server enforces what the program promises: triggers refuse
+ * UPDATE, DELETE and TRUNCATE on events, and refuse an event whose account is not the login that inserts it; writers
+ * are serialised by a transaction-scoped advisory lock, so parallel writers on many machines queue and never fork the
+ * chain; a check reads one REPEATABLE READ snapshot.
+ */
+public final class PostgresRegister implements RegisterDb, AutoCloseable {
+
+    /** The advisory-lock key of the chain head (any constant; "cohesa" in ASCII). */
+    static final long CHAIN_LOCK = 0x636f68657361L;
+
+    private final String location;
+    private final Connection connection;
+    private final String account;
+
+    private PostgresRegister(String location, Connection connection, String account) {
+        this.location = location;
+        this.connection = connection;
+        this.account = account;
+    }
+
+    /** True for text that names a PostgreSQL register. */
+    public static boolean isAddress(String text) {
+        return text != null && (text.startsWith("postgresql://") || text.startsWith("postgres://"));
+    }
+
+    /** Connects and migrates the register's tables. */
+    public static PostgresRegister open(String field, String address) {
+        Target t = parse(field, address);
+        try {
+            Connection c = DriverManager.getConnection(t.jdbcUrl(), t.properties());
+            String login;
+            try (Statement st = c.createStatement(); ResultSet rs = st.executeQuery("SELECT session_user")) {
+                rs.next();
+                login = rs.getString(1);
+            }
+            PostgresMigrations.migrate(c);
+            return new PostgresRegister(t.shown(), c, login);
+        } catch (SQLException e) {
+            throw new StoreException("cannot open the shared register " + t.shown() + ": " + oneLine(e), e);
+        }
+    }
+
+    /** Where to connect, parsed from the address. */
+    record Target(String jdbcUrl, Properties properties, String shown) {
+    }
+
+    static Target parse(String field, String address) {
+        if (!isAddress(address)) {
+            throw new InvalidInputException(field, String.valueOf(address), "a shared register is written postgresql://HOST[:PORT]/DATABASE");
+        }
+        URI u;
+        try {
+            u = new URI(address.replaceFirst("^postgres://", "postgresql://"));
+        } catch (URISyntaxException e) {
+            throw new InvalidInputException(field, address, "not a valid address (" + e.getReason() + ")");
+        }
+        String db = u.getPath() == null ? "" : u.getPath().replaceFirst("^/", "");
+        if (u.getHost() == null || db.isBlank()) {
+            throw new InvalidInputException(field, address, "give the server and the database: postgresql://HOST[:PORT]/DATABASE");
+        }
+        Properties p = new Properties();
+        String user = null;
+        String password = null;
+        if (u.getRawUserInfo() != null) {
+            String[] parts = u.getRawUserInfo().split(":", 2);
+            user = URLDecoder.decode(parts[0], StandardCharsets.UTF_8);
+            password = parts.length > 1 ? URLDecoder.decode(parts[1], StandardCharsets.UTF_8) : null;
+        }
+        if (user == null || user.isBlank()) {
+            user = firstNonBlank(System.getenv("PGUSER"), System.getProperty("user.name"));
+        }
+        if (password == null) {
+            password = System.getenv("PGPASSWORD");
+        }
+        p.setProperty("user", user);
+        if (password != null) {
+            p.setProperty("password", password);
+        }
+        p.setProperty("ApplicationName", "cohesa");
+        p.setProperty("connectTimeout", "10");
+        int port = u.getPort() > 0 ? u.getPort() : 5432;
+        String query = u.getRawQuery() == null ? "" : "?" + u.getRawQuery();
+        String jdbc = "jdbc:postgresql://" + u.getHost() + ":" + port + "/" + db + query;
+        return new Target(jdbc, p, "postgresql://" + user + "@" + u.getHost() + ":" + port + "/" + db);
+    }
+
+    private static String firstNonBlank(String a, String b) {
+        return a != null && !a.isBlank() ? a : b;
+    }
+
+    static String oneLine(SQLException e) {
+        return String.valueOf(e.getMessage()).replaceAll("\\s+", " ").strip();
+    }
+
+    @Override
+    public synchronized <T> T write(Database.SqlWork<T> work) {
+        try {
+            connection.setAutoCommit(false);
+            connection.setTransactionIsolation(Connection.TRANSACTION_READ_COMMITTED);
+            try {
+                try (Statement st = connection.createStatement()) {
+                    // one writer at a time on the chain head, across every client of the server
+                    st.execute("SELECT pg_advisory_xact_lock(" + CHAIN_LOCK + ")");
+                }
+                T result = work.run(connection);
+                connection.commit();
+                return result;
+            } catch (SQLException | RuntimeException e) {
+                try {
+                    connection.rollback();
+                } catch (SQLException suppressed) {
+                    e.addSuppressed(suppressed);
+                }
+                throw e;
+            } finally {
+                connection.setAutoCommit(true);
+            }
+        } catch (SQLException e) {
+            throw new StoreException("shared register write failed, nothing was changed: " + oneLine(e), e);
+        }
+    }
+
+    @Override
+    public synchronized <T> T read(Database.SqlWork<T> work) {
+        try {
+            connection.setAutoCommit(false);
+            connection.setTransactionIsolation(Connection.TRANSACTION_REPEATABLE_READ);
+            connection.setReadOnly(true);
+            try {
+                T result = work.run(connection);
+                connection.commit();
+                return result;
+            } catch (SQLException | RuntimeException e) {
+                connection.rollback();
+                throw e;
+            } finally {
+                connection.setReadOnly(false);
+                connection.setAutoCommit(true);
+                connection.setTransactionIsolation(Connection.TRANSACTION_READ_COMMITTED);
+            }
+        } catch (SQLException e) {
+            throw new StoreException("shared register read failed: " + oneLine(e), e);
+        }
+    }
+
+    @Override
+    public String kind() {
+        return "postgresql";
+    }
+
+    @Override
+    public String location() {
+        return location;
+    }
+
+    @Override
+    public String account() {
+        return account;
+    }
+
+    @Override
+    public boolean accountIsAuthenticated() {
+        return true;
+    }
+
+    @Override
+    public boolean guardsInPlace() {
+        try (Statement st = connection.createStatement();
+             ResultSet rs = st.executeQuery("SELECT COUNT(*) FROM pg_trigger WHERE NOT tgisinternal AND tgenabled <> 'D' AND tgname IN ("
+                     + "'record_event_append_only', 'record_event_no_truncate', 'record_event_own_account')")) {
+            return rs.next() && rs.getInt(1) == 3;
+        } catch (SQLException e) {
+            throw new StoreException("cannot read the shared register's schema: " + oneLine(e), e);
+        }
+    }
+
+    /** The connection (tests and the copy command). */
+    public Connection connection() {
+        return connection;
+    }
+
+    @Override
+    public void close() {
+        try {
+            connection.close();
+        } catch (SQLException e) {
+            throw new StoreException("cannot close the shared register: " + oneLine(e), e);
+        }
+    }
+
+    /** The register's tables on PostgreSQL, by the same step numbers as the local schema ({@link Migrations}). */
+    static final class PostgresMigrations {
+
+        /** Steps 4 and 6 of the local schema, in PostgreSQL's dialect; the solvent-library steps do not apply to a register. */
+        static final List<Migration> ALL = List.of(
+                new Migration(4, "substitution records: append-only hash-chained events and the chain's head note", List.of(
+                        "CREATE TABLE record_event ("
+                                + " id BIGINT GENERATED ALWAYS AS IDENTITY PRIMARY KEY,"
+                                + " record_id BIGINT NOT NULL CHECK (record_id > 0),"
+                                + " seq INTEGER NOT NULL CHECK (seq > 0),"
+                                + " kind TEXT NOT NULL, payload TEXT NOT NULL, actor TEXT NOT NULL, at TEXT NOT NULL,"
+                                + " prev_record_id BIGINT NOT NULL, prev_seq INTEGER NOT NULL, prev_hash TEXT NOT NULL,"
+                                + " hash TEXT NOT NULL UNIQUE, UNIQUE (record_id, seq))",
+                        "CREATE TABLE record_chain_head (singleton INTEGER PRIMARY KEY CHECK (singleton = 1),"
+                                + " events BIGINT NOT NULL, last_hash TEXT NOT NULL, last_record_id BIGINT NOT NULL, last_seq INTEGER NOT NULL,"
+                                + " max_record_id BIGINT NOT NULL)",
+                        "CREATE FUNCTION record_event_refuse() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN"
+                                + " RAISE EXCEPTION 'substitution record events are append-only'; END $$",
+                        "CREATE TRIGGER record_event_append_only BEFORE UPDATE OR DELETE ON record_event"
+                                + " FOR EACH ROW EXECUTE FUNCTION record_event_refuse()",
+                        "CREATE TRIGGER record_event_no_truncate BEFORE TRUNCATE ON record_event"
+                                + " FOR EACH STATEMENT EXECUTE FUNCTION record_event_refuse()")),
+                new Migration(6, "register: the acting account and an HMAC on every event and on the head; record 0 holds the register's"
+                        + " own settings (the four-eyes rule)", List.of(
+                        "ALTER TABLE record_event DROP CONSTRAINT record_event_record_id_check",
+                        "ALTER TABLE record_event ADD CONSTRAINT record_event_record_id_check CHECK (record_id >= 0)",
+                        "ALTER TABLE record_event ADD COLUMN account TEXT",
+                        "ALTER TABLE record_event ADD COLUMN mac TEXT",
+                        "ALTER TABLE record_chain_head ADD COLUMN mac TEXT",
+                        "ALTER TABLE record_chain_head ADD COLUMN key_id TEXT",
+                        // the server, not the client, vouches for who acted: an event must carry the login that inserts it
+                        // (only the register's owner, who set it up and copies registers in, may insert others' events)
+                        "CREATE FUNCTION record_event_check_account() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN"
+                                + " IF NEW.account IS DISTINCT FROM session_user AND session_user <> (SELECT tableowner FROM pg_tables"
+                                + " WHERE schemaname = current_schema() AND tablename = 'record_event') THEN"
+                                + " RAISE EXCEPTION 'an event must carry the account that inserts it (%), not %', session_user, NEW.account;"
+                                + " END IF; RETURN NEW; END $$",
+                        "CREATE TRIGGER record_event_own_account BEFORE INSERT ON record_event"
+                                + " FOR EACH ROW EXECUTE FUNCTION record_event_check_account()",
+                        // a role for the people who file and decide: they may add events and move the head, nothing else
+                        "DO $$ BEGIN IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname = 'cohesa_register_writer') THEN"
+                                + " CREATE ROLE cohesa_register_writer NOLOGIN; END IF; END $$",
+                        "GRANT SELECT, INSERT ON record_event TO cohesa_register_writer",
+                        "GRANT SELECT, INSERT, UPDATE ON record_chain_head TO cohesa_register_writer",
+                        "GRANT SELECT ON cohesa_schema TO cohesa_register_writer")));
+
+        private PostgresMigrations() {
+        }
+
+        static int latest() {
+            return ALL.get(ALL.size() - 1).version();
+        }
+
+        static void migrate(Connection c) throws SQLException {
+            boolean auto = c.getAutoCommit();
+            c.setAutoCommit(false);
+            try (Statement st = c.createStatement()) {
+                // two clients starting at once must not both create the tables
+                st.execute("SELECT pg_advisory_xact_lock(" + (CHAIN_LOCK + 1) + ")");
+                boolean exists;
+                try (ResultSet rs = st.executeQuery("SELECT to_regclass('cohesa_schema') IS NOT NULL")) {
+                    rs.next();
+                    exists = rs.getBoolean(1);
+                }
+                int current = 0;
+                if (exists) {
+                    try (ResultSet rs = st.executeQuery("SELECT version FROM cohesa_schema WHERE singleton = 1")) {
+                        current = rs.next() ? rs.getInt(1) : 0;
+                    }
+                }
+                if (current == latest()) {
+                    // up to date: people who only file and decide need no right to change the schema
+                    c.commit();
+                    return;
+                }
+                if (!exists) {
+                    st.execute("CREATE TABLE cohesa_schema (singleton INTEGER PRIMARY KEY CHECK (singleton = 1), version INTEGER NOT NULL)");
+                }
+                if (current > latest()) {
+                    throw new SQLException("the shared register has schema version " + current + ", newer than this program knows ("
+                            + latest() + "); use a newer Cohesa");
+                }
+                for (Migration m : ALL) {
+                    if (m.version() <= current) {
+                        continue;
+                    }
+                    for (String sql : m.statements()) {
+                        st.execute(sql);
+                    }
+                    st.execute("INSERT INTO cohesa_schema (singleton, version) VALUES (1, " + m.version() + ")"
+                            + " ON CONFLICT (singleton) DO UPDATE SET version = excluded.version");
+                }
+                c.commit();
+            } catch (SQLException e) {
+                c.rollback();
+                throw new SQLException("the shared register's schema could not be set up: " + oneLine(e), e);
+            } finally {
+                c.setAutoCommit(auto);
+            }
+        }
+    }
+}
