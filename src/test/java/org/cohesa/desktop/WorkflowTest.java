@@ -79,7 +79,7 @@ class WorkflowTest {
 
         // a broken table is refused with every bad cell listed, and the target stays
         robot.interact(() -> {
-            robot.lookup("#fit-csv").queryAs(TextArea.class).setText("liquid,score\nacetone,yes\nno such liquid,1\n");
+            robot.lookup("#fit-csv").queryAs(TextArea.class).setText("liquid,score\nacetone,maybe\nno such liquid,1\n");
             robot.lookup("#fit-run").queryAs(Button.class).fire();
         });
         fx.awaitJobs();
