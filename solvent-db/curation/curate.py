@@ -310,6 +310,11 @@ def main(argv):
     serat = by_cas(p("dippr-t-flash-serat.csv"))
     ich = {r[1]: r for r in read_tsv(p("ich-q3c-r8.tsv"))}
     proxy_tb = {c: num(phys[c][3]) for c in phys if num(phys[c][3]) is not None}
+    # median ΔHvap(298 K)/ΔHvap(Tb) of the CRC table over the listed solvents (acids excluded: they dimerise), for
+    # the Hansen-based vapour-pressure estimate (curation/vapour.py, hansen_estimate)
+    hvap_ratios = sorted(num(hvap[c][5]) / num(hvap[c][4]) for c in manual if c in hvap and manual[c]["family"] != "acid"
+                         and num(hvap[c][4]) and num(hvap[c][5]))
+    hvap_ratio = hvap_ratios[len(hvap_ratios) // 2]
     subgroups = {int(r[0]) for r in read_tsv(p("unifac-subgroups.tsv"))}
 
     ids = {}
@@ -486,7 +491,10 @@ def main(argv):
         # vapour pressure: one correlation per solvent, checked against the normal boiling point (curation/vapour.py)
         hv_pair = (num(hvap[cas][4]), num(hvap[cas][5])) if cas in hvap else None
         fp_k = float(r["flash_point_c"]) + 273.15 if r["flash_point_c"] else None
-        r.update(vapour.choose(cas, tb, vapour_tables, notes, proxy_tb, hv_pair, fp_k, vapour_points.get(cas)))
+        hansen = None
+        if r["dD"] and r["molar_volume"] and m["family"] in vapour.HANSEN_FAMILIES:
+            hansen = ((float(r["dD"]), float(r["dP"]), float(r["dH"])), float(r["molar_volume"]), hvap_ratio)
+        r.update(vapour.choose(cas, tb, vapour_tables, notes, proxy_tb, hv_pair, fp_k, vapour_points.get(cas), hansen))
 
         # enthalpy of vaporisation at 25 °C (kJ/mol)
         if cas in hvap and num(hvap[cas][5]) is not None:

@@ -212,7 +212,33 @@ def crc_estimate(tb_k, hvap_tb, hvap_298):
     return cand
 
 
-def choose(cas, tb_k, tables, notes, proxy_tb=None, hvap=None, flash_k=None, point=None):
+# Source key of the last-resort estimate: ΔHvap at 25 °C from the cohesive energy of the Hansen parameters.
+HANSEN_KEY = "estimate-clapeyron-hansen-hvap"
+# Families the Hansen-based estimate is applied to. Left out, by its error measured on the bundled solvents that
+# have published correlations (docs/methods.md): glycols (median error 48 %, always too low), carboxylic acids
+# (dimerise in the vapour), nitriles (benzonitrile +244 %), "other" (phosphates, sulfur compounds: median 30 %, and
+# low, the unsafe direction for a flash point) and water.
+HANSEN_FAMILIES = {"alcohol", "aliphatic", "amine", "aromatic", "chlorinated", "ester", "ether", "ketone", "glycol_ether",
+                   "glycol_ether_acetate", "dipolar_aprotic", "lactone", "carbonate", "terpene"}
+
+
+def hansen_estimate(tb_k, hansen, vm_cm3, ratio):
+    """Clausius–Clapeyron anchored at (Tb, 101.325 kPa) with ΔHvap(298.15 K) = δt²·Vm + R·298.15 (Hildebrand &
+    Scott: δt² is the cohesive energy density, J/cm³ = MPa) and ΔHvap(Tb) = ΔHvap(298.15 K) / ratio, ratio = the median
+    ΔHvap(298)/ΔHvap(Tb) of the CRC table over the bundled solvents (constant ΔCp between the two). None without Tb,
+    Hansen parameters or molar volume. Its measured error is in docs/methods.md."""
+    if tb_k is None or hansen is None or vm_cm3 is None or not tb_k > ROOM_K + 10:
+        return None
+    d2 = sum(x * x for x in hansen)
+    h298 = d2 * vm_cm3 + R * ROOM_K
+    htb = h298 / ratio
+    dcp = (h298 - htb) / (ROOM_K - tb_k)
+    coeffs = [f"{tb_k:.2f}", "101325", f"{htb:.0f}", f"{dcp:.2f}"]
+    return Candidate(HANSEN_KEY, "clapeyron", coeffs, f"{ROOM_K:.2f}", f"{tb_k:.2f}",
+                     label="estimate from Tb and ΔHvap from the Hansen cohesive energy")
+
+
+def choose(cas, tb_k, tables, notes, proxy_tb=None, hvap=None, flash_k=None, point=None, hansen=None):
     """The columns of the chosen correlation for one solvent ({} when none passes), adding reasons to notes.
 
     Rule (SOURCES.md, "Vapour pressure"): among the published candidates (of the solvent's CAS, else of its PROXIES
@@ -257,4 +283,11 @@ def choose(cas, tb_k, tables, notes, proxy_tb=None, hvap=None, flash_k=None, poi
         notes.append(f"vapour pressure estimated (Clausius–Clapeyron from the boiling point and CRC "
                      f"{est.label.split('CRC ')[1]}; no published correlation passes the boiling-point check)")
         return est.columns()
+    if hansen is not None:
+        est = hansen_estimate(tb_k, *hansen)
+        if est is not None:
+            notes.append("vapour pressure roughly estimated: Clausius–Clapeyron from the boiling point and ΔHvap(25 °C) = "
+                         "δt²·Vm + RT from the Hansen parameters (no published correlation or data point found; error "
+                         "in docs/methods.md)")
+            return est.columns()
     return {}
