@@ -13,6 +13,7 @@ import org.cohesa.cli.library.SolventCommand;
 import org.cohesa.cli.library.SolventsCommand;
 import org.cohesa.cli.records.RecordCommand;
 import org.cohesa.cli.safety.HazardsCommand;
+import org.cohesa.cli.structure.EstimateCommand;
 import org.cohesa.cli.target.FitCommand;
 
 import java.io.PrintWriter;
@@ -42,6 +43,7 @@ import picocli.CommandLine.ScopeType;
                 BackupCommand.class,
                 HazardsCommand.class,
                 FitCommand.class,
+                EstimateCommand.class,
                 DryCommand.class,
                 BlendCommand.class,
                 ReplaceCommand.class,

@@ -50,30 +50,49 @@ public final class MaterialsCommand extends CohesaSubcommand {
     @Command(name = "add", description = "Add your own material with a known sphere.")
     static final class Add extends CohesaSubcommand {
         @Option(names = "--name", required = true, description = "Name of the material.") String name;
-        @Option(names = "--dD", required = true, description = "δD of the centre, MPa^½.") String dD;
-        @Option(names = "--dP", required = true, description = "δP of the centre, MPa^½.") String dP;
-        @Option(names = "--dH", required = true, description = "δH of the centre, MPa^½.") String dH;
-        @Option(names = "--r0", required = true, description = "Interaction radius R0, MPa^½.") String r0;
-        @Option(names = "--kind", description = "polymer, resin, drug, pigment or other (default other).") String kind = "other";
-        @Option(names = "--source", description = "Where the sphere comes from (default: 'user entry').") String source = "user entry";
+        @Option(names = "--dD", description = "δD of the centre, MPa^½.") String dD;
+        @Option(names = "--dP", description = "δP of the centre, MPa^½.") String dP;
+        @Option(names = "--dH", description = "δH of the centre, MPa^½.") String dH;
+        @Option(names = "--r0", description = "Interaction radius R0, MPa^½ (required unless --smiles is given).") String r0;
+        @Option(names = "--smiles", description = "Structure of a drug substance or other small molecule: the centre is estimated from it "
+                + "(give --dD/--dP/--dH to override); without --r0 a default screening radius is used, with a caution.") String smiles;
+        @Option(names = "--kind", description = "polymer, resin, drug, pigment or other (default other; drug with --smiles).") String kind;
+        @Option(names = "--source", description = "Where the sphere comes from (default: 'user entry').") String source;
         @Option(names = "--synonym", description = "Another name (repeatable).") List<String> synonyms = List.of();
         @Option(names = "--note", description = "Free note.") String note;
 
         @Override
         protected void execute() {
             MaterialKind k;
+            String kindText = kind != null ? kind : smiles != null ? "drug" : "other";
             try {
-                k = MaterialKind.parse(kind);
+                k = MaterialKind.parse(kindText);
             } catch (IllegalArgumentException e) {
-                throw new InvalidInputException("--kind", kind, "must be one of " + MaterialKind.allowed());
+                throw new InvalidInputException("--kind", kindText, "must be one of " + MaterialKind.allowed());
             }
-            SolubilitySphere s = SolubilitySphere.of(parameter("--dD", dD), parameter("--dP", dP), parameter("--dH", dH), radius(r0));
-            Material m = new Material(name, synonyms, k, s, source, note, true);
+            org.cohesa.cli.structure.MaterialFromStructure.Centre c;
+            if (smiles != null) {
+                c = org.cohesa.cli.structure.MaterialFromStructure.centre(smiles, dD, dP, dH, r0);
+            } else {
+                for (String[] req : new String[][] {{"--dD", dD}, {"--dP", dP}, {"--dH", dH}, {"--r0", r0}}) {
+                    if (req[1] == null) {
+                        throw new InvalidInputException(req[0], "(missing)", "is required (or give --smiles to estimate the centre from the structure)");
+                    }
+                }
+                c = new org.cohesa.cli.structure.MaterialFromStructure.Centre(parameter("--dD", dD), parameter("--dP", dP), parameter("--dH", dH),
+                        radius(r0), null, java.util.List.of());
+            }
+            SolubilitySphere s = SolubilitySphere.of(c.dD(), c.dP(), c.dH(), c.r0());
+            String src = source != null ? source : c.source() != null ? c.source() : "user entry";
+            String fullNote = c.lines().isEmpty() ? note
+                    : (note == null || note.isBlank() ? "" : note + "; ") + String.join("; ", c.lines());
+            Material m = new Material(name, synonyms, k, s, src, fullNote, true);
             ctx().materials().add(m);
             if (json()) {
                 Output.json(out(), MaterialView.json(m, SourceCatalog.bundled()));
             } else {
                 out().println("added " + m.name());
+                c.lines().forEach(l -> out().println("  " + l));
             }
         }
 

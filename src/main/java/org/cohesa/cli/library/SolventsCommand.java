@@ -149,6 +149,8 @@ public final class SolventsCommand extends CohesaSubcommand {
         @Option(names = "--boiling-point", description = "°C.") String boilingPoint;
         @Option(names = "--flash-point", description = "closed cup, °C.") String flashPoint;
         @Option(names = "--price", description = "Price per litre, any currency.") String price;
+        @Option(names = "--smiles", description = "Structure: formula, molar mass, UNIFAC groups and the Hansen parameters and molar volume"
+                + " you do not give are estimated from it (marked estimated, with route and error in the note).") String smiles;
         @Option(names = "--set", paramLabel = "COLUMN=VALUE", description = "Any other column, e.g. --set hazard_statements=\"H225 H319\".")
         Map<String, String> set = new LinkedHashMap<>();
 
@@ -170,6 +172,7 @@ public final class SolventsCommand extends CohesaSubcommand {
                 }
                 row.put(e.getKey(), e.getValue());
             }
+            List<String> estimated = smiles == null ? List.of() : org.cohesa.cli.structure.SolventFromStructure.fill(row, smiles);
             List<RowError> errors = new ArrayList<>();
             Solvent s = SolventFields.fromRow(row, 1, true, errors);
             if (s == null) {
@@ -181,6 +184,7 @@ public final class SolventsCommand extends CohesaSubcommand {
                 Output.json(out(), SolventView.json(ctx().library().resolve("name", s.name()), SourceCatalog.bundled()));
             } else {
                 out().println("added " + s.name() + (s.hasHansen() ? "" : " (no Hansen parameters: left out of searches)"));
+                estimated.forEach(line -> out().println("  " + line));
             }
         }
 

@@ -24,6 +24,12 @@ public final class UnifacGrouper {
     private UnifacGrouper() {
     }
 
+    /** Name of an original-UNIFAC subgroup as the table writes it (e.g. 14 → "OH"), or "#id" when unknown here. */
+    public static String name(int subgroup) {
+        return UnifacPatterns.ORDER.stream().filter(p -> p.subgroup() == subgroup).map(UnifacGroupPattern::name).findFirst()
+                .orElse("#" + subgroup);
+    }
+
     public static UnifacGrouping group(Structure structure) {
         IAtomContainer mol = structure.copyOfMolecule();
         SmartsPattern.prepare(mol);

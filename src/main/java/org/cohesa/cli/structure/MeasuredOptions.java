@@ -1,0 +1,43 @@
+package org.cohesa.cli.structure;
+
+import org.cohesa.cli.Args;
+import org.cohesa.core.structure.MeasuredProperties;
+import picocli.CommandLine.Option;
+
+/** Measured liquid properties that move a component of a structure estimate to the property route. */
+public final class MeasuredOptions {
+
+    @Option(names = "--density", paramLabel = "G_PER_CM3", description = "Measured density at 20–25 °C, g/cm³ (molar volume = M/ρ).")
+    String density;
+
+    @Option(names = "--refractive-index", paramLabel = "N_D", description = "Measured refractive index n_D (δD from the molar refraction).")
+    String refractiveIndex;
+
+    @Option(names = "--dipole", paramLabel = "DEBYE", description = "Dipole moment, debye (δP by Hansen–Beerbower).")
+    String dipole;
+
+    public MeasuredProperties properties() {
+        return new MeasuredProperties(number("--density", density), number("--refractive-index", refractiveIndex), number("--dipole", dipole), null);
+    }
+
+    public Double density() {
+        return number("--density", density);
+    }
+
+    private static Double number(String field, String text) {
+        if (text == null) {
+            return null;
+        }
+        double v = Args.number(field, text);
+        try {
+            switch (field) {
+                case "--density" -> new MeasuredProperties(v, null, null, null);
+                case "--refractive-index" -> new MeasuredProperties(null, v, null, null);
+                default -> new MeasuredProperties(null, null, v, null);
+            }
+        } catch (org.cohesa.core.InvalidInputException e) {
+            throw new org.cohesa.core.InvalidInputException(field, text, e.reason());
+        }
+        return v;
+    }
+}

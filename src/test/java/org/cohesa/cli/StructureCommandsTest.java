@@ -1,0 +1,78 @@
+package org.cohesa.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class StructureCommandsTest {
+
+    @TempDir
+    Path dir;
+
+    private Path db() {
+        return dir.resolve("cohesa.db");
+    }
+
+    @Test
+    void estimatePrintsValuesRoutesAndGroupsAndStoresNothing() {
+        // Ethyl acetate: published (15.8, 5.3, 7.2) MPa½ (Alshehri 2022 table); DDBST groups CH3 + CH2 + CH3COO.
+        CliTestSupport.Result r = CliTestSupport.run(db(), "estimate", "CCOC(C)=O", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode j = r.json();
+        assertEquals("C4H8O2", j.get("structure").get("formula").asText());
+        assertTrue(Math.abs(j.get("dD").get("value").asDouble() - 15.8) < 1.62);
+        assertEquals("group contribution (Mathieu 2018)", j.get("dP").get("route").asText());
+        assertEquals(1, j.get("unifac").get("groups").get("21").asInt());
+        assertTrue(j.get("molarVolume").get("estimated").asBoolean());
+        CliTestSupport.Result table = CliTestSupport.run(db(), "estimate", "CCOC(C)=O", "--density", "0.900", "--dipole", "1.78");
+        assertTrue(table.out().contains("dipole moment (Hansen–Beerbower)"), table.out());
+        assertTrue(table.out().contains("molar mass / given density"), table.out());
+        CliTestSupport.Result mine = CliTestSupport.run(db(), "solvents", "--mine", "--json");
+        assertEquals(0, mine.json().size(), "estimate must not store anything");
+    }
+
+    @Test
+    void badStructuresGetOneLineAndExit2() {
+        for (String bad : new String[] {"C1CC", "[CH3]", "CC(=O)[O-].[Na+]", "CC[Sn](C)(C)C"}) {
+            CliTestSupport.Result r = CliTestSupport.run(db(), "estimate", bad);
+            assertEquals(2, r.exitCode(), bad);
+            String line = (r.err() + r.out()).strip();
+            assertEquals(1, line.lines().count(), line);
+            assertTrue(line.contains("SMILES '" + bad + "'"), line);
+        }
+        CliTestSupport.Result add = CliTestSupport.run(db(), "solvents", "add", "--name", "tin thing", "--smiles", "CC[Sn](C)(C)C");
+        assertEquals(2, add.exitCode());
+        assertTrue((add.err() + add.out()).contains("--smiles"), add.err());
+        assertEquals(0, CliTestSupport.run(db(), "solvents", "--mine", "--json").json().size(), "nothing stored");
+    }
+
+    @Test
+    void aSolventAddedByItsStructureIsStoredWithItsEstimatesMarked() {
+        CliTestSupport.Result r = CliTestSupport.run(db(), "solvents", "add", "--name", "my ester", "--smiles", "CCOCCC(=O)OCC", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode s = CliTestSupport.run(db(), "solvents", "my ester", "--mine", "--json").json().get(0);
+        assertTrue(s.toString().contains("C7H14O3"), s.toString());
+        assertTrue(s.toString().contains("estimate-structure-mathieu-2018"), s.toString());
+        assertTrue(s.toString().contains("1:2 2:2 22:1 25:1") || s.toString().contains("\"22\""), s.toString());
+        // a measured value the user gives wins over the estimate
+        CliTestSupport.Result given = CliTestSupport.run(db(), "solvents", "add", "--name", "my ester 2", "--smiles", "CCOCCC(=O)OCC",
+                "--dD", "16.0", "--dP", "3.3", "--dH", "8.8");
+        assertEquals(0, given.exitCode(), given.err());
+        assertFalse(given.out().contains("δD 15.8 estimated"), given.out());
+    }
+
+    @Test
+    void aDrugSubstanceByItsStructureGetsTheDefaultRadiusWithACaution() {
+        CliTestSupport.Result r = CliTestSupport.run(db(), "materials", "add", "--name", "ibuprofen test", "--smiles", "CC(C)Cc1ccc(cc1)C(C)C(=O)O");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("R0 7.0 is a default screening radius"), r.out());
+        assertTrue(r.out().contains("cohesa fit"), r.out());
+        CliTestSupport.Result blend = CliTestSupport.run(db(), "blend", "--material", "ibuprofen test", "--json");
+        assertEquals(0, blend.exitCode(), blend.err());
+    }
+}
