@@ -62,7 +62,20 @@ class Space3DViewTest {
 
         Sphere sphere = (Sphere) sub.getRoot().lookup("#target-sphere");
         assertTrue(sphere.isVisible());
-        assertTrue(((PhongMaterial) sphere.getMaterial()).getDiffuseColor().getOpacity() < 0.5, "the sphere is translucent");
+        // an opaque wire cage: points inside keep their hue (no translucent surface blends over them)
+        assertEquals(1.0, ((PhongMaterial) sphere.getMaterial()).getDiffuseColor().getOpacity(), 1e-12);
+        assertEquals(javafx.scene.shape.DrawMode.LINE, sphere.getDrawMode());
+        // zoom centres on the target: its projected place on the screen (x / depth, y / depth) stays while the camera moves
+        javafx.scene.Node centreNode = sub.getRoot().lookup("#target-centre");
+        Point3D before = centreNode.localToScene(0, 0, 0);
+        double camBefore = sub.getCamera().getTranslateZ();
+        robot.interact(() -> view.zoomBy(0.5));
+        Point3D after = centreNode.localToScene(0, 0, 0);
+        double camAfter = sub.getCamera().getTranslateZ();
+        assertTrue(Math.abs(camAfter) < Math.abs(camBefore), "the camera moved in");
+        assertEquals(before.getX() / (before.getZ() - camBefore), after.getX() / (after.getZ() - camAfter), 1e-9, "target keeps its x on screen");
+        assertEquals(before.getY() / (before.getZ() - camBefore), after.getY() / (after.getZ() - camAfter), 1e-9, "target keeps its y on screen");
+        robot.interact(view::resetView);
         assertEquals(6, sphere.getRadius(), 1e-12);
         // with the doubled δD axis the sphere is round (Hansen 2007, ch. 1: Ra uses 4ΔδD²)
         assertEquals(1.0, sphere.getScaleX(), 1e-12);

@@ -64,7 +64,7 @@ public final class Space3DView {
     private final Group pointGroup = new Group();
     private final Group blendGroup = new Group();
     private final Group pathGroup = new Group();
-    private final Sphere targetSphere = new Sphere(1, 32);
+    private final Sphere targetSphere = new Sphere(1, 20);
     private final Sphere targetCentre = new Sphere(0.3, 12);
     private final Sphere selectedMarker = new Sphere(POINT_RADIUS * 2.2, 16);
     private final Pane overlay = new Pane();
@@ -80,6 +80,10 @@ public final class Space3DView {
     private final List<PhongMaterial> categoryMaterials = new ArrayList<>();
     private static final int WARM_UP_FRAMES = 5;
     private double defaultDistance = 140;
+    private double defaultPanX;
+    private double defaultPanY;
+    /** The plotted box's corners relative to the pivot, in world units (for fitting the camera). */
+    private final List<Point3D> corners = new ArrayList<>();
     private double pressX;
     private double pressY;
     private boolean dragged;
@@ -96,10 +100,13 @@ public final class Space3DView {
         pointGroup.setId("points");
         blendGroup.setId("blend");
         pathGroup.setId("drying-path");
-        PhongMaterial glass = new PhongMaterial(Color.color(0.10, 0.32, 0.50, 0.28));
-        glass.setSpecularColor(Color.TRANSPARENT);
-        targetSphere.setMaterial(glass);
-        targetSphere.setCullFace(CullFace.BACK);
+        // the target is an opaque wire cage, not a translucent surface: a point inside keeps its own hue (no blending
+        // with a glass colour), and a software renderer draws a few hundred lines far faster than a filled, blended sphere
+        PhongMaterial cage = new PhongMaterial(Palette.TARGET);
+        cage.setSpecularColor(Color.TRANSPARENT);
+        targetSphere.setMaterial(cage);
+        targetSphere.setDrawMode(DrawMode.LINE);
+        targetSphere.setCullFace(CullFace.NONE);
         targetCentre.setMaterial(new PhongMaterial(Palette.TARGET));
         PhongMaterial ring = new PhongMaterial(Palette.SELECTION);
         selectedMarker.setMaterial(ring);
@@ -108,12 +115,10 @@ public final class Space3DView {
         // the translucent sphere is added last: JavaFX blends in scene-graph order, so everything behind it
         // must already be drawn
         world.getChildren().addAll(axes, pointGroup, selectedMarker, blendGroup, pathGroup, targetCentre, targetSphere);
-        AmbientLight ambient = new AmbientLight(Color.gray(0.55));
-        PointLight key = new PointLight(Color.gray(0.75));
-        key.setTranslateX(-300);
-        key.setTranslateY(-400);
-        key.setTranslateZ(-600);
-        root.getChildren().addAll(world, ambient, key);
+        // one ambient light only: each point is a few pixels wide, so shading adds nothing a reader can see, while every
+        // extra light costs a software renderer per-pixel work (docs/performance.md); colours stay their palette hue
+        AmbientLight ambient = new AmbientLight(Color.WHITE);
+        root.getChildren().addAll(world, ambient);
         camera.setFieldOfView(32);
         camera.setNearClip(0.5);
         camera.setFarClip(5000);
@@ -137,6 +142,8 @@ public final class Space3DView {
         container.setStyle("-fx-background-color: " + Palette.css(Palette.INK) + ";");
         installInteraction();
         model.pointsProperty().addListener((o, a, b) -> rebuild());
+        subScene.widthProperty().addListener((o, a, b) -> refit());
+        subScene.heightProperty().addListener((o, a, b) -> refit());
         model.doubledDdProperty().addListener((o, a, b) -> rebuild());
         session.selectedSolventProperty().addListener((o, a, b) -> placeSelection());
         session.selectedBlendProperty().addListener((o, a, b) -> drawBlend());
@@ -186,12 +193,56 @@ public final class Space3DView {
         return n;
     }
 
+    /**
+     * The camera distance at which the plotted box, seen at the starting angle, fills the frame with an 8 % margin:
+     * each corner, turned as the view turns it, must project inside the frame (perspective: |x| / (d + z) ≤ tan of
+     * half the field of view, the horizontal one widened by the frame's aspect ratio).
+     */
+    private double fitDistance() {
+        double w = Math.max(1, subScene.getWidth());
+        double h = Math.max(1, subScene.getHeight());
+        double tv = Math.tan(Math.toRadians(camera.getFieldOfView() / 2)) * 0.86; // room for the axis titles
+        double th = tv * w / h;
+        Rotate sx = new Rotate(DEFAULT_RX, Rotate.X_AXIS);
+        Rotate sy = new Rotate(DEFAULT_RY, Rotate.Y_AXIS);
+        List<Point3D> turned = new ArrayList<>();
+        double minX = Double.MAX_VALUE;
+        double maxX = -Double.MAX_VALUE;
+        double minY = Double.MAX_VALUE;
+        double maxY = -Double.MAX_VALUE;
+        for (Point3D c : corners) {
+            Point3D q = sx.transform(sy.transform(c));
+            turned.add(q);
+            minX = Math.min(minX, q.getX());
+            maxX = Math.max(maxX, q.getX());
+            minY = Math.min(minY, q.getY());
+            maxY = Math.max(maxY, q.getY());
+        }
+        // the box is centred by a camera-space shift; the pivot (the target) stays the point rotation and zoom keep fixed
+        defaultPanX = turned.isEmpty() ? 0 : -(minX + maxX) / 2;
+        defaultPanY = turned.isEmpty() ? 0 : -(minY + maxY) / 2;
+        double d = 20;
+        for (Point3D q : turned) {
+            d = Math.max(d, Math.max(Math.abs(q.getX() + defaultPanX) / th, Math.abs(q.getY() + defaultPanY) / tv) - q.getZ());
+        }
+        return Math.min(2000, d);
+    }
+
+    /** Refits the camera when the frame changes size, unless the user has zoomed. */
+    private void refit() {
+        boolean atDefault = Math.abs(camera.getTranslateZ() + defaultDistance) < 1e-6;
+        defaultDistance = fitDistance();
+        if (atDefault) {
+            resetView();
+        }
+    }
+
     /** Back to the starting angle, zoom and position. */
     public void resetView() {
         rx.setAngle(DEFAULT_RX);
         ry.setAngle(DEFAULT_RY);
-        pan.setX(0);
-        pan.setY(0);
+        pan.setX(defaultPanX);
+        pan.setY(defaultPanY);
         camera.setTranslateZ(-defaultDistance);
     }
 
@@ -200,9 +251,17 @@ public final class Space3DView {
         rx.setAngle(Math.max(-89, Math.min(89, rx.getAngle() - dyDegrees)));
     }
 
+    /**
+     * Zooms about the target: the camera moves along its axis and the camera-space shift scales with the distance,
+     * so the target (the pivot) keeps its place on the screen while everything else grows or shrinks around it.
+     */
     public void zoomBy(double factor) {
-        double d = -camera.getTranslateZ() * factor;
-        camera.setTranslateZ(-Math.max(20, Math.min(2000, d)));
+        double before = -camera.getTranslateZ();
+        double d = Math.max(20, Math.min(2000, before * factor));
+        double k = d / before;
+        pan.setX(pan.getX() * k);
+        pan.setY(pan.getY() * k);
+        camera.setTranslateZ(-d);
     }
 
     /**
@@ -333,14 +392,29 @@ public final class Space3DView {
         double cx = (x0 + x1) / 2;
         double cy = -(r.hMin() + r.hMax()) / 2;
         double cz = (r.pMin() + r.pMax()) / 2;
+        SolubilitySphere t = model.targetSphere();
+        if (t != null) {
+            // rotation and zoom turn about the target: it stays in the middle of the frame at every angle and zoom
+            Point3D tc = world(t.centre());
+            cx = tc.getX();
+            cy = tc.getY();
+            cz = tc.getZ();
+        }
         centre.setX(-cx);
         centre.setY(-cy);
         centre.setZ(-cz);
-        double diag = Math.sqrt(Math.pow(x1 - x0, 2) + Math.pow(r.hMax() - r.hMin(), 2) + Math.pow(r.pMax() - r.pMin(), 2));
+        corners.clear();
+        for (double x : new double[] {x0, x1}) {
+            for (double y : new double[] {-r.hMin(), -r.hMax()}) {
+                for (double z : new double[] {r.pMin(), r.pMax()}) {
+                    corners.add(new Point3D(x - cx, y - cy, z - cz));
+                }
+            }
+        }
         double oldDefault = defaultDistance;
-        defaultDistance = diag * 2.3;
+        defaultDistance = fitDistance();
         if (Math.abs(camera.getTranslateZ() + oldDefault) < 1e-6) {
-            camera.setTranslateZ(-defaultDistance);
+            resetView();
         }
         buildAxes(r, k);
         buildPoints();
