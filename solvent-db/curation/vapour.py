@@ -161,6 +161,12 @@ PROXIES = {
     "25498-49-1": ("20324-33-8", "tripropylene glycol methyl ether (isomer mixture): curve of the isomer 20324-33-8"),
 }
 
+# Solvents without a boiling point of their own whose liquid the CRC table lists under another CAS: that boiling point
+# is the check of the vapour-pressure fit (written into the note): cas -> (CAS of the CRC row, reason).
+TB_PROXIES = {
+    "123-96-6": ("4128-31-8", "2-octanol: the CRC table lists (±)-2-octanol under CAS 4128-31-8"),
+}
+
 # Source key of the stored estimate made from the CRC enthalpies of vaporisation (SOURCES.md, docs/methods.md).
 ESTIMATE_KEY = "estimate-clapeyron-crc-hvap"
 # Source key of the curve through the normal boiling point and one published vapour-pressure point (vapour-points.csv).
@@ -259,6 +265,10 @@ def choose(cas, tb_k, tables, notes, proxy_tb=None, hvap=None, flash_k=None, poi
             if tb_k is None and proxy_tb and proxy_tb.get(proxy):
                 tb_k = proxy_tb[proxy]
                 notes.append(f"vapour-pressure fit checked at the boiling point of {proxy}: {tb_k - 273.15:.2f} °C")
+    if cands and tb_k is None and cas in TB_PROXIES and proxy_tb and proxy_tb.get(TB_PROXIES[cas][0]):
+        other, reason = TB_PROXIES[cas]
+        tb_k = proxy_tb[other]
+        notes.append(f"{reason}; vapour-pressure fit checked at the boiling point of {other}: {tb_k - 273.15:.2f} °C")
     if cands and tb_k is None:
         notes.append("vapour-pressure correlation not used: no boiling point to check it against")
         cands = []
