@@ -1,0 +1,65 @@
+package org.cohesa.core.structure;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.cohesa.core.activity.BundledLiquids;
+import org.cohesa.core.solvent.Solvent;
+import org.junit.jupiter.api.Test;
+
+/**
+ * {@code solvent-db/curation/estimated-hsp.csv}: structure-based Hansen estimates for the bundled solvents that have
+ * a SMILES but no published Hansen parameters, each with its route and expected error, for curation to take up
+ * as estimated values (source key estimate-structure-mathieu-2018). The file is generated from the code; this test
+ * fails when it is stale. Regenerate with {@code -Dcohesa.writeEstimates=true}.
+ */
+class LibraryEstimatesTest {
+
+    static final Path FILE = Path.of("solvent-db", "curation", "estimated-hsp.csv");
+
+    static String table() {
+        List<String> lines = new ArrayList<>();
+        lines.add("cas,name,smiles,dD,dP,dH,route,mae_dD,mae_dP,mae_dH,p90_dD,p90_dP,p90_dH,family,caution");
+        for (Solvent s : BundledLiquids.library().all()) {
+            if (s.hasHansen() || s.smiles() == null || s.cas() == null) {
+                continue;
+            }
+            StructureEstimate e = StructureEstimator.estimate(StructureParser.parse("smiles", s.smiles()), MeasuredProperties.NONE);
+            if (!e.hasHansen()) {
+                lines.add(String.join(",", s.cas(), quote(s.name()), quote(s.smiles()), "", "", "", "not covered", "", "", "", "", "", "",
+                        quote(e.family()), quote(e.warnings().get(0))));
+                continue;
+            }
+            String caution = e.warnings().stream().filter(w -> w.contains("much less well")).findFirst().orElse("");
+            lines.add(String.join(",", s.cas(), quote(s.name()), quote(s.smiles()),
+                    f(e.dD().value()), f(e.dP().value()), f(e.dH().value()), "estimate-structure-mathieu-2018",
+                    f(e.dD().expectedMae()), f(e.dP().expectedMae()), f(e.dH().expectedMae()),
+                    f(e.dD().expectedP90()), f(e.dP().expectedP90()), f(e.dH().expectedP90()), quote(e.family()), quote(caution)));
+        }
+        return String.join("\n", lines) + "\n";
+    }
+
+    private static String f(double v) {
+        return String.format(Locale.ROOT, "%.1f", v);
+    }
+
+    private static String quote(String t) {
+        return t.contains(",") || t.contains("\"") ? "\"" + t.replace("\"", "\"\"") + "\"" : t;
+    }
+
+    @Test
+    void theEstimatesFileIsCurrent() throws IOException {
+        String expected = table();
+        if (Boolean.getBoolean("cohesa.writeEstimates")) {
+            Files.writeString(FILE, expected, StandardCharsets.UTF_8);
+        }
+        assertEquals(expected, Files.readString(FILE, StandardCharsets.UTF_8),
+                "solvent-db/curation/estimated-hsp.csv is stale: regenerate with -Dcohesa.writeEstimates=true");
+    }
+}
