@@ -173,6 +173,59 @@ class BlendCommandsTest {
     }
 
     @Test
+    void processConstraintsOfIssue18() {
+        // Families: every family of a solvent counts (chlorobenzene is aromatic and chlorinated; benzyl alcohol alcohol and aromatic).
+        CliTestSupport.Result fam = run("blend", "--target", "19,4.3,2,5", "--exclude-family", "aromatic", "--allow-cmr", "--json");
+        assertEquals(0, fam.exitCode(), fam.err());
+        String counts = fam.json().get("search").get("left_out_names").toString();
+        assertTrue(counts.contains("chlorobenzene") && counts.contains("benzyl alcohol"), counts);
+        // Reactive solvents are flagged and can be left out.
+        CliTestSupport.Result flagged = run("blend", "--target", "17.8,0.4,1,4", "--include", "triethylamine", "--include", "n-heptane", "--json");
+        assertEquals(0, flagged.exitCode(), flagged.err());
+        assertTrue(flagged.out().contains("triethylamine: amine or pyridine base"), "triethylamine is flagged: " + flagged.out());
+        CliTestSupport.Result noReactive = run("blend", "--target", "17.8,0.4,1,4", "--include", "triethylamine", "--include", "n-heptane",
+                "--exclude-reactive", "amine", "--json");
+        assertTrue(noReactive.json().get("search").get("left_out_names").toString().contains("reactive: amine"), noReactive.out());
+        for (JsonNode b : noReactive.json().get("blends")) {
+            assertEquals(0, b.get("flags").size(), "no reactive solvent once left out: " + b);
+        }
+        // ICH Q3C: "not listed" is kept apart from class 3 and the user chooses.
+        CliTestSupport.Result ich = run("replace", "toluene", "--max-ich-class", "3", "--json");
+        for (JsonNode c : ich.json().get("candidates")) {
+            assertFalse(c.get("ich_class").asText().contains("not listed"), c.toString());
+        }
+        CliTestSupport.Result unlisted = run("replace", "toluene", "--max-ich-class", "3", "--ich-unlisted", "keep", "--json");
+        assertTrue(unlisted.out().contains("not listed"), unlisted.out());
+        // A flash-point limit on the blend itself, and the output says which limit it applied.
+        CliTestSupport.Result flash = run("blend", "--material", "PMMA", "--min-blend-flash-point", "30", "--max-components", "2", "--json");
+        assertTrue(flash.json().get("applied_limits").toString().contains("blend's computed flash point only"), flash.out());
+        for (JsonNode b : flash.json().get("blends")) {
+            JsonNode fp = b.get("flash_point_c");
+            assertTrue(fp.isNull() || fp.asDouble() >= 30, b.toString());
+        }
+        // replace takes --material as blend does.
+        CliTestSupport.Result mat = run("replace", "toluene", "--material", "PMMA", "--top", "3", "--json");
+        assertEquals(0, mat.exitCode(), mat.err());
+        assertEquals("poly(methyl methacrylate)", mat.json().get("target").get("material").asText());
+    }
+
+    @Test
+    void withWaterImmiscibleGivesExtractionSolventsAndSaysOnWhatBasis() {
+        CliTestSupport.Result r = run("replace", "dichloromethane", "--with-water", "immiscible", "--top", "5", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.json().get("candidates").size() > 0, r.out());
+        for (JsonNode c : r.json().get("candidates")) {
+            assertTrue(c.get("why").toString().contains("with water: immiscible"), c.get("why").toString());
+        }
+        // Common practice, no source: acetone and ethanol mix with water in all proportions, so no miscible-only answer passes.
+        CliTestSupport.Result m = run("blend", "--target", "15.5,10.4,7,4", "--with-water", "miscible", "--max-components", "1", "--top", "5", "--json");
+        assertEquals(0, m.exitCode(), m.err());
+        for (JsonNode b : m.json().get("blends")) {
+            assertTrue(b.get("why").toString().contains("with water: miscible"), b.toString());
+        }
+    }
+
+    @Test
     void badInputGivesOneErrorLineAndExitTwo() {
         String[][] cases = {
                 {"blend", "--target", "18,9,8"},
@@ -191,6 +244,8 @@ class BlendCommandsTest {
                 {"blend", "--target", "18,9,8,7", "--exclude-reactive", "sugar"},
                 {"blend", "--target", "18,9,8,7", "--ich-unlisted", "maybe"},
                 {"replace", "toluene", "--because", "smell"},
+                {"blend", "--target", "18,9,8,7", "--with-water", "sometimes"},
+                {"replace", "toluene", "--material", "PMMA", "--target", "18,9,8,7"},
         };
         for (String[] c : cases) {
             CliTestSupport.Result r = run(c);

@@ -63,7 +63,7 @@ public final class BlendCommand extends CohesaSubcommand {
                     "must exceed the number of fixed components (" + c.fixed().size() + ")");
         }
         BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, k, top, rankBy, redLimit, options.keepTwoPhase, kelvin, options.weights());
-        BlendDesigner.Result r = BlendDesigner.design(lib.all(), req, PhaseChecks.miscibility(),
+        BlendDesigner.Result r = BlendDesigner.design(lib.all(), req, PhaseChecks.miscibility(), BlendOptions.waterCheck(lib, c),
                 BlendView.progress(spec.commandLine().getErr()), null);
         if (json()) {
             BlendReport.Target t = new BlendReport.Target(sphere.centre().dD(), sphere.centre().dP(), sphere.centre().dH(), sphere.r0(),

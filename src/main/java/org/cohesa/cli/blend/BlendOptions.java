@@ -14,6 +14,10 @@ import org.cohesa.core.blend.BlendConstraints;
 import org.cohesa.core.blend.BlendSearch;
 import org.cohesa.core.blend.Desirability;
 import org.cohesa.core.blend.ReactiveFlag;
+import org.cohesa.core.blend.WaterCheck;
+import org.cohesa.core.activity.WaterMiscibility;
+import org.cohesa.core.activity.WaterSolubilityTable;
+import org.cohesa.store.WaterMiscibilityCsv;
 import org.cohesa.core.blend.RankBy;
 import org.cohesa.core.solvent.BlendComponent;
 import org.cohesa.core.solvent.Solvent;
@@ -85,6 +89,9 @@ public final class BlendOptions {
 
     @Option(names = "--weights", paramLabel = "NAME=W,...", description = "Expert: desirability weights hazard, components, cost, distance (e.g. hazard=2,components=1); unnamed ones keep the --prefer value.")
     String weights;
+
+    @Option(names = "--with-water", paramLabel = "miscible|immiscible", description = "How the blend must behave with water: immiscible (separates at 1:1, an extraction solvent) or miscible (one phase at every water content, a waterborne cosolvent); measured mutual solubilities first, the activity model elsewhere.")
+    String withWater;
 
     @Option(names = "--all", description = "Show the near-duplicates folded under each suggestion (same solvents but one, fractions within 5 %).")
     boolean all;
@@ -204,7 +211,32 @@ public final class BlendOptions {
         BlendConstraints c = new BlendConstraints(base.include(), base.exclude(), base.families(), base.excludeFamilies(), base.fixed(),
                 base.minFraction(), base.maxFraction(), base.fractionRanges(), base.boilingMinC(), base.boilingMaxC(), base.minFlashPointC(),
                 base.maxIchClass(), !allowCmr, base.maxCost());
-        return c.with(new BlendConstraints.More(!allowIchClass1, unl.equals("keep"), List.of(), reactive, minBlendFlash, bb[0], bb[1]));
+        WaterCheck.Need water = null;
+        if (withWater != null) {
+            water = switch (withWater.strip().toLowerCase(Locale.ROOT)) {
+                case "miscible" -> WaterCheck.Need.MISCIBLE;
+                case "immiscible" -> WaterCheck.Need.IMMISCIBLE;
+                default -> throw new InvalidInputException("--with-water", withWater, "write miscible or immiscible");
+            };
+        }
+        return c.with(new BlendConstraints.More(!allowIchClass1, unl.equals("keep"), List.of(), reactive, minBlendFlash, bb[0], bb[1], water));
+    }
+
+    /** The water judgement for --with-water: published mutual solubilities (solvent-db/water-miscibility.csv), else the LLE model. */
+    static WaterCheck waterCheck(SolventLibrary lib, BlendConstraints c) {
+        if (c.more().withWater() == null) {
+            return WaterCheck.NONE;
+        }
+        Solvent water = lib.all().stream().filter(WaterMiscibility::isWater).findFirst()
+                .orElseThrow(() -> new InvalidInputException("--with-water", c.more().withWater().word(), "the library has no water entry to judge with"));
+        WaterSolubilityTable data = WaterMiscibilityCsv.bundled();
+        return (components, fractions, kelvin) -> {
+            try {
+                return WaterMiscibility.withWater(components, fractions, water, kelvin, data);
+            } catch (IllegalArgumentException e) {
+                return null; // not judged (missing data): does not meet the demand
+            }
+        };
     }
 
     /** "60..120", "60..", "..120" → {min, max}; null text → {null, null}. */

@@ -95,6 +95,7 @@ final class BlendReport {
             @JsonProperty("without_hansen_names") List<String> withoutHansenNames, long subsets, @JsonProperty("solved_exactly") long solvedExactly,
             @JsonProperty("two_phase_left_out") int twoPhaseLeftOut, @JsonProperty("below_blend_flash_point_left_out") int belowBlendFlashPointLeftOut,
             @JsonProperty("outside_blend_boiling_range_left_out") int outsideBlendBoilingRangeLeftOut,
+            @JsonProperty("water_demand_not_met_left_out") int waterDemandNotMetLeftOut,
             @JsonProperty("left_out_by_safety_defaults") List<Default> leftOutBySafetyDefaults) {
     }
 
@@ -104,7 +105,7 @@ final class BlendReport {
         p.leftOut().forEach((reason, names) -> counts.put(reason, names.size()));
         return new Search(p.librarySize(), p.free().size(), p.withoutHansen(), counts, p.leftOut(),
                 p.leftOut().getOrDefault(CandidatePool.NO_HANSEN, List.of()), r.subsets(), r.solved(), r.droppedTwoPhase(), r.droppedFlashPoint(),
-                r.droppedBoiling(), defaults(p));
+                r.droppedBoiling(), r.droppedWater(), defaults(p));
     }
 
     record Ranking(@JsonProperty("rank_by") String rankBy, String prefer, String weights, @JsonProperty("red_limit") double redLimit,

@@ -80,7 +80,8 @@ public final class BlendView {
                 p.free().size(), p.librarySize(), p.withoutHansen(), leftOut, p.fixed().isEmpty() ? "" : ", " + p.fixed().size() + " fixed",
                 r.subsets(), r.solved(), (r.droppedTwoPhase() > 0 ? "; " + r.droppedTwoPhase() + " two-phase blends left out (--keep-two-phase shows them)" : "")
                         + (r.droppedFlashPoint() > 0 ? "; " + r.droppedFlashPoint() + " left out: blend flash point below the minimum" : "")
-                        + (r.droppedBoiling() > 0 ? "; " + r.droppedBoiling() + " left out: blend initial boiling point outside the window or unknown" : ""));
+                        + (r.droppedBoiling() > 0 ? "; " + r.droppedBoiling() + " left out: blend initial boiling point outside the window or unknown" : "")
+                        + (r.droppedWater() > 0 ? "; " + r.droppedWater() + " left out: not " + "as demanded with water" : ""));
     }
 
     /** One line per safety-first default that left something out, with the option that brings it back. */
@@ -114,6 +115,11 @@ public final class BlendView {
         }
         for (HazardLimit h : c.more().healthLimits()) {
             out.add("replaced for " + h.kind() + " (" + h.because() + "): no candidate carries the same or a worse statement of that kind");
+        }
+        if (c.more().withWater() != null) {
+            out.add("with water: " + (c.more().withWater() == org.cohesa.core.blend.WaterCheck.Need.IMMISCIBLE
+                    ? "immiscible — two liquid phases at 1:1 by volume" : "miscible — one liquid phase at every water content from 2 to 98 % by volume")
+                    + ", judged from published mutual solubilities (solvent-db/water-miscibility.csv) where they exist and the UNIFAC LLE model elsewhere; each suggestion's why says which");
         }
         if (!c.more().excludeReactive().isEmpty()) {
             out.add("reactive solvents left out: " + c.more().excludeReactive().stream().map(ReactiveFlag::label).collect(Collectors.joining(", ")));

@@ -114,7 +114,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
         }
         BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, k, options.top(), options.rankBy(), options.redLimit(),
                 options.keepTwoPhase, options.kelvin(), replaceWeights(options, original));
-        BlendDesigner.Result r = BlendDesigner.design(lib.all(), req, PhaseChecks.miscibility(), BlendView.progress(spec.commandLine().getErr()), null);
+        BlendDesigner.Result r = BlendDesigner.design(lib.all(), req, PhaseChecks.miscibility(), BlendOptions.waterCheck(lib, c), BlendView.progress(spec.commandLine().getErr()), null);
         boolean centred = target == null && material == null;
         List<String> replacedFor = why.words();
         if (json()) {
@@ -265,7 +265,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
             return new BlendConstraints(c.include(), c.exclude(), c.families(), c.excludeFamilies(), c.fixed(), c.minFraction(), c.maxFraction(),
                     c.fractionRanges(), bpMin, bpMax, minFlash, ich, c.noCmr(), c.maxCost(),
                     new BlendConstraints.More(m.noIchClass1(), m.ichUnlistedAllowed(), limits, m.excludeReactive(), m.minBlendFlashPointC(),
-                            m.blendBoilingMinC(), m.blendBoilingMaxC()));
+                            m.blendBoilingMinC(), m.blendBoilingMaxC(), m.withWater()));
         } catch (IllegalArgumentException e) {
             throw new InvalidInputException("--because", String.join(",", w.words()), e.getMessage());
         }

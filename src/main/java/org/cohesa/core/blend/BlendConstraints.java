@@ -54,11 +54,18 @@ public record BlendConstraints(
      * @param minBlendFlashPointC  least computed flash point of the blend itself (Liaw et al. 2002), °C; components may be lower
      * @param blendBoilingMinC     lowest computed initial boiling point (bubble point) of the blend, °C
      * @param blendBoilingMaxC     highest computed initial boiling point (bubble point) of the blend, °C
+     * @param withWater            how the blend must behave with water (null: no demand)
      */
     public record More(boolean noIchClass1, boolean ichUnlistedAllowed, List<HazardLimit> healthLimits, Set<ReactiveFlag> excludeReactive,
-            Double minBlendFlashPointC, Double blendBoilingMinC, Double blendBoilingMaxC) {
+            Double minBlendFlashPointC, Double blendBoilingMinC, Double blendBoilingMaxC, WaterCheck.Need withWater) {
 
-        public static final More NONE = new More(false, false, List.of(), Set.of(), null, null, null);
+        public static final More NONE = new More(false, false, List.of(), Set.of(), null, null, null, null);
+
+        /** Demands without a water demand. */
+        public More(boolean noIchClass1, boolean ichUnlistedAllowed, List<HazardLimit> healthLimits, Set<ReactiveFlag> excludeReactive,
+                Double minBlendFlashPointC, Double blendBoilingMinC, Double blendBoilingMaxC) {
+            this(noIchClass1, ichUnlistedAllowed, healthLimits, excludeReactive, minBlendFlashPointC, blendBoilingMinC, blendBoilingMaxC, null);
+        }
 
         public More {
             healthLimits = List.copyOf(Objects.requireNonNullElse(healthLimits, List.of()));

@@ -66,9 +66,10 @@ public final class BlendDesigner {
      * @param droppedFlashPoint blends left out because their computed flash point is below the minimum
      * @param droppedBoiling    blends left out because their computed initial boiling point is outside the blend window
      * @param referencePrice    median price per litre of the searched solvents, NaN when none has a price
+     * @param droppedWater      blends left out because they do not behave with water as demanded
      */
     public record Result(List<BlendSuggestion> suggestions, CandidatePool pool, long subsets, long solved, int droppedTwoPhase,
-            int droppedFlashPoint, int droppedBoiling, double referencePrice) {
+            int droppedFlashPoint, int droppedBoiling, double referencePrice, int droppedWater) {
     }
 
     private BlendDesigner() {
@@ -76,8 +77,14 @@ public final class BlendDesigner {
 
     public static Result design(List<Solvent> library, Request req, PhaseCheck phaseCheck, ProgressListener progress,
             CancellationToken cancel) {
+        return design(library, req, phaseCheck, WaterCheck.NONE, progress, cancel);
+    }
+
+    /** The workflow with a check of how each blend behaves with water (used when the constraints demand it). */
+    public static Result design(List<Solvent> library, Request req, PhaseCheck phaseCheck, WaterCheck waterCheck, ProgressListener progress,
+            CancellationToken cancel) {
+        Checks checks = new Checks(phaseCheck, waterCheck, new HashMap<>(), new HashMap<>());
         CandidatePool pool = CandidatePool.of(library, req.constraints(), req.target(), req.rankBy());
-        Map<String, PhaseCheck.Verdict> verdicts = new HashMap<>();
         List<Solvent> priced = new ArrayList<>(pool.free());
         pool.fixed().forEach(f -> priced.add(f.solvent()));
         double refPrice = Desirability.referencePrice(priced);
@@ -87,13 +94,14 @@ public final class BlendDesigner {
         while (true) {
             BlendSearch.Settings s = BlendSearch.Settings.of(req.maxComponents(), keep, req.rankBy(), req.redLimit(), req.weights());
             BlendSearch.Outcome o = BlendSearch.run(req.target(), pool, req.constraints(), s, progress, cancel);
-            Screened sc = screen(o.blends(), req, phaseCheck, verdicts, refPrice, fixed, req.top());
+            Screened sc = screen(o.blends(), req, checks, refPrice, fixed, req.top());
             List<BlendSuggestion> list = SuggestionList.arrange(sc.ordered(), req.top(), fixed);
             // Too many left out (two phases, flash point) or folded while the search had more to give: search again, wider.
             long tested = list.stream().filter(x -> x.phase() == null || x.phase().checked()).count();
             if (tested >= req.top() || o.blends().size() < keep || keep >= MAX_KEEP) {
-                list = keepSimpleInView(list, pool, req, phaseCheck, verdicts, refPrice, fixed, progress, cancel);
-                return new Result(list, pool, o.subsets(), o.solved(), sc.droppedTwoPhase, sc.droppedFlash, sc.droppedBoiling, refPrice);
+                list = keepSimpleInView(list, pool, req, checks, refPrice, fixed, progress, cancel);
+                return new Result(list, pool, o.subsets(), o.solved(), sc.droppedTwoPhase, sc.droppedFlash, sc.droppedBoiling, refPrice,
+                        sc.droppedWater);
             }
             keep = Math.min(MAX_KEEP, keep * 4);
         }
@@ -106,8 +114,8 @@ public final class BlendDesigner {
      * Single solvents and 2-component blends that qualify are never crowded out: when none is among the first five, the
      * best one (by the same score) takes the fifth place (docs/methods.md).
      */
-    private static List<BlendSuggestion> keepSimpleInView(List<BlendSuggestion> list, CandidatePool pool, Request req, PhaseCheck phaseCheck,
-            Map<String, PhaseCheck.Verdict> verdicts, double refPrice, Set<Solvent> fixed, ProgressListener progress, CancellationToken cancel) {
+    private static List<BlendSuggestion> keepSimpleInView(List<BlendSuggestion> list, CandidatePool pool, Request req, Checks checks,
+            double refPrice, Set<Solvent> fixed, ProgressListener progress, CancellationToken cancel) {
         int within = Math.min(SIMPLE_WITHIN, req.top());
         if (req.rankBy() != RankBy.DESIRABILITY || req.maxComponents() - pool.fixed().size() < 1
                 || SuggestionList.simpleAmongFirst(list, within) || pool.fixed().size() >= 2) {
@@ -116,7 +124,7 @@ public final class BlendDesigner {
         int k = Math.min(2, req.maxComponents());
         BlendSearch.Settings s = BlendSearch.Settings.of(k, 20, req.rankBy(), req.redLimit(), req.weights());
         BlendSearch.Outcome o = BlendSearch.run(req.target(), pool, req.constraints(), s, progress, cancel);
-        Screened sc = screen(o.blends(), req, phaseCheck, verdicts, refPrice, fixed, 1);
+        Screened sc = screen(o.blends(), req, checks, refPrice, fixed, 1);
         BlendSuggestion simple = sc.tested().isEmpty() ? null : sc.tested().get(0);
         if (simple == null) {
             return list;
@@ -131,8 +139,13 @@ public final class BlendDesigner {
         return out;
     }
 
+    /** The per-blend tests with their caches (a blend is tested once however often the search is widened). */
+    private record Checks(PhaseCheck phase, WaterCheck water, Map<String, PhaseCheck.Verdict> verdicts,
+            Map<String, org.cohesa.core.activity.WaterBehaviour> waterVerdicts) {
+    }
+
     private record Screened(List<BlendSuggestion> tested, List<BlendSuggestion> untested, int droppedTwoPhase, int droppedFlash,
-            int droppedBoiling) {
+            int droppedBoiling, int droppedWater) {
         List<BlendSuggestion> ordered() {
             List<BlendSuggestion> all = new ArrayList<>(tested);
             all.addAll(untested); // not known to be one liquid phase: after every blend that was tested
@@ -141,8 +154,11 @@ public final class BlendDesigner {
     }
 
     /** Phase check, safety profile, blend limits and reasons for the ranked blends, until {@code top} distinct ideas are tested. */
-    private static Screened screen(List<RankedBlend> blends, Request req, PhaseCheck phaseCheck, Map<String, PhaseCheck.Verdict> verdicts,
-            double refPrice, Set<Solvent> fixed, int top) {
+    private static Screened screen(List<RankedBlend> blends, Request req, Checks checks, double refPrice, Set<Solvent> fixed, int top) {
+        Map<String, PhaseCheck.Verdict> verdicts = checks.verdicts();
+        PhaseCheck phaseCheck = checks.phase();
+        WaterCheck.Need need = req.constraints().more().withWater();
+        int droppedWater = 0;
         List<BlendSuggestion> out = new ArrayList<>();
         List<BlendSuggestion> untested = new ArrayList<>();
         int dropped = 0;
@@ -165,6 +181,16 @@ public final class BlendDesigner {
             if (v != null && v.splits() && !req.keepTwoPhase()) {
                 dropped++;
                 continue;
+            }
+            org.cohesa.core.activity.WaterBehaviour water = null;
+            if (need != null) {
+                double[] f = b.components().stream().mapToDouble(BlendComponent::fraction).toArray();
+                water = checks.waterVerdicts().computeIfAbsent(b.blend().describe(),
+                        key -> checks.water().check(b.components().stream().map(BlendComponent::solvent).toList(), f, req.kelvin()));
+                if (!need.metBy(water)) {
+                    droppedWater++;
+                    continue;
+                }
             }
             List<String> warnings = warnings(b, v, req);
             List<String> cautions;
@@ -210,6 +236,9 @@ public final class BlendDesigner {
                         : String.format(Locale.ROOT, " (%.3g)", b.secondary())));
             }
             why.addAll(ex.why());
+            if (water != null) {
+                why.add(why.size() - 1, "with water: " + water.kind().label() + " (" + water.basis().label() + ")");
+            }
             List<String> flags = new ArrayList<>();
             for (BlendComponent bc : b.components()) {
                 for (ReactiveFlag rf : ReactiveFlag.of(bc.solvent())) {
@@ -223,7 +252,7 @@ public final class BlendDesigner {
                 out.add(sug);
             }
         }
-        return new Screened(out, untested, dropped, droppedFlash, droppedBoiling);
+        return new Screened(out, untested, dropped, droppedFlash, droppedBoiling, droppedWater);
     }
 
     private static Double max(Double a, Double b) {
