@@ -11,7 +11,20 @@ shot() {   # shot NAME ARGS...
     java -Dprism.forceGPU=true -jar target/cohesa.jar --screenshot="$out/$name.png" "$@" 2>/dev/null
   echo "$out/$name.png"
 }
+sized() {   # sized NAME ARGS...: the screen at the two sizes the app is judged at
+  local name=$1; shift
+  for size in 1280x800 1920x1080; do
+    COHESA_HOME="$home" xvfb-run -a -s "-screen 0 1940x1100x24" \
+      java -Dprism.forceGPU=true -jar target/cohesa.jar --size=$size --screenshot="$out/$name-$size.png" "$@" 2>/dev/null
+    echo "$out/$name-$size.png"
+  done
+}
 target="--target=18.5,9,8,8"   # an invented demo sphere
+# a blend the search itself proposes for the demo sphere (top 3-component candidate)
+proposed="--blend=dimethyl phthalate:0.67,decalin:0.13,propylene glycol:0.2"
+sized blends --screen=blends "$target" --search=3
+sized drying --screen=drying "$target" "$proposed"
+sized space-3d --screen=space --view=3d "$target" --select=toluene "$proposed"
 shot library --screen=library --select=toluene
 shot target --screen=target "$target"
 shot blends --screen=blends "$target" --search=3
