@@ -122,6 +122,10 @@ final class DryingChart {
         l.y = bottom - 30;
         List<String> notes = new ArrayList<>();
         for (JsonNode s : drying.get("series")) {
+            if (s.hasNonNull("note")) {
+                notes.add(s.path("liquid").asText() + ": " + s.get("note").asText());
+                continue;
+            }
             JsonNode at = s.get("leaves_sphere_at");
             String path = at == null || at.isNull() ? "stays inside the sphere to the end of the path"
                     : at.doubleValue() <= 0 ? "starts outside the sphere"

@@ -57,8 +57,9 @@ public final class RecordPdf {
         // a long record (many hazards, many sources) is set a little tighter rather than spill onto a third page
         float[] scales = {1f, 0.92f, 0.85f};
         for (int i = 0; i < scales.length; i++) {
-            try (PDDocument doc = render(r, lastEventHash, chain, appVersion, systemFonts, scales[i])) {
-                if (doc.getNumberOfPages() <= 2 || i == scales.length - 1) {
+            int[] bodyPages = {0};
+            try (PDDocument doc = render(r, lastEventHash, chain, appVersion, systemFonts, scales[i], bodyPages)) {
+                if (bodyPages[0] <= 2 || i == scales.length - 1) {
                     doc.save(file.toFile());
                     return;
                 }
@@ -66,8 +67,9 @@ public final class RecordPdf {
         }
     }
 
+    /** @param bodyPages receives the number of pages before the appendix (the report proper is kept to two) */
     private static PDDocument render(SubstitutionRecord r, String lastEventHash, ChainReport chain, String appVersion, boolean systemFonts,
-                                     float scale) throws IOException {
+                                     float scale, int[] bodyPages) throws IOException {
         PDDocument doc = new PDDocument();
         try {
             PdfFonts fonts = PdfFonts.load(doc, systemFonts);
@@ -80,6 +82,8 @@ public final class RecordPdf {
                 history(l, r);
                 cautions(l, r.evidence());
                 sources(l, r.evidence());
+                bodyPages[0] = doc.getNumberOfPages();
+                appendix(l, r.evidence());
             }
             footers(doc, fonts, r, lastEventHash, appVersion);
             return doc;
@@ -386,8 +390,21 @@ public final class RecordPdf {
             l.text(l.fonts.regular, size, PdfLayout.INK, PdfLayout.LEFT + keyWidth, l.y, text);
         }
         l.y -= 4;
-        l.paragraph("Citations are shortened here; the full text is filed in the record's evidence (cohesa record show ID --json).",
-                6.6f, PdfLayout.MUTED);
+        l.paragraph("Citations are shortened here; every source is given in full in the appendix.", 6.6f, PdfLayout.MUTED);
+    }
+
+    /** Every data source with its whole citation, on pages of its own after the report. */
+    private static void appendix(PdfLayout l, Evidence ev) throws IOException {
+        JsonNode src = ev.section(Evidence.Sections.DATA_SOURCES).orElse(null);
+        if (src == null || src.isEmpty()) {
+            return;
+        }
+        l.newPage();
+        l.heading("Appendix: data sources in full");
+        for (Map.Entry<String, JsonNode> e : (Iterable<Map.Entry<String, JsonNode>>) src::fields) {
+            String full = e.getValue().asText().replace("**", "").replace("*", "").replace("`", "").strip();
+            l.paragraph(e.getKey() + " — " + full, 7.4f, PdfLayout.INK);
+        }
     }
 
     private static void footers(PDDocument doc, PdfFonts fonts, SubstitutionRecord r, String lastEventHash, String appVersion) throws IOException {

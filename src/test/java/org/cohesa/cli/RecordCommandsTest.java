@@ -179,7 +179,9 @@ class RecordCommandsTest {
         Result r = run("record", "export", "1", "--pdf", pdf.toString());
         assertEquals(0, r.exitCode(), r.err());
         try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
-            assertTrue(doc.getNumberOfPages() <= 2, "one or two pages, got " + doc.getNumberOfPages());
+            // the report proper on one or two pages, then the appendix with every data source in full
+            assertTrue(doc.getNumberOfPages() <= 4, doc.getNumberOfPages() + " pages");
+            assertTrue(new PDFTextStripper().getText(doc).contains("Appendix: data sources in full"));
             String text = new PDFTextStripper().getText(doc);
             for (String fact : List.of("Record No. 1", "APPROVED", "Enamel thinner, line 2", "toluene", "ethyl acetate", "methanol",
                     "regulatory: reprotoxic aromatic", "M. Manager", "lab trials passed", "Q. Reviewer", "A. Chemist",

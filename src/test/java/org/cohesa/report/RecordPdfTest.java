@@ -46,7 +46,9 @@ class RecordPdfTest {
             Path pdf = dir.resolve(systemFonts ? "system.pdf" : "fallback.pdf");
             RecordPdf.write(r, events.get(events.size() - 1).hash(), repo.verify(), "test", pdf, systemFonts);
             try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
-                assertTrue(doc.getNumberOfPages() <= 2, doc.getNumberOfPages() + " pages");
+                // the report proper on one or two pages, then the appendix with every data source in full
+                assertTrue(doc.getNumberOfPages() <= 4, doc.getNumberOfPages() + " pages");
+                assertTrue(new PDFTextStripper().getText(doc).contains("Appendix: data sources in full"));
                 assertEquals("B. Author", doc.getDocumentInformation().getAuthor());
                 String text = new PDFTextStripper().getText(doc);
                 assertTrue(text.contains(events.get(events.size() - 1).hash()), "the footer carries the newest event hash");

@@ -17,13 +17,34 @@ public final class DryingEvidence {
 
     public static ObjectNode section(DryingPath replaced, DryingPath replacement, String replacedNotation, String replacementNotation,
                                      double temperatureC) {
+        return section(replaced, replacement, null, null, replacedNotation, replacementNotation, temperatureC);
+    }
+
+    /**
+     * Both liquids' series; a liquid whose path could not be computed (null) gets a series with its {@code note} and no
+     * points, so the other liquid's path is still filed.
+     */
+    public static ObjectNode section(DryingPath replaced, DryingPath replacement, String whyNotReplaced, String whyNotReplacement,
+                                     String replacedNotation, String replacementNotation, double temperatureC) {
         ObjectNode o = CanonicalJson.object();
         o.put("temperature_c", CanonicalJson.number(temperatureC));
-        o.put("model", replacement.model());
+        DryingPath any = replacement != null ? replacement : replaced;
+        o.put("model", any == null ? null : any.model());
         ArrayNode series = o.putArray("series");
-        series.add(series(Evidence.Sections.REPLACED, replacedNotation, replaced));
-        series.add(series(Evidence.Sections.REPLACEMENT, replacementNotation, replacement));
+        series.add(replaced != null ? series(Evidence.Sections.REPLACED, replacedNotation, replaced)
+                : missing(Evidence.Sections.REPLACED, replacedNotation, whyNotReplaced));
+        series.add(replacement != null ? series(Evidence.Sections.REPLACEMENT, replacementNotation, replacement)
+                : missing(Evidence.Sections.REPLACEMENT, replacementNotation, whyNotReplacement));
         return o;
+    }
+
+    private static ObjectNode missing(String liquid, String notation, String why) {
+        ObjectNode s = CanonicalJson.object();
+        s.put("liquid", liquid);
+        s.put("notation", notation);
+        s.put("note", "no drying path: " + why);
+        s.putArray("points");
+        return s;
     }
 
     private static ObjectNode series(String liquid, String notation, DryingPath p) {

@@ -27,6 +27,10 @@ public final class EvidenceAssembler {
      * @param citations  source key → citation (the bundled catalogue)
      * @param appVersion the program version, filed with the snapshot
      */
+    private static String basis(SafetyProfile p) {
+        return p.flashPoint().status().name().toLowerCase(java.util.Locale.ROOT) + (p.flashPoint().model() == null ? "" : ": " + p.flashPoint().model());
+    }
+
     public static Evidence assemble(Blend replaced, Blend replacement, TargetRef target, Map<String, String> citations, String appVersion) {
         EvidenceBuilder b = new EvidenceBuilder(replaced, replacement, appVersion).citations(citations);
         if (target != null) {
@@ -36,18 +40,35 @@ public final class EvidenceAssembler {
             SafetyProfile a = SafetyProfiler.profile(replaced, PROFILE_KELVIN);
             SafetyProfile z = SafetyProfiler.profile(replacement, PROFILE_KELVIN);
             b.section(Evidence.Sections.SAFETY, SafetyEvidence.section(a, z));
+            // one profile, one set of values: the liquids carry the profile's flash point too
+            b.flashPoints(a.flashPoint().celsius(), basis(a), z.flashPoint().celsius(), basis(z));
             b.cautions(SafetyEvidence.cautions(a, z));
         } catch (IllegalArgumentException | IllegalStateException e) {
             b.section(Evidence.Sections.SAFETY, CanonicalJson.object().put("note", "no safety profile: " + e.getMessage()));
         }
         if (target != null) {
+            // each liquid's path on its own: one that cannot be dried (no vapour pressure) leaves a note in its own
+            // series and never costs the other its path
+            DryingPath a = null;
+            DryingPath z = null;
+            String whyNotA = null;
+            String whyNotZ = null;
             try {
-                DryingPath a = DryingSimulator.simulate(DryingRequest.of(replaced, target.sphere()));
-                DryingPath z = DryingSimulator.simulate(DryingRequest.of(replacement, target.sphere()));
-                b.section(Evidence.Sections.DRYING, DryingEvidence.section(a, z, replaced.describe(), replacement.describe(),
-                        DryingRequest.DEFAULT_KELVIN - 273.15));
+                a = DryingSimulator.simulate(DryingRequest.of(replaced, target.sphere()));
             } catch (IllegalArgumentException | IllegalStateException e) {
-                b.section(Evidence.Sections.DRYING, CanonicalJson.object().put("note", "no drying path: " + e.getMessage()));
+                whyNotA = e.getMessage();
+            }
+            try {
+                z = DryingSimulator.simulate(DryingRequest.of(replacement, target.sphere()));
+            } catch (IllegalArgumentException | IllegalStateException e) {
+                whyNotZ = e.getMessage();
+            }
+            if (a == null && z == null) {
+                b.section(Evidence.Sections.DRYING, CanonicalJson.object().put("note", "no drying path: " + Evidence.Sections.REPLACED + ": "
+                        + whyNotA + "; " + Evidence.Sections.REPLACEMENT + ": " + whyNotZ));
+            } else {
+                b.section(Evidence.Sections.DRYING, DryingEvidence.section(a, z, whyNotA, whyNotZ, replaced.describe(), replacement.describe(),
+                        DryingRequest.DEFAULT_KELVIN - 273.15));
             }
         } else {
             b.section(Evidence.Sections.DRYING, CanonicalJson.object()

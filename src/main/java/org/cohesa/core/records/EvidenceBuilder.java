@@ -79,6 +79,19 @@ public final class EvidenceBuilder {
         return this;
     }
 
+    /**
+     * The flash point of each liquid as the safety profile has it (library value, or the Liaw 2002 blend estimate), so the
+     * liquid sections, the safety section, the cautions and the PDF show one value; null leaves the liquid's own.
+     */
+    public EvidenceBuilder flashPoints(Double replacedC, String replacedBasis, Double replacementC, String replacementBasis) {
+        this.flashReplaced = replacedC == null ? null : new Object[] {replacedC, replacedBasis};
+        this.flashReplacement = replacementC == null ? null : new Object[] {replacementC, replacementBasis};
+        return this;
+    }
+
+    private Object[] flashReplaced;
+    private Object[] flashReplacement;
+
     public Evidence build() {
         ObjectNode root = CanonicalJson.object();
         root.put(Evidence.Sections.APP_VERSION, appVersion);
@@ -92,14 +105,22 @@ public final class EvidenceBuilder {
             t.put("r0", CanonicalJson.number(target.sphere().r0()));
             t.put("source", target.source());
         }
-        root.set(Evidence.Sections.REPLACED, liquid(replaced));
-        root.set(Evidence.Sections.REPLACEMENT, liquid(replacement));
+        root.set(Evidence.Sections.REPLACED, withFlashPoint(liquid(replaced), flashReplaced));
+        root.set(Evidence.Sections.REPLACEMENT, withFlashPoint(liquid(replacement), flashReplacement));
         root.set(Evidence.Sections.COMPARISON, comparison());
         ArrayNode cautionArray = root.putArray(Evidence.Sections.CAUTIONS);
         cautions.forEach(cautionArray::add);
         extra.forEach(root::set);
         root.set(Evidence.Sections.DATA_SOURCES, sources());
         return Evidence.of(root);
+    }
+
+    private static ObjectNode withFlashPoint(ObjectNode liquid, Object[] fp) {
+        if (fp != null) {
+            liquid.put("flash_point_c", CanonicalJson.number((Double) fp[0]));
+            liquid.put("flash_point_basis", (String) fp[1]);
+        }
+        return liquid;
     }
 
     private ObjectNode liquid(Blend b) {
