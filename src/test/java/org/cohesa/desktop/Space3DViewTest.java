@@ -76,6 +76,22 @@ class Space3DViewTest {
         assertEquals(before.getX() / (before.getZ() - camBefore), after.getX() / (after.getZ() - camAfter), 1e-9, "target keeps its x on screen");
         assertEquals(before.getY() / (before.getZ() - camBefore), after.getY() / (after.getZ() - camAfter), 1e-9, "target keeps its y on screen");
         robot.interact(view::resetView);
+
+        // no tick label covers another, at the starting angle and turned steeply
+        for (double turn : new double[] {0, 70}) {
+            robot.interact(() -> view.rotateBy(turn, turn / 2));
+            var shown = view.visibleLabels();
+            for (int i = 0; i < shown.size(); i++) {
+                for (int j = i + 1; j < shown.size(); j++) {
+                    var a = shown.get(i);
+                    var b = shown.get(j);
+                    boolean overlap = a.getBoundsInParent().intersects(b.getBoundsInParent());
+                    boolean titles = a.getStyleClass().contains("plot-axis-title") && b.getStyleClass().contains("plot-axis-title");
+                    assertFalse(overlap && !titles, a.getText() + " overlaps " + b.getText() + " after turning " + turn + "°");
+                }
+            }
+        }
+        robot.interact(view::resetView);
         assertEquals(6, sphere.getRadius(), 1e-12);
         // with the doubled δD axis the sphere is round (Hansen 2007, ch. 1: Ra uses 4ΔδD²)
         assertEquals(1.0, sphere.getScaleX(), 1e-12);

@@ -481,8 +481,21 @@ public final class Space3DView {
     }
 
     /** Places every label at the screen position of its 3D anchor (centred on it). */
+    /**
+     * Places every label over its projected anchor, then hides the tick labels that would overlap a label already
+     * placed: axis titles first, then the ticks in axis order, so at a steep angle every other tick goes, never a title.
+     */
     private void layoutLabels() {
+        List<javafx.geometry.Bounds> placed = new ArrayList<>();
+        List<Integer> order = new ArrayList<>();
         for (int i = 0; i < labels.size(); i++) {
+            if (labels.get(i).getStyleClass().contains("plot-axis-title")) {
+                order.add(0, i);
+            } else {
+                order.add(i);
+            }
+        }
+        for (int i : order) {
             Label l = labels.get(i);
             Point3D s = world.localToScene(labelAnchors.get(i), true);
             Point2D local = overlay.sceneToLocal(s.getX(), s.getY());
@@ -491,7 +504,19 @@ public final class Space3DView {
                 continue;
             }
             l.relocate(local.getX() - l.getWidth() / 2, local.getY() - l.getHeight() / 2);
+            javafx.geometry.Bounds b = new javafx.geometry.BoundingBox(l.getLayoutX() - 2, l.getLayoutY(), l.getWidth() + 4, l.getHeight());
+            boolean clash = placed.stream().anyMatch(b::intersects);
+            boolean title = l.getStyleClass().contains("plot-axis-title");
+            l.setVisible(title || !clash);
+            if (l.isVisible()) {
+                placed.add(b);
+            }
         }
+    }
+
+    /** The labels drawn over the 3D view now (for tests: none may overlap another). */
+    public List<Label> visibleLabels() {
+        return labels.stream().filter(Label::isVisible).toList();
     }
 
     private void buildPoints() {
