@@ -140,15 +140,25 @@ public final class Cautions {
                     r > VERY_HIGH_VAPOUR ? "work only in closed systems or with local exhaust ventilation; open handling is not acceptable."
                             : "use local exhaust ventilation and keep containers closed."));
         }
-        Set<String> unknown = new LinkedHashSet<>();
+        // say exactly what is missing: a solvent with a vapour pressure but no limit is a different gap from one
+        // with a limit but no vapour pressure
+        Set<String> noLimit = new LinkedHashSet<>();
+        Set<String> noVapour = new LinkedHashSet<>();
         for (VapourExposure.Component c : ex.components()) {
-            if (!c.status().equals("counted") && !c.status().startsWith("water")) {
-                unknown.add(c.name());
+            if (c.status().equals("no limit known")) {
+                noLimit.add(c.name());
+            } else if (!c.status().equals("counted") && !c.status().startsWith("water")) {
+                noVapour.add(c.name());
             }
         }
-        if (!unknown.isEmpty()) {
-            out.add("No occupational exposure limit or vapour pressure is known to us for " + join(List.copyOf(unknown))
-                    + ": that is not a sign of safety, and the exposure index leaves them out.");
+        if (!noLimit.isEmpty()) {
+            out.add("No occupational exposure limit is known to us for " + join(List.copyOf(noLimit))
+                    + ": that is not a sign of safety, and the exposure index leaves " + (noLimit.size() == 1 ? "it" : "them")
+                    + " out; ask the supplier or your occupational hygienist for an in-house limit.");
+        }
+        if (!noVapour.isEmpty()) {
+            out.add("No vapour pressure is known to us for " + join(List.copyOf(noVapour))
+                    + ": the exposure index leaves " + (noVapour.size() == 1 ? "it" : "them") + " out, which is not a sign of safety.");
         }
     }
 
