@@ -252,5 +252,11 @@ class DefectsTest {
             assertTrue(b.getMinX() >= frame.getMinX() - 0.5 && b.getMaxX() <= frame.getMaxX() + 0.5,
                     chip.getText() + " lies inside the list: " + b + " in " + frame);
         }
+        // flash point and ICH class no longer run together ("86 2"): each is its own labelled fact, apart from the other
+        Label flash = (Label) list.lookup(".card-flash");
+        Label ich = (Label) list.lookup(".card-ich");
+        assertTrue(flash.getText().startsWith("Flash point") || flash.getText().startsWith("No "), flash.getText());
+        assertTrue(ich.getText().startsWith("ICH Q3C"), ich.getText());
+        assertFalse(flash.localToScene(flash.getLayoutBounds()).intersects(ich.localToScene(ich.getLayoutBounds())), "the two facts do not touch");
     }
 }
