@@ -19,6 +19,7 @@ import java.util.Optional;
 import java.util.Set;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
+import org.cohesa.core.coverage.Provenance;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -70,6 +71,11 @@ class EstimatedHansenTableTest {
                 if (!r.get(cols[i]).equals(expected)) {
                     bad.add(r.get("name") + " " + cols[i] + ": table " + r.get(cols[i]) + ", estimator " + expected);
                 }
+            }
+            // the app's provenance column ('solvent NAME', 'solvents --coverage') must read the key as an estimate
+            // (SOURCES.md naming rule: keys starting with estimate- mark estimates; common practice, no source)
+            if (Provenance.of(r.get("src_hsp"), false) != Provenance.ESTIMATED) {
+                bad.add(r.get("name") + ": " + r.get("src_hsp") + " is not shown as estimated");
             }
             String note = r.get("note");
             if (!note.contains("Hansen parameters estimated from the structure") || !note.contains("no published value found")
