@@ -75,7 +75,7 @@ public final class BlendOptions {
     @Option(names = "--ich-unlisted", paramLabel = "keep|leave-out", description = "With --max-ich-class: keep or leave out solvents ICH Q3C does not list (they need a justification under Q3C; default ${DEFAULT-VALUE}).")
     String ichUnlisted = "leave-out";
 
-    @Option(names = "--exclude-reactive", paramLabel = "FLAGS", description = "Leave out reactive solvents: acid (carboxylic acids), amine (amines, pyridines), nitro (nitroalkanes), peroxide (peroxide formers), or all.")
+    @Option(names = "--exclude-reactive", paramLabel = "FLAGS", description = "Leave out reactive solvents: acid (carboxylic acids), amine (amines, pyridines), nitro (nitroalkanes), peroxide (peroxide formers), dicarbonyl (acetoacetates, malonates: active methylene), or all.")
     List<String> excludeReactive = new ArrayList<>();
 
     @Option(names = "--min-blend-flash-point", paramLabel = "C", description = "Least computed flash point of the blend itself, °C (Liaw et al. 2002); components may be lower.")
@@ -93,7 +93,7 @@ public final class BlendOptions {
     @Option(names = "--with-water", paramLabel = "miscible|immiscible", description = "How the blend must behave with water: immiscible (separates at 1:1, an extraction solvent) or miscible (one phase at every water content, a waterborne cosolvent); measured mutual solubilities first, the activity model elsewhere.")
     String withWater;
 
-    @Option(names = "--all", description = "Show the near-duplicates folded under each suggestion (same solvents but one, fractions within 5 %).")
+    @Option(names = "--all", description = "Show the near-duplicates folded under each suggestion (same solvents but one, fractions within 5 %%).")
     boolean all;
 
     @Option(names = "--max-cost", paramLabel = "X", description = "Largest blend price per litre (uses your entered prices; solvents without a price are left out).")

@@ -28,7 +28,10 @@ import org.cohesa.core.solvent.Solvent;
  *   <li>flammability, GHS category of the liquid (flash point and boiling point, else its H224–H227):
  *       1 → 3, 2 → 2, 3 → 1, 4 → 0.5, not flammable 0;</li>
  *   <li>exposure, 8-h TWA limit: ≤ 1 ppm 3, ≤ 10 ppm 2, ≤ 50 ppm 1, ≤ 200 ppm 0.5, above 0; no limit known
- *       0.25 (unknown is not safe); skin notation + 0.5;</li>
+ *       1 (unknown is not safe: a solvent no agency has set a limit for has thin toxicology, and a liquid with a
+ *       generous published limit must not rank below it); skin notation + 0.5;</li>
+ *   <li>process suitability: a reactive solvent ({@link ReactiveFlag} other than peroxide former, which is counted
+ *       below) 1: it reacts with bases, amines or the solute and is a worse first try;</li>
  *   <li>solvent guide (CHEM21 ranking by default): recommended 0, problematic 1, hazardous 2.5;</li>
  *   <li>ICH Q3C: class 1 5, class 2 1.5, class 3 0, not listed 0.5 (needs justification under Q3C);</li>
  *   <li>environment: ozone H420 3; aquatic acute/chronic 1–2 (H400, H410, H411) 1, (H412, H413) 0.5;
@@ -47,6 +50,12 @@ public record HazardPenalty(double points, List<String> terms) {
 
     /** Penalty of a solvent whose hazard statements the library does not record (no source): unknown is not safe. */
     static final double UNKNOWN_STATEMENTS = 2;
+
+    /** Penalty of a solvent with no 8-h exposure limit in the library. */
+    static final double NO_EXPOSURE_LIMIT = 1;
+
+    /** Penalty of a solvent that takes part in reactions ({@link ReactiveFlag}, peroxide formers apart). */
+    static final double REACTIVE = 1;
 
     public HazardPenalty {
         terms = List.copyOf(terms);
@@ -102,7 +111,7 @@ public record HazardPenalty(double points, List<String> terms) {
         }
         Double twa = s.exposure().twaPpm();
         if (twa == null) {
-            t.add(new Term(0.25, "no exposure limit known"));
+            t.add(new Term(NO_EXPOSURE_LIMIT, "no exposure limit known"));
         } else {
             double p = twa <= 1 ? 3 : twa <= 10 ? 2 : twa <= 50 ? 1 : twa <= 200 ? 0.5 : 0;
             if (p > 0) {
@@ -139,6 +148,10 @@ public record HazardPenalty(double points, List<String> terms) {
         }
         if (s.peroxideFormer()) {
             t.add(new Term(0.5, "peroxide former"));
+        }
+        List<String> reactive = ReactiveFlag.of(s).stream().filter(f -> f != ReactiveFlag.PEROXIDE).map(ReactiveFlag::label).toList();
+        if (!reactive.isEmpty()) {
+            t.add(new Term(REACTIVE, "reactive: " + String.join(", ", reactive)));
         }
         if (halogenated(s)) {
             t.add(new Term(1.5, "halogenated (Cl/Br/I)"));

@@ -3,6 +3,13 @@ package org.cohesa.core.blend;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+import org.openscience.cdk.exception.InvalidSmilesException;
+import org.openscience.cdk.interfaces.IAtomContainer;
+import org.openscience.cdk.silent.SilentChemObjectBuilder;
+import org.openscience.cdk.smarts.SmartsPattern;
+import org.openscience.cdk.smiles.SmilesParser;
 import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.solvent.Solvent;
 
@@ -10,13 +17,20 @@ import org.cohesa.core.solvent.Solvent;
  * Process-suitability flags: solvents that take part in reactions a reaction or extraction solvent must not
  * (common practice, no source). Carboxylic acids protonate bases and esterify; amines (and pyridines) are bases and
  * nucleophiles; nitroalkanes are energetic and form explosive salts with bases; peroxide formers (EUH019, the
- * library's flag) concentrate explosive peroxides on distillation.
+ * library's flag) concentrate explosive peroxides on distillation; 1,3-dicarbonyl compounds (acetoacetates,
+ * malonates, acetylacetone) carry an acidic active methylene group that forms enolates with bases and condenses with
+ * amines, aldehydes and isocyanates (the chemistry acetoacetate crosslinkers are built on).
  */
 public enum ReactiveFlag {
     ACID("carboxylic acid"),
     AMINE("amine or pyridine base"),
     NITRO("nitroalkane"),
-    PEROXIDE("peroxide former");
+    PEROXIDE("peroxide former"),
+    ACTIVE_METHYLENE("1,3-dicarbonyl (active methylene)");
+
+    /** C(=O)–CH2/CH–C(=O): the acidic methylene between two carbonyls of a β-keto ester, malonate or 1,3-diketone. */
+    private static final SmartsPattern DICARBONYL = SmartsPattern.create("[CX3](=O)[CX4;H1,H2][CX3](=O)");
+    private static final Map<String, Boolean> DICARBONYL_SEEN = new ConcurrentHashMap<>();
 
     private final String label;
 
@@ -40,7 +54,17 @@ public enum ReactiveFlag {
             case NITRO -> (s.smiles() != null && (s.smiles().contains("[N+](=O)[O-]") || s.smiles().contains("N(=O)=O")))
                     || s.name().toLowerCase(Locale.ROOT).startsWith("nitro");
             case PEROXIDE -> s.peroxideFormer();
+            case ACTIVE_METHYLENE -> s.smiles() != null && DICARBONYL_SEEN.computeIfAbsent(s.smiles(), ReactiveFlag::dicarbonyl);
         };
+    }
+
+    private static boolean dicarbonyl(String smiles) {
+        try {
+            IAtomContainer mol = new SmilesParser(SilentChemObjectBuilder.getInstance()).parseSmiles(smiles);
+            return DICARBONYL.matches(mol);
+        } catch (InvalidSmilesException e) {
+            return false;
+        }
     }
 
     /** The flags that apply to a solvent. */
@@ -54,7 +78,7 @@ public enum ReactiveFlag {
         return out;
     }
 
-    /** "acid", "amine", "nitro", "peroxide" or "all". */
+    /** "acid", "amine", "nitro", "peroxide", "dicarbonyl" or "all". */
     public static List<ReactiveFlag> parse(String field, String text) {
         List<ReactiveFlag> out = new ArrayList<>();
         for (String p : text.split(",")) {
@@ -70,7 +94,8 @@ public enum ReactiveFlag {
                 case "amine", "amines", "base" -> AMINE;
                 case "nitro", "nitroalkane", "nitroalkanes" -> NITRO;
                 case "peroxide", "peroxides", "peroxide-former" -> PEROXIDE;
-                default -> throw new InvalidInputException(field, p.strip(), "choose from acid, amine, nitro, peroxide, all");
+                case "dicarbonyl", "active-methylene", "keto-ester" -> ACTIVE_METHYLENE;
+                default -> throw new InvalidInputException(field, p.strip(), "choose from acid, amine, nitro, peroxide, dicarbonyl, all");
             };
             if (!out.contains(f)) {
                 out.add(f);

@@ -66,6 +66,30 @@ public final class SuggestionList {
      * @param fixed  fixed components (they are in every blend and do not count against the share rule)
      */
     public static List<BlendSuggestion> arrange(List<BlendSuggestion> ranked, int top, Set<Solvent> fixed) {
+        Arrangement a = place(ranked, top, fixed);
+        List<BlendSuggestion> out = new ArrayList<>(a.placed());
+        for (BlendSuggestion w : a.waiting()) {
+            if (out.size() >= top) {
+                break;
+            }
+            out.add(w); // fewer distinct ideas than asked: the share rule gives way
+        }
+        return out.stream().map(l -> l.withVariants(a.variants().getOrDefault(l, List.of()))).collect(Collectors.toList());
+    }
+
+    /**
+     * How many distinct ideas {@link #arrange} can make of the list without the share rule giving way (to decide
+     * whether to search wider: a list that had to give way may only lack candidates further down).
+     */
+    public static int ideas(List<BlendSuggestion> ranked, int top, Set<Solvent> fixed) {
+        return place(ranked, top, fixed).placed().size();
+    }
+
+    private record Arrangement(List<BlendSuggestion> placed, List<BlendSuggestion> waiting,
+            Map<BlendSuggestion, List<RankedBlend>> variants) {
+    }
+
+    private static Arrangement place(List<BlendSuggestion> ranked, int top, Set<Solvent> fixed) {
         List<BlendSuggestion> leaders = new ArrayList<>();
         Map<BlendSuggestion, List<RankedBlend>> variants = new java.util.IdentityHashMap<>();
         for (BlendSuggestion s : ranked) {
@@ -83,11 +107,11 @@ public final class SuggestionList {
             }
         }
         int cap = Math.max(1, top / 2);
-        List<BlendSuggestion> out = new ArrayList<>();
+        List<BlendSuggestion> placed = new ArrayList<>();
         List<BlendSuggestion> waiting = new ArrayList<>();
         Map<Solvent, Integer> uses = new HashMap<>();
         for (BlendSuggestion l : leaders) {
-            if (out.size() >= top) {
+            if (placed.size() >= top) {
                 break;
             }
             boolean crowded = solvents(l, fixed).stream().anyMatch(v -> uses.getOrDefault(v, 0) >= cap);
@@ -95,21 +119,10 @@ public final class SuggestionList {
                 waiting.add(l);
                 continue;
             }
-            out.add(l);
+            placed.add(l);
             solvents(l, fixed).forEach(v -> uses.merge(v, 1, Integer::sum));
         }
-        for (BlendSuggestion w : waiting) {
-            if (out.size() >= top) {
-                break;
-            }
-            out.add(w); // fewer distinct ideas than asked: the share rule gives way
-        }
-        return out.stream().map(l -> l.withVariants(variants.getOrDefault(l, List.of()))).collect(Collectors.toList());
-    }
-
-    /** How many distinct ideas {@link #arrange} can make of the list (to decide whether to search wider). */
-    public static int ideas(List<BlendSuggestion> ranked, int top, Set<Solvent> fixed) {
-        return arrange(ranked, top, fixed).size();
+        return new Arrangement(placed, waiting, variants);
     }
 
     private static List<Solvent> solvents(BlendSuggestion s, Set<Solvent> fixed) {
