@@ -173,8 +173,11 @@ class WaterMiscibilityTest {
         assertTrue(rate >= HIT_RATE_MEASURED - 1e-9, String.format(Locale.ROOT, "hit rate %.3f, misses %s", rate, misses));
     }
 
-    /** Measured with the bundled table (see docs/methods.md). */
-    private static final double HIT_RATE_MEASURED = 87.0 / 110;
+    /**
+     * Measured with the bundled table (see docs/methods.md): 88 of 112 pairs once the structure estimates gave
+     * hexafluoro-2-propanol and the others Hansen parameters (both new pairs are false splits).
+     */
+    private static final double HIT_RATE_MEASURED = 88.0 / 112;
     /**
      * Where the model is used, how close are its mutual solubilities to the published ones? For every partly miscible
      * pair with data that the model also splits, the predicted solubility of the solvent in water and of water in the
