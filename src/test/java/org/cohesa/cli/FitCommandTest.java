@@ -1,6 +1,7 @@
 package org.cohesa.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -84,6 +85,26 @@ class FitCommandTest {
         assertTrue(j.get("region") == null && j.get("results") == null);
         assertEquals(20, j.get("confidence").get("resamples").asInt());
         assertEquals(2, run("fit", demo().toString(), "--method", "best").code());
+    }
+
+    @Test
+    void nextTestsLeaveOutCarcinogensAndReprotoxicantsUnlessAllowed() throws Exception {
+        // safety first, as in blend (H340/H350/H360 and ICH Q3C class 1; the classifications are the library's):
+        // for the demo series the most informative liquids include 2-nitropropane and nitrobenzene
+        java.util.function.Function<Run, java.util.List<String>> names = r -> {
+            try {
+                java.util.List<String> out = new java.util.ArrayList<>();
+                new ObjectMapper().readTree(r.out()).get("next_tests").forEach(n -> out.add(n.get("name").asText()));
+                return out;
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        };
+        java.util.List<String> safe = names.apply(run("fit", demo().toString(), "--json"));
+        assertFalse(safe.isEmpty());
+        assertFalse(safe.contains("2-nitropropane") || safe.contains("nitrobenzene"), safe.toString());
+        java.util.List<String> all = names.apply(run("fit", demo().toString(), "--json", "--allow-cmr"));
+        assertTrue(all.contains("2-nitropropane") || all.contains("nitrobenzene"), all.toString());
     }
 
     @Test

@@ -73,6 +73,10 @@ public final class FitCommand extends CohesaSubcommand {
     @Option(names = "--prior-spread", paramLabel = "MPA", description = "Spread of the --prior centre, MPa^½ in Ra (default ${DEFAULT-VALUE}).")
     double priorSpread = CentrePrior.DEFAULT_SPREAD;
 
+    @Option(names = "--allow-cmr", description = "Let the suggested next tests include carcinogenic, mutagenic or reprotoxic liquids "
+            + "(H340/H350/H360) and ICH Q3C class 1 solvents; left out by default, as in blend.")
+    boolean allowCmr;
+
     @Option(names = "--png", paramLabel = "FILE", description = "Also draw the fitted sphere and the tested liquids as a PNG (three projections).")
     Path png;
 
@@ -115,7 +119,10 @@ public final class FitCommand extends CohesaSubcommand {
         }
         SolventLibrary library = ctx().library();
         List<TestResult> results = read(library);
-        List<NamedPoint> candidates = library.searchable().stream().map(s -> new NamedPoint(s.name(), s.hansen())).toList();
+        // a lab should not be sent to test a carcinogen or reprotoxicant to refine a sphere: safety first, as in blend
+        List<NamedPoint> candidates = library.searchable().stream()
+                .filter(s -> allowCmr || !(s.isCmr() || Integer.valueOf(1).equals(s.ichClass())))
+                .map(s -> new NamedPoint(s.name(), s.hansen())).toList();
         FitResult fit = SphereFitter.fit(results, candidates, new FitOptions(seed, resamples, 12, 5).withMethod(fitMethod).withPrior(centrePrior));
         if (save) {
             ctx().materials().add(new Material(name, List.of(), materialKind, fit.sphere(),
@@ -189,6 +196,9 @@ public final class FitCommand extends CohesaSubcommand {
                 }
                 nt.print(out());
                 out().println("(shrinkage of the region's spread expected once this and the tests above it are scored)");
+                if (!allowCmr) {
+                    out().println("(CMR liquids (H340/H350/H360) and ICH class 1 solvents are not suggested; --allow-cmr brings them back)");
+                }
                 out().println("Before testing a liquid, read its SDS: many test liquids are flammable or toxic, some reprotoxic.");
             } else {
                 out().println("most useful next tests (library liquids the plausible spheres disagree about):");
