@@ -13,6 +13,7 @@ import org.cohesa.core.blend.BlendSuggestion;
 import org.cohesa.core.blend.RankBy;
 import org.cohesa.core.blend.RankedBlend;
 import org.cohesa.core.hsp.SolubilitySphere;
+import org.cohesa.core.solvent.LibraryAtTemperature;
 import org.cohesa.core.solvent.SolventLibrary;
 import org.cohesa.core.target.Material;
 import picocli.CommandLine.ArgGroup;
@@ -55,7 +56,9 @@ public final class BlendCommand extends CohesaSubcommand {
         RankBy rankBy = options.rankBy();
         double redLimit = options.redLimit();
         double kelvin = options.kelvin();
-        SolventLibrary lib = ctx().library();
+        // the solvents' parameters at the process temperature (the material's sphere stays as measured)
+        LibraryAtTemperature atTemperature = LibraryAtTemperature.of(ctx().library(), options.kelvin());
+        SolventLibrary lib = atTemperature.library();
         BlendConstraints c = options.constraints(lib, null);
         options.checkPricesExist(lib);
         if (c.fixed().size() >= k) {
@@ -75,6 +78,9 @@ public final class BlendCommand extends CohesaSubcommand {
         out().println("target: δD " + Output.fmt(sphere.centre().dD(), 1) + ", δP " + Output.fmt(sphere.centre().dP(), 1) + ", δH "
                 + Output.fmt(sphere.centre().dH(), 1) + ", R0 " + Output.fmt(sphere.r0(), 1) + " MPa^½"
                 + (material == null ? "" : " (" + material.name() + ", source " + material.source() + ")"));
+        if (atTemperature.describe() != null) {
+            out().println(atTemperature.describe());
+        }
         out().println(BlendView.summary(r));
         BlendView.header(out(), r, c, options, req.weights());
         String secondary = BlendView.secondaryLabel(rankBy);

@@ -108,7 +108,7 @@ public final class BlendOptions {
     @Option(names = "--top", paramLabel = "N", description = "How many suggestions (default ${DEFAULT-VALUE}).")
     String top = "10";
 
-    @Option(names = "--temperature", paramLabel = "C", description = "Temperature of the two-phase test, °C (default ${DEFAULT-VALUE}).")
+    @Option(names = "--temperature", paramLabel = "C", description = "Process temperature, °C (default ${DEFAULT-VALUE}): the solvents' Hansen parameters are shifted to it (Hansen–Beerbower; the target sphere is taken as measured) and the two-phase test runs at it.")
     String temperature = "25";
 
     @Option(names = "--keep-two-phase", description = "Show blends predicted to split into two liquid phases (with a warning) instead of leaving them out.")

@@ -24,6 +24,7 @@ import org.cohesa.core.hsp.HansenParameters;
 import org.cohesa.core.hsp.SolubilitySphere;
 import org.cohesa.core.solvent.BlendComponent;
 import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.solvent.LibraryAtTemperature;
 import org.cohesa.core.solvent.SolventLibrary;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -75,7 +76,9 @@ public final class ReplaceCommand extends CohesaSubcommand {
 
     @Override
     protected void execute() {
-        SolventLibrary lib = ctx().library();
+        // the solvents' parameters at the process temperature (the material's sphere stays as measured)
+        LibraryAtTemperature atTemperature = LibraryAtTemperature.of(ctx().library(), options.kelvin());
+        SolventLibrary lib = atTemperature.library();
         Solvent original = lib.resolve("NAME", name);
         if (!original.hasHansen()) {
             throw new InvalidInputException("NAME", name, "has no Hansen parameters in the library, so substitutes cannot be ranked");
@@ -131,6 +134,9 @@ public final class ReplaceCommand extends CohesaSubcommand {
         out().println("replacing " + original.name() + "; sphere δD " + Output.fmt(sphere.centre().dD(), 1) + ", δP " + Output.fmt(sphere.centre().dP(), 1)
                 + ", δH " + Output.fmt(sphere.centre().dH(), 1) + ", R0 " + Output.fmt(sphere.r0(), 1) + " MPa^½"
                 + (centred ? " (centred on the original)" : mat != null ? " (" + mat.name() + ", source " + mat.source() + ")" : ""));
+        if (atTemperature.describe() != null) {
+            out().println(atTemperature.describe() + (centred ? " (the original's own sphere is centred on its shifted parameters)" : ""));
+        }
         out().println(replacedFor.isEmpty()
                 ? "replaced for: nothing named, and " + original.name() + " carries no CMR, organ-damage or acute-toxicity statement; --because says what must improve"
                 : "replaced for: " + String.join("; ", replacedFor));

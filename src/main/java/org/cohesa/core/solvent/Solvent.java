@@ -128,6 +128,13 @@ public record Solvent(
                 price, sources, note, userEntry);
     }
 
+    /** A copy with other Hansen parameters (e.g. shifted to a process temperature). */
+    public Solvent withHansen(HansenParameters shifted) {
+        return new Solvent(name, synonyms, cas, formula, smiles, family, families, molarMass, density, molarVolume, shifted, boilingPointC,
+                meltingPointC, fire, vapourPressure, hvapKjPerMol, exposure, hazardStatements, peroxideFormer, ichClass, unifac,
+                pricePerLitre, sources, note, userEntry);
+    }
+
     /** A copy marked as a user entry or as bundled data. */
     public Solvent withUserEntry(boolean user) {
         return new Solvent(name, synonyms, cas, formula, smiles, family, families, molarMass, density, molarVolume, hansen, boilingPointC,
