@@ -212,6 +212,12 @@ public final class Desirability {
                 : who + "hazard " + HazardPenalty.fmt(hazard) + " (" + String.join(", ", shown) + ")") + boil);
         int k = components.size();
         why.add(k + (k == 1 ? " component" : " components"));
+        // a sphere position resting on a structure estimate (δP error about 2 MPa½) must say so beside the rank
+        List<String> estimated = components.stream().map(BlendComponent::solvent)
+                .filter(s -> s.sources().getOrDefault("hsp", "").startsWith("estimate-")).map(Solvent::name).toList();
+        if (!estimated.isEmpty()) {
+            why.add("Hansen parameters estimated from the structure for " + String.join(", ", estimated) + " (test before relying on it)");
+        }
         double cost = 0;
         boolean allPriced = components.stream().allMatch(c -> c.solvent().pricePerLitre() != null);
         if (Double.isNaN(refPrice)) {
