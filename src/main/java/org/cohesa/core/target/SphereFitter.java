@@ -70,18 +70,7 @@ public final class SphereFitter {
         }
         Interval[] iv = new Interval[4];
         for (int k = 0; k < 4; k++) {
-            double lo = best[k];
-            double hi = best[k];
-            if (!boots.isEmpty()) {
-                double[] v = new double[boots.size()];
-                for (int b = 0; b < v.length; b++) {
-                    v[b] = boots.get(b)[k];
-                }
-                Arrays.sort(v);
-                lo = Math.min(lo, Uncertainty.percentile(v, Uncertainty.tail(k, LEVEL)));
-                hi = Math.max(hi, Uncertainty.percentile(v, 1 - Uncertainty.tail(k, LEVEL)));
-            }
-            iv[k] = new Interval(lo, hi);
+            iv[k] = Uncertainty.bootstrapInterval(best, boots, k, LEVEL);
         }
         List<NamedPoint> untested = untested(results, candidates);
         ConfidenceRegion confidence = new ConfidenceRegion(LEVEL, boots.size(), iv[0], iv[1], iv[2], iv[3],

@@ -22,21 +22,32 @@ final class Uncertainty {
     private Uncertainty() {
     }
 
+    /**
+     * Percentile interval of parameter {@code k} over the bootstrap fits, widened to include the best fit; just the
+     * best value when there are no resamples.
+     */
+    static Interval bootstrapInterval(double[] best, List<double[]> boots, int k, double level) {
+        double lo = best[k];
+        double hi = best[k];
+        if (!boots.isEmpty()) {
+            double[] v = new double[boots.size()];
+            for (int b = 0; b < v.length; b++) {
+                v[b] = boots.get(b)[k];
+            }
+            Arrays.sort(v);
+            lo = Math.min(lo, percentile(v, tail(k, level)));
+            hi = Math.max(hi, percentile(v, 1 - tail(k, level)));
+        }
+        return new Interval(lo, hi);
+    }
+
     static ConfidenceRegion region(SphereFitter.Data data, double[] best, List<double[]> boots, Consensus.Summary posterior,
                                    List<TestResult> results, List<NamedPoint> untested, double level) {
         Interval[] iv = new Interval[4];
         for (int k = 0; k < 4; k++) {
-            double lo = best[k];
-            double hi = best[k];
-            if (!boots.isEmpty()) {
-                double[] v = new double[boots.size()];
-                for (int b = 0; b < v.length; b++) {
-                    v[b] = boots.get(b)[k];
-                }
-                Arrays.sort(v);
-                lo = Math.min(lo, percentile(v, tail(k, level)));
-                hi = Math.max(hi, percentile(v, 1 - tail(k, level)));
-            }
+            Interval boot = bootstrapInterval(best, boots, k, level);
+            double lo = boot.low();
+            double hi = boot.high();
             lo = Math.min(lo, posterior.percentile(k, tail(k, level)));
             hi = Math.max(hi, posterior.percentile(k, 1 - tail(k, level)));
             iv[k] = new Interval(lo, hi);
