@@ -216,9 +216,19 @@ class RecordCommandsTest {
         assertEquals(0, r.exitCode(), r.err());
         assertTrue(r.json().get("chain_intact").asBoolean());
         assertEquals(4, r.json().get("record_events").asInt());
+        assertEquals(2, r.json().get("records").asInt());
+        assertEquals(copy.toString(), r.json().get("file").asText());
+        assertTrue(r.json().get("head_hash").asText().matches("[0-9a-f]{64}"), r.out());
+        assertEquals(List.of("file", "record_events", "records", "chain_intact", "head_hash"), iterableNames(r.json()), "the result record's fields");
         Result again = run("backup", copy.toString());
         assertEquals(2, again.exitCode());
         assertTrue(again.err().startsWith("error: FILE"), again.err());
         assertEquals("approved", CliTestSupport.run(copy, "record", "show", "1", "--json").json().get("status").asText());
+    }
+
+    private static List<String> iterableNames(com.fasterxml.jackson.databind.JsonNode node) {
+        List<String> names = new java.util.ArrayList<>();
+        node.fieldNames().forEachRemaining(names::add);
+        return names;
     }
 }

@@ -3,9 +3,8 @@ package org.cohesa.cli.library;
 import org.cohesa.cli.CohesaSubcommand;
 import org.cohesa.cli.Output;
 
+import com.fasterxml.jackson.annotation.JsonProperty;
 import java.nio.file.Path;
-import java.util.LinkedHashMap;
-import java.util.Map;
 import org.cohesa.core.records.ChainReport;
 import org.cohesa.store.Database;
 import org.cohesa.store.RecordRepository;
@@ -27,16 +26,20 @@ public final class BackupCommand extends CohesaSubcommand {
             copyChain = new RecordRepository(copy).verify();
         }
         if (json()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("file", file.toString());
-            m.put("record_events", copyChain.events());
-            m.put("records", copyChain.records());
-            m.put("chain_intact", copyChain.intact());
-            m.put("head_hash", copyChain.headHash());
-            Output.json(out(), m);
+            Output.json(out(), new BackupResult(file.toString(), copyChain.events(), copyChain.records(), copyChain.intact(),
+                    copyChain.headHash()));
             return;
         }
         out().println("Backed up to " + file + ": " + copyChain.records() + " records, " + copyChain.events()
                 + " events, chain " + (copyChain.intact() ? "intact" : "BROKEN (run cohesa record verify)") + ".");
+    }
+
+    /** What {@code backup --json} prints: the copy and the state of its register chain, as checked after copying. */
+    record BackupResult(
+            String file,
+            @JsonProperty("record_events") long recordEvents,
+            long records,
+            @JsonProperty("chain_intact") boolean chainIntact,
+            @JsonProperty("head_hash") String headHash) {
     }
 }
