@@ -158,6 +158,36 @@ def serat_check_note(cas, chosen_k, chosen_key, iec, nfpa, serat, notes):
         notes.append(f"{head}; no second fire-data table has the solvent: unresolved, check the SDS")
 
 
+# Isomer mixtures whose boiling point is taken from one isomer (vapour.PROXIES): the CRC rows whose boiling points give
+# the range stated in the note.
+ISOMER_RANGE = {
+    "1330-20-7": ("95-47-6", "108-38-3", "106-42-3", "100-41-4"),  # o-, m-, p-xylene, ethylbenzene
+    "91-17-8": ("493-01-6", "493-02-7"),                           # cis-, trans-decalin
+}
+
+
+def related_boiling_point(cas, phys):
+    """(Tb in K, note) for a solvent that the CRC table lists under another CAS only: the same liquid under another
+    entry (vapour.TB_PROXIES, vapour.PROXIES: enantiomers, racemates) or, for an isomer mixture, the isomer whose
+    vapour-pressure curve is used, with the isomers' range in the note. None when there is no such row."""
+    proxy = vapour.TB_PROXIES.get(cas) or vapour.PROXIES.get(cas)
+    if proxy is None or proxy[0] not in phys or num(phys[proxy[0]][3]) is None:
+        return None
+    other, reason = proxy
+    tb = num(phys[other][3])
+    what = reason if cas in vapour.TB_PROXIES else reason.split(":")[0]
+    text = f"boiling point of {other} in the CRC table ({what})"
+    if cas in ISOMER_RANGE:
+        tbs = [num(phys[c][3]) for c in ISOMER_RANGE[cas] if c in phys and num(phys[c][3]) is not None]
+        text += (f"; the components boil from {min(tbs) - 273.15:.1f} to {max(tbs) - 273.15:.1f} °C (CRC, CAS "
+                 f"{', '.join(ISOMER_RANGE[cas])}): a grade distils over part of that range")
+    return tb, text
+
+
+def recalled_bp_replaced(m):
+    return f" (replaces {m['boiling_point_c']} °C recalled from memory)" if m.get("boiling_point_c") else ""
+
+
 def read_tsv(path, header=True):
     with open(path, encoding="utf-8", newline="") as f:
         rows = [line.rstrip("\n").split("\t") for line in f]
@@ -418,6 +448,16 @@ def main(argv):
         elif cas in hvap and num(hvap[cas][3]) is not None:
             tb = num(hvap[cas][3])
             r["src_boiling_point"] = "crc-hvap"
+        elif (related := related_boiling_point(cas, phys)) is not None:
+            tb, text = related
+            r["src_boiling_point"] = "crc-physical-constants-related"
+            notes.append(text + recalled_bp_replaced(m))
+        elif (from_fit := vapour.boiling_point_from_fit(vapour_tables.get(cas, []))) is not None:
+            tb, fit = from_fit
+            r["src_boiling_point"] = "tb-from-vapour-fit"
+            notes.append(f"boiling point: the temperature at which the {fit.label} fit ({fit.range_text()}) gives "
+                         f"101.325 kPa, so the boiling-point check of that fit is no independent test"
+                         + recalled_bp_replaced(m))
         elif m.get("boiling_point_c"):
             tb = float(m["boiling_point_c"]) + 273.15
             r["src_boiling_point"] = m["src_boiling_point"]

@@ -167,6 +167,32 @@ TB_PROXIES = {
     "123-96-6": ("4128-31-8", "2-octanol: the CRC table lists (±)-2-octanol under CAS 4128-31-8"),
 }
 
+# A boiling point read off a published correlation may lie this far above the fit's upper limit (K): Landolt sets often
+# end a few tenths of a kelvin below the normal boiling point, at 99-100 kPa.
+TB_FIT_SLACK_K = 1.0
+
+
+def boiling_point_from_fit(cands):
+    """(Tb in K, candidate) for the first published correlation (table order) that reaches 101.325 kPa inside its own
+    range (or within TB_FIT_SLACK_K above its upper limit), found by bisection; None when none does. Used only where
+    neither CRC table has a boiling point: the value is then read off measured vapour-pressure data rather than
+    recalled, but the boiling-point check of that same fit is no independent test (the note says so)."""
+    for cand in cands:
+        if not cand.tmax:
+            continue
+        lo, hi = (float(cand.tmin) if cand.tmin else float(cand.tmax) - 150), float(cand.tmax) + TB_FIT_SLACK_K
+        try:
+            if not cand.p(lo) < ATM < cand.p(hi):
+                continue
+        except (OverflowError, ValueError, ZeroDivisionError):
+            continue
+        for _ in range(60):
+            mid = (lo + hi) / 2
+            lo, hi = (mid, hi) if cand.p(mid) < ATM else (lo, mid)
+        return round((lo + hi) / 2, 2), cand
+    return None
+
+
 # Source key of the stored estimate made from the CRC enthalpies of vaporisation (SOURCES.md, docs/methods.md).
 ESTIMATE_KEY = "estimate-clapeyron-crc-hvap"
 # Source key of the curve through the normal boiling point and one published vapour-pressure point (vapour-points.csv).

@@ -55,6 +55,7 @@ class BundledDataCrossCheckTest {
             Map.entry("alshehri-2022-representative", "alshehri-hansen-solubility-parameters.tsv"),
             Map.entry("schrier-2020", "schrier-hansen-solubility-parameters.tsv"),
             Map.entry("crc-physical-constants", "physical-constants-of-organic-compounds.csv"),
+            Map.entry("crc-physical-constants-related", "physical-constants-of-organic-compounds.csv"),
             Map.entry("crc-hvap", "crc-handbook-heat-of-vaporization.tsv"),
             Map.entry("iec-60079-20-1", "iec-60079-20-1-2010.tsv"),
             Map.entry("nfpa-497-2008", "nfpa-497-2008.tsv"),
@@ -81,6 +82,8 @@ class BundledDataCrossCheckTest {
     /** Keys that name no table: computed, hand-assigned, or recalled from memory (prefix "memory-"). */
     private static final Set<String> NON_TABLE_KEYS = Set.of("computed", "unifac-manual", "estimate-clapeyron-tb-point",
             "estimate-clapeyron-hansen-hvap",
+            // checked by VapourPressureAtBoilingPointTest against the solvent's own published fit
+            "tb-from-vapour-fit",
             // checked by EstimatedHansenTableTest against the structure estimator (Mathieu 2018)
             "estimate-structure-mathieu-2018");
 
@@ -310,6 +313,34 @@ class BundledDataCrossCheckTest {
             checkKelvin(bad, r, "boiling_point_c", "src_boiling_point", "crc-hvap", hvap.get(cas), 3);
             checkKelvin(bad, r, "melting_point_c", "src_melting_point", "crc-physical-constants", p, 2);
         }
+        assertTrue(bad.isEmpty(), String.join("\n", bad));
+    }
+
+    @Test
+    void boilingPointsOfARelatedCrcEntryEqualThatEntry() throws IOException {
+        // CRC Handbook, 95th ed. (2014), "Physical Constants of Organic Compounds", Tb of the entry the note names (key
+        // crc-physical-constants-related, SOURCES.md): d-limonene 5989-27-5 450.75 K for dipentene, (±)-2-octanol
+        // 4128-31-8 452.15 K, m-xylene 108-38-3 412.25 K for mixed xylene, trans-decalin 493-02-7 460.45 K for decalin.
+        Map<String, List<String>> phys = byCas("physical-constants-of-organic-compounds.csv");
+        Pattern named = Pattern.compile("boiling point of (\\d{2,7}-\\d{2}-\\d) in the CRC table");
+        List<String> bad = new ArrayList<>();
+        int n = 0;
+        for (Map<String, String> r : rows) {
+            if (!r.get("src_boiling_point").equals("crc-physical-constants-related")) {
+                continue;
+            }
+            n++;
+            Matcher m = named.matcher(r.get("note"));
+            if (!m.find()) {
+                bad.add(r.get("name") + ": the note does not name the CRC entry of its boiling point");
+                continue;
+            }
+            if (phys.containsKey(r.get("cas"))) {
+                bad.add(r.get("name") + ": the CRC table has the solvent's own CAS, the related entry must not be used");
+            }
+            checkKelvin(bad, r, "boiling_point_c", "src_boiling_point", "crc-physical-constants-related", phys.get(m.group(1)), 3);
+        }
+        assertTrue(n >= 4, "only " + n + " boiling points from a related CRC entry");
         assertTrue(bad.isEmpty(), String.join("\n", bad));
     }
 
