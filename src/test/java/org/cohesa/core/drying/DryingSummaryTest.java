@@ -45,7 +45,7 @@ class DryingSummaryTest {
 
     @Test
     void butoxyethanolInWaterStaysOnePhaseWhileItDries() {
-        // 2-butoxyethanol and water are miscible below their LCST of about 49 °C (Cox & Cretcher 1926; from memory)
+        // 2-butoxyethanol and water are miscible below their LCST of about 49 °C (Wikipedia "2-Butoxyethanol", a tertiary source)
         DryingPath p = DryingSimulator.simulate(new DryingRequest(blend("2-butoxyethanol:0.2,water:0.8"), null, T25, 0.95, false, 0.05, true,
                 WaterMiscibilityCsv.bundled()));
         assertNull(p.splitsAt(), p.phases() == null ? "" : p.phases().detail());
