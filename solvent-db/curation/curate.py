@@ -85,7 +85,9 @@ ICH_WRITE_CLASS_4 = False
 # recalled, so the statements are the usual supplier self-classification.
 HAZARD_BASIS_KEYS = {"harmonised": "memory-clp-annex-vi", "self": "memory-supplier-classification",
                      # checked against a stored copy (SOURCES.md names the copy for each solvent)
-                     "harmonised-checked": "clp-annex-vi-checked", "sds-checked": "supplier-sds-checked"}
+                     "harmonised-checked": "clp-annex-vi-checked", "sds-checked": "supplier-sds-checked",
+                     # UN GHS classification of an International Chemical Safety Card, read from a stored copy
+                     "icsc": "icsc"}
 SELF_CLASSIFICATION_NOTE = "hazard statements: supplier self-classification, check the SDS"
 # A solvent without published Hansen parameters keeps all its other data and says so (never silently dropped).
 HSP_MISSING_NOTE = ("no published Hansen parameters found: left for the structure-based estimate "

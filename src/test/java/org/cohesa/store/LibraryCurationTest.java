@@ -217,7 +217,7 @@ class LibraryCurationTest {
                 if (!r.get("note").contains("supplier self-classification, check the SDS")) {
                     bad.add(r.get("name") + ": self-classified without the SDS caution in its note");
                 }
-            } else if (!Set.of("memory-clp-annex-vi", "clp-annex-vi-checked", "supplier-sds-checked").contains(key)) {
+            } else if (!Set.of("memory-clp-annex-vi", "clp-annex-vi-checked", "supplier-sds-checked", "icsc").contains(key)) {
                 bad.add(r.get("name") + ": hazard statements with basis '" + key + "'");
             }
         }
@@ -230,6 +230,19 @@ class LibraryCurationTest {
         assertTrue(solvent("872-50-4").get("hazard_statements").contains("H360D"));
         assertTrue(solvent("68-12-2").get("hazard_statements").contains("H360D"));
         assertEquals(Set.of("H302", "H312", "H332", "H315", "H319"), Set.of(solvent("111-76-2").get("hazard_statements").split(" ")));
+        // International Chemical Safety Cards (ILO/WHO), UN GHS criteria, read from stored copies: ICSC 0459 DMSO
+        // (November 2023) "Warning, Combustible liquid" = H227; ICSC 0321 propylene glycol (April 2014) "No hazard
+        // classification according to GHS criteria", flash point 101 °C c.c.
+        assertEquals("H227", solvent("67-68-5").get("hazard_statements"));
+        assertEquals("icsc", solvent("67-68-5").get("src_hazard_statements"));
+        assertEquals("", solvent("57-55-6").get("hazard_statements"));
+        assertTrue(solvent("57-55-6").get("note").contains("ICSC 0321"));
+        assertEquals("101.0", solvent("57-55-6").get("flash_point_c"));
+        assertEquals("icsc", solvent("57-55-6").get("src_flash_point"));
+        // N-butyl-2-pyrrolidone: Chem Heterocycles web SDS summary (read from a stored copy): Eye Irrit. 2, Skin Irrit.
+        // 2, Repr. 2, Acute Tox. 4 oral and dermal.
+        assertEquals(Set.of("H302", "H312", "H315", "H319", "H361"), Set.of(solvent("3470-98-2").get("hazard_statements").split(" ")));
+        assertEquals("supplier-sds-checked", solvent("3470-98-2").get("src_hazard_statements"));
     }
 
     @Test
