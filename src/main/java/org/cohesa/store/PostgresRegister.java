@@ -180,12 +180,37 @@ public final class PostgresRegister implements RegisterDb, AutoCloseable {
         return true;
     }
 
+    /** The register's own triggers on {@code record_event}, all of which must be enabled. */
+    static final List<String> GUARDS = List.of("record_event_append_only", "record_event_no_truncate", "record_event_own_account",
+            "record_event_four_eyes");
+
+    @Override
+    public void requireMayChangeRules(Connection c, String by) throws SQLException {
+        try (Statement st = c.createStatement();
+             ResultSet rs = st.executeQuery("SELECT session_user = record_event_owner() OR pg_has_role(session_user, 'cohesa_register_admin', 'MEMBER')")) {
+            rs.next();
+            if (!rs.getBoolean(1)) {
+                throw new InvalidInputException("--by", by, "the login " + account + " may not switch the rules of the shared register "
+                        + location + "; its owner or a member of cohesa_register_admin may (GRANT cohesa_register_admin TO " + account + ")");
+            }
+        }
+    }
+
+    @Override
+    public void beginVerbatimCopy(Connection c) throws SQLException {
+        try (Statement st = c.createStatement()) {
+            // honoured for the register's owner only (trigger record_event_four_eyes): copied events keep their accounts,
+            // and a local history kept under one operating-system account is not refused by the server's four-eyes check
+            st.execute("SET LOCAL cohesa.copy = 'on'");
+        }
+    }
+
     @Override
     public boolean guardsInPlace() {
         try (Statement st = connection.createStatement();
              ResultSet rs = st.executeQuery("SELECT COUNT(*) FROM pg_trigger WHERE NOT tgisinternal AND tgenabled <> 'D' AND tgname IN ("
-                     + "'record_event_append_only', 'record_event_no_truncate', 'record_event_own_account')")) {
-            return rs.next() && rs.getInt(1) == 3;
+                     + GUARDS.stream().map(g -> "'" + g + "'").collect(java.util.stream.Collectors.joining(", ")) + ")")) {
+            return rs.next() && rs.getInt(1) == GUARDS.size();
         } catch (SQLException e) {
             throw new StoreException("cannot read the shared register's schema: " + oneLine(e), e);
         }
@@ -249,7 +274,37 @@ public final class PostgresRegister implements RegisterDb, AutoCloseable {
                                 + " CREATE ROLE cohesa_register_writer NOLOGIN; END IF; END $$",
                         "GRANT SELECT, INSERT ON record_event TO cohesa_register_writer",
                         "GRANT SELECT, INSERT, UPDATE ON record_chain_head TO cohesa_register_writer",
-                        "GRANT SELECT ON cohesa_schema TO cohesa_register_writer")));
+                        "GRANT SELECT ON cohesa_schema TO cohesa_register_writer")),
+                new Migration(8, "register: the server enforces the four-eyes rule by login, and only its owner or cohesa_register_admin"
+                        + " switches register rules", List.of(
+                        "DO $$ BEGIN IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname = 'cohesa_register_admin') THEN"
+                                + " CREATE ROLE cohesa_register_admin NOLOGIN; END IF; END $$",
+                        "GRANT cohesa_register_writer TO cohesa_register_admin",
+                        "CREATE FUNCTION record_event_owner() RETURNS name LANGUAGE sql STABLE AS $$ SELECT tableowner FROM pg_tables"
+                                + " WHERE schemaname = current_schema() AND tablename = 'record_event' $$",
+                        // the same rule the program checks, held by the server against every client: the login that filed a
+                        // record may not review or approve it, the login that reviewed it may not approve it, unless the rule's
+                        // newest setting (record 0) is off; a verbatim copy by the owner keeps the copied history's accounts
+                        "CREATE FUNCTION record_event_four_eyes() RETURNS trigger LANGUAGE plpgsql AS $$"
+                                + " DECLARE rule_value text; clash record; BEGIN"
+                                + " IF session_user = record_event_owner() AND current_setting('cohesa.copy', true) = 'on' THEN RETURN NEW; END IF;"
+                                + " IF NEW.kind = 'rule_set' THEN"
+                                + "  IF session_user <> record_event_owner() AND NOT pg_has_role(session_user, 'cohesa_register_admin', 'MEMBER') THEN"
+                                + "   RAISE EXCEPTION 'the login % may not switch register rules (owner or cohesa_register_admin only)', session_user;"
+                                + "  END IF; RETURN NEW; END IF;"
+                                + " IF NEW.kind NOT IN ('sent_to_review', 'approved') THEN RETURN NEW; END IF;"
+                                + " SELECT payload::jsonb ->> 'value' INTO rule_value FROM record_event WHERE record_id = 0 AND kind = 'rule_set'"
+                                + "  AND payload::jsonb ->> 'rule' = 'four_eyes' ORDER BY seq DESC LIMIT 1;"
+                                + " IF rule_value = 'off' THEN RETURN NEW; END IF;"
+                                + " SELECT kind INTO clash FROM record_event WHERE record_id = NEW.record_id"
+                                + "  AND (account = NEW.account OR account = session_user)"
+                                + "  AND (kind = 'created' OR (NEW.kind = 'approved' AND kind = 'sent_to_review')) ORDER BY seq LIMIT 1;"
+                                + " IF FOUND THEN RAISE EXCEPTION 'four-eyes rule: the login % % record %, so another login must %',"
+                                + "  session_user, CASE clash.kind WHEN 'created' THEN 'filed' ELSE 'reviewed' END, NEW.record_id,"
+                                + "  CASE NEW.kind WHEN 'approved' THEN 'approve it' ELSE 'review it' END; END IF;"
+                                + " RETURN NEW; END $$",
+                        "CREATE TRIGGER record_event_four_eyes BEFORE INSERT ON record_event"
+                                + " FOR EACH ROW EXECUTE FUNCTION record_event_four_eyes()")));
 
         private PostgresMigrations() {
         }

@@ -143,6 +143,7 @@ public final class RecordRepository {
             throw new InvalidInputException("--reason", why == null ? "" : why, "switching a register rule needs a reason");
         }
         register.write(c -> {
+            register.requireMayChangeRules(c, name);
             int seq = eventsOf(c, 0).size() + 1;
             JsonNode payload = CanonicalJson.object().put("rule", FourEyesRule.NAME).put("value", on ? "on" : "off").put("reason", why.strip());
             append(c, head(c), 0, seq, EventKind.RULE_SET, name, payload);
@@ -160,31 +161,42 @@ public final class RecordRepository {
         if (next != RecordStatus.IN_REVIEW && next != RecordStatus.APPROVED) {
             return;
         }
-        boolean accounts = register.accountIsAuthenticated();
         String account = register.account();
+        String step = next == RecordStatus.IN_REVIEW ? "review" : "approve";
         StatusChange filed = r.history().get(0);
-        if (samePerson(filed, by, account, accounts)) {
-            throw new InvalidInputException("--by", by, "four-eyes rule: " + filed.by() + (accounts ? " (" + filed.account() + ")" : "")
-                    + " filed record " + r.id() + ", so someone else must " + (next == RecordStatus.IN_REVIEW ? "review" : "approve")
-                    + " it (a site can switch the rule off: cohesa record rule four-eyes off --by NAME --reason TEXT)");
-        }
+        refuseSamePerson(filed, by, account, "filed record " + r.id() + ", so someone else must " + step + " it");
         if (next == RecordStatus.APPROVED) {
             for (StatusChange c : r.history()) {
-                if (c.status() == RecordStatus.IN_REVIEW && samePerson(c, by, account, accounts)) {
-                    throw new InvalidInputException("--by", by, "four-eyes rule: " + c.by() + (accounts ? " (" + c.account() + ")" : "")
-                            + " reviewed record " + r.id() + ", so a third person must approve it"
-                            + " (a site can switch the rule off: cohesa record rule four-eyes off --by NAME --reason TEXT)");
+                if (c.status() == RecordStatus.IN_REVIEW) {
+                    refuseSamePerson(c, by, account, "reviewed record " + r.id() + ", so a third person must approve it");
                 }
             }
         }
     }
 
-    /** The same person: the same name as typed (ignoring case and spacing), or on a shared register the same login. */
-    static boolean samePerson(StatusChange earlier, String by, String account, boolean accountsCount) {
+    /**
+     * Refuses a step by the person of an earlier step: the same name as typed (ignoring case and spacing), or the same
+     * account at the keyboard (the operating-system account locally, the login on a shared register), whatever name is
+     * typed. Events stored before accounts were recorded compare by name only.
+     */
+    private void refuseSamePerson(StatusChange earlier, String by, String account, String what) {
+        String off = " (a site can switch the rule off: cohesa record rule four-eyes off --by NAME --reason TEXT)";
         if (normalise(earlier.by()).equals(normalise(by))) {
-            return true;
+            throw new InvalidInputException("--by", by, "four-eyes rule: " + earlier.by() + " " + what + off);
         }
-        return accountsCount && earlier.account() != null && earlier.account().equals(account);
+        if (sameAccount(earlier.account(), account)) {
+            throw new InvalidInputException("--by", by, "four-eyes rule: " + earlier.by() + " " + what + ", and this " + accountWord()
+                    + " (" + account + ") is the one " + earlier.by() + " used; sign in under your own account" + off);
+        }
+    }
+
+    private String accountWord() {
+        return register.accountIsAuthenticated() ? "login" : "operating-system account";
+    }
+
+    /** The same account (events stored before accounts were recorded have none and match nothing). */
+    static boolean sameAccount(String earlier, String now) {
+        return earlier != null && !earlier.isBlank() && earlier.equals(now);
     }
 
     private static String normalise(String name) {
@@ -324,6 +336,7 @@ public final class RecordRepository {
                             + " events; a register is copied only into an empty one");
                 }
             }
+            register.beginVerbatimCopy(c);
             ChainHead head = ChainHead.EMPTY;
             for (RecordEvent e : events) {
                 insert(c, e);

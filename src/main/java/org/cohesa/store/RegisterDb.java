@@ -32,6 +32,18 @@ public interface RegisterDb {
      */
     boolean accountIsAuthenticated();
 
+    /**
+     * Refuses, with one line naming the account, a switch of the register's rules by an account the register does not
+     * allow to make it (on a shared register: neither the owner nor a member of {@code cohesa_register_admin}; the server
+     * refuses it too). A local register lets whoever can write it switch rules (the switch is recorded).
+     */
+    default void requireMayChangeRules(java.sql.Connection c, String by) throws java.sql.SQLException {
+    }
+
+    /** Prepares the write transaction {@code c} for copying another register's events in verbatim (accounts and all). */
+    default void beginVerbatimCopy(java.sql.Connection c) throws java.sql.SQLException {
+    }
+
     /** True while the database's own append-only guards on {@code record_event} are in place. */
     boolean guardsInPlace();
 }

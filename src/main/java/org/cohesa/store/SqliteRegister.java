@@ -10,20 +10,20 @@ public final class SqliteRegister implements RegisterDb {
     private final Database db;
     private final String account;
 
+    /** The register in {@code db}, acting under the operating-system account of this process ({@link LocalAccount}). */
     public SqliteRegister(Database db) {
-        this(db, osAccount());
+        this(db, null);
     }
 
-    /** With an explicit account (tests that act as several people). */
+    /** With an explicit account (tests that act as several people); null: {@link LocalAccount#current()} at each write. */
     public SqliteRegister(Database db, String account) {
         this.db = db;
         this.account = account;
     }
 
-    /** The operating-system user running the program, as the Java runtime reports it. */
+    /** The operating-system account running the program ({@link LocalAccount}). */
     public static String osAccount() {
-        String name = System.getProperty("user.name");
-        return name == null || name.isBlank() ? "unknown" : name.strip();
+        return LocalAccount.current();
     }
 
     @Override
@@ -48,7 +48,7 @@ public final class SqliteRegister implements RegisterDb {
 
     @Override
     public String account() {
-        return account;
+        return account != null ? account : LocalAccount.current();
     }
 
     @Override

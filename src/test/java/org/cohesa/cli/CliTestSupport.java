@@ -25,6 +25,16 @@ public final class CliTestSupport {
     private CliTestSupport() {
     }
 
+    /**
+     * Runs as another operating-system account (as if another person signed in to this machine and ran the command):
+     * the register records the account and the four-eyes rule compares it.
+     */
+    public static Result runAs(String account, Path db, String... args) {
+        try (org.cohesa.store.LocalAccount.Scope ignored = org.cohesa.store.LocalAccount.actAsInThisProcess(account)) {
+            return run(db, args);
+        }
+    }
+
     public static Result run(Path db, String... args) {
         List<String> all = new ArrayList<>(List.of(args));
         all.add("--db");

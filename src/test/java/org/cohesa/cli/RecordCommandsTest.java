@@ -43,8 +43,10 @@ class RecordCommandsTest {
                 "--replaced", "toluene", "--replacement", "ethyl acetate:0.5,methanol:0.5", "--reason", "regulatory: reprotoxic aromatic",
                 "--author", "A. Chemist", "--target", "18,9,8,7", "--json");
         assertEquals(0, r.exitCode(), r.err());
-        assertEquals(0, CliTestSupport.run(template, "record", "review", "1", "--by", "Q. Reviewer").exitCode());
-        assertEquals(0, CliTestSupport.run(template, "record", "approve", "1", "--by", "M. Manager", "--comment", "lab trials passed").exitCode());
+        // three people at their own operating-system accounts (four eyes compares them)
+        assertEquals(0, CliTestSupport.runAs("qreviewer", template, "record", "review", "1", "--by", "Q. Reviewer").exitCode());
+        assertEquals(0, CliTestSupport.runAs("mmanager", template, "record", "approve", "1", "--by", "M. Manager", "--comment", "lab trials passed")
+                .exitCode());
         Result r2 = CliTestSupport.run(template, "record", "add", "--process", "Extraction step 4 (invented)", "--replaced", "1,4-dioxane:0.3,water:0.7",
                 "--replacement", "ethanol", "--reason", "safety", "--author", "B. Chemist");
         assertEquals(0, r2.exitCode(), r2.err());

@@ -234,15 +234,27 @@ class RegisterHardeningTest {
 
     @Test
     void selfApprovalIsRefusedWithExit2UnlessTheSiteSwitchesTheRuleOff() {
-        assertEquals(0, run("record", "review", "1", "--by", "Q. Reviewer").exitCode());
-        Result self = run("record", "approve", "1", "--by", "q. reviewer", "--comment", "fine");
+        // the author's own operating-system account, under another typed name
+        Result ownAccount = run("record", "review", "1", "--by", "Q. Reviewer");
+        assertEquals(2, ownAccount.exitCode(), ownAccount.err());
+        assertTrue(ownAccount.err().startsWith("error: --by 'Q. Reviewer': four-eyes rule: ") && ownAccount.err().contains("filed record 1")
+                && ownAccount.err().contains("operating-system account (" + org.cohesa.store.LocalAccount.current() + ")"), ownAccount.err());
+        assertEquals(1, ownAccount.err().strip().lines().count(), ownAccount.err());
+        assertEquals(0, CliTestSupport.runAs("qreviewer", db, "record", "review", "1", "--by", "Q. Reviewer").exitCode());
+        Result self = CliTestSupport.runAs("mmanager", db, "record", "approve", "1", "--by", "q. reviewer", "--comment", "fine");
         assertEquals(2, self.exitCode(), self.err());
         assertTrue(self.err().contains("four-eyes rule") && self.err().contains("reviewed record 1"), self.err());
         assertEquals(1, self.err().strip().lines().count(), self.err());
+        Result reviewerAccount = CliTestSupport.runAs("qreviewer", db, "record", "approve", "1", "--by", "M. Manager", "--comment", "fine");
+        assertEquals(2, reviewerAccount.exitCode(), reviewerAccount.err());
+        assertTrue(reviewerAccount.err().contains("reviewed record 1") && reviewerAccount.err().contains("(qreviewer)"), reviewerAccount.err());
+        assertEquals(1, run("record", "show", "1", "--json").json().get("history").size() - 1, "refused steps wrote nothing");
         Result off = run("record", "rule", "four-eyes", "off", "--by", "M. Manager", "--reason", "one-person lab (invented)", "--json");
         assertEquals(0, off.exitCode(), off.err());
         assertFalse(off.json().get("on").asBoolean());
-        assertEquals(0, run("record", "approve", "1", "--by", "Q. Reviewer", "--comment", "fine").exitCode());
+        assertEquals(0, CliTestSupport.runAs("qreviewer", db, "record", "approve", "1", "--by", "Q. Reviewer", "--comment", "fine").exitCode());
+        assertEquals("qreviewer", run("record", "show", "1", "--json").json().get("history").get(2).get("account").asText(),
+                "the account is recorded with the step");
         assertTrue(run("record", "rule", "four-eyes").out().contains("off (set by M. Manager"));
         assertEquals(0, run("record", "verify").exitCode(), "the switch is part of the intact chain");
     }
@@ -255,7 +267,7 @@ class RegisterHardeningTest {
         assertEquals(64, a.json().get("head_hash").asText().length());
         assertEquals(64, a.json().get("mac").asText().length(), "sealed with the register key");
         assertEquals(2, run("record", "anchor", anchor.toString()).exitCode(), "an anchor is not overwritten by accident");
-        assertEquals(0, run("record", "review", "1", "--by", "Q. Reviewer").exitCode());
+        assertEquals(0, CliTestSupport.runAs("qreviewer", db, "record", "review", "1", "--by", "Q. Reviewer").exitCode());
         Result later = run("record", "verify", "--anchor", anchor.toString(), "--json");
         assertEquals(0, later.exitCode(), later.out());
         assertEquals(1, later.json().get("events_since_anchor").asInt());

@@ -176,10 +176,15 @@ class WorkflowTest {
         org.cohesa.core.records.Evidence filed = records.getItems().get(0).evidence();
         assertTrue(filed.section(org.cohesa.core.records.Evidence.Sections.SAFETY).isPresent(), filed.sections().toString());
         assertTrue(filed.section(org.cohesa.core.records.Evidence.Sections.DRYING).isPresent(), filed.sections().toString());
-        robot.interact(() -> fx.workbench.recordsModel().changeStatus(id, org.cohesa.core.records.RecordStatus.IN_REVIEW, "reviewer", null, null));
-        fx.awaitJobs();
-        robot.interact(() -> fx.workbench.recordsModel().changeStatus(id, org.cohesa.core.records.RecordStatus.APPROVED, "lead", "ok", null));
-        fx.awaitJobs();
+        // the reviewer and the lead each at their own operating-system account (the four-eyes rule compares accounts)
+        try (org.cohesa.store.LocalAccount.Scope reviewer = org.cohesa.store.LocalAccount.actAsInThisProcess("reviewer")) {
+            robot.interact(() -> fx.workbench.recordsModel().changeStatus(id, org.cohesa.core.records.RecordStatus.IN_REVIEW, "reviewer", null, null));
+            fx.awaitJobs();
+        }
+        try (org.cohesa.store.LocalAccount.Scope lead = org.cohesa.store.LocalAccount.actAsInThisProcess("lead")) {
+            robot.interact(() -> fx.workbench.recordsModel().changeStatus(id, org.cohesa.core.records.RecordStatus.APPROVED, "lead", "ok", null));
+            fx.awaitJobs();
+        }
         assertEquals(org.cohesa.core.records.RecordStatus.APPROVED, records.getItems().get(0).status());
         robot.interact(() -> fx.workbench.recordsModel().verify(null));
         fx.awaitJobs();

@@ -16,6 +16,7 @@ import org.cohesa.store.Database;
 import org.cohesa.store.RecordFixtures;
 import org.cohesa.store.RecordRepository;
 import org.cohesa.store.SolventRepository;
+import org.cohesa.store.SqliteRegister;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -30,11 +31,12 @@ class RecordPdfTest {
     @BeforeAll
     static void fileRecord() {
         try (Database db = Database.open(dir.resolve("cohesa.db"))) {
-            RecordRepository repo = new RecordRepository(db);
+            RecordRepository repo = new RecordRepository(new SqliteRegister(db, "bauthor"), java.time.Clock.systemUTC(), null);
             repo.create(RecordFixtures.draft(new SolventRepository(db).library(), "tablet coating (invented)", "1,4-dioxane:0.3,water:0.7", "ethanol"),
                     "B. Author");
-            repo.changeStatus(1, RecordStatus.IN_REVIEW, "R. Reviewer", null);
-            repo.changeStatus(1, RecordStatus.REJECTED, "M. Manager", "drying too slow in the pilot coater");
+            new RecordRepository(new SqliteRegister(db, "rreviewer"), java.time.Clock.systemUTC(), null)
+                    .changeStatus(1, RecordStatus.IN_REVIEW, "R. Reviewer", null);
+            new RecordRepository(new SqliteRegister(db, "mmanager"), java.time.Clock.systemUTC(), null).changeStatus(1, RecordStatus.REJECTED, "M. Manager", "drying too slow in the pilot coater");
         }
     }
 

@@ -43,10 +43,12 @@ class RecordRepositoryTest {
             RecordRepository repo = new RecordRepository(db);
             repo.create(RecordFixtures.draft(lib, "degreasing bath (invented)", "toluene", "ethyl acetate"), "A. Author");
             repo.create(RecordFixtures.draft(lib, "tablet coating (invented)", "1,4-dioxane", "ethanol:0.7,water:0.3"), "B. Author");
-            repo.changeStatus(1, RecordStatus.IN_REVIEW, "R. Reviewer", null);
+            RecordRepository reviewer = new RecordRepository(new SqliteRegister(db, "rreviewer"), java.time.Clock.systemUTC(), null);
+            reviewer.changeStatus(1, RecordStatus.IN_REVIEW, "R. Reviewer", null);
             repo.create(RecordFixtures.draft(lib, "ink wash (invented)", "n-hexane", "ethyl acetate:0.5,ethanol:0.5"), "C. Author");
-            repo.changeStatus(2, RecordStatus.IN_REVIEW, "R. Reviewer", "looks complete");
-            repo.changeStatus(1, RecordStatus.APPROVED, "M. Manager", "lab trials passed");
+            reviewer.changeStatus(2, RecordStatus.IN_REVIEW, "R. Reviewer", "looks complete");
+            new RecordRepository(new SqliteRegister(db, "mmanager"), java.time.Clock.systemUTC(), null)
+                    .changeStatus(1, RecordStatus.APPROVED, "M. Manager", "lab trials passed");
         }
     }
 

@@ -22,7 +22,8 @@ public final class RecordWriterProcess {
             // a shared register: args[3] is a local database that only supplies the solvent library for the drafts
             try (Database d = Database.openWithoutSync(Path.of(args[3])); PostgresRegister shared = PostgresRegister.open("register", args[0])) {
                 SolventLibrary library = new SolventRepository(d).library();
-                write(new RecordRepository(shared, java.time.Clock.systemUTC(), null), library, count, tag);
+                RecordRepository one = new RecordRepository(shared, java.time.Clock.systemUTC(), null);
+                write(one, one, library, count, tag);
             }
             return;
         }
@@ -37,11 +38,13 @@ public final class RecordWriterProcess {
             } else {
                 library = new SolventRepository(d).library();
             }
-            write(new RecordRepository(d), library, count, tag);
+            // two people at one process: the author's and the reviewer's operating-system accounts (four eyes)
+            write(new RecordRepository(new SqliteRegister(d, "author-" + tag), java.time.Clock.systemUTC(), null),
+                    new RecordRepository(new SqliteRegister(d, "reviewer-" + tag), java.time.Clock.systemUTC(), null), library, count, tag);
         }
     }
 
-    private static void write(RecordRepository repo, SolventLibrary library, int count, String tag) {
+    private static void write(RecordRepository repo, RecordRepository reviewer, SolventLibrary library, int count, String tag) {
         {
             RecordDraft draft = RecordFixtures.draft(library, "writer " + tag, "toluene", "ethyl acetate:0.5,ethanol:0.5");
             System.out.println("ready");
@@ -52,7 +55,7 @@ public final class RecordWriterProcess {
                 writes++;
                 System.out.println("committed " + writes);
                 if (i % 2 == 1) {
-                    repo.changeStatus(r.id(), RecordStatus.IN_REVIEW, "reviewer " + tag, "step " + i);
+                    reviewer.changeStatus(r.id(), RecordStatus.IN_REVIEW, "reviewer " + tag, "step " + i);
                     writes++;
                     System.out.println("committed " + writes);
                 }

@@ -16,8 +16,8 @@ import java.util.UUID;
 /**
  * The two stores the records suite runs on. SQLite: a fresh database file. PostgreSQL: a fresh database on the server
  * named by {@code $COHESA_TEST_POSTGRES} (an administrator's address, e.g. {@code postgresql://postgres@127.0.0.1:54329/postgres};
- * {@code .ci/run} starts one with {@code docs/tools/local-postgres.sh}), with logins alice, bob and carol for the people
- * of the tests. Without that variable, or when the server does not answer, the PostgreSQL runs are skipped with a message.
+ * {@code .ci/run} starts one with {@code docs/tools/local-postgres.sh}), with logins alice, bob, carol, dave and erin for
+ * the people of the tests (erin also administers the register: {@code cohesa_register_admin}). Without that variable, or when the server does not answer, the PostgreSQL runs are skipped with a message.
  */
 public final class RegisterStores {
 
@@ -131,6 +131,8 @@ public final class RegisterStores {
             for (String person : List.of("alice", "bob", "carol", "dave", "erin")) {
                 st.execute("GRANT cohesa_register_writer TO " + person);
             }
+            // erin is the site's register administrator: she may switch the register's rules
+            st.execute("GRANT cohesa_register_admin TO erin");
         } catch (SQLException e) {
             throw new IllegalStateException("cannot grant the test logins: " + e.getMessage(), e);
         }

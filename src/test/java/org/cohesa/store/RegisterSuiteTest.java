@@ -34,6 +34,7 @@ import org.cohesa.core.records.SubstitutionRecord;
 import org.cohesa.core.solvent.SolventLibrary;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -159,6 +160,9 @@ class RegisterSuiteTest {
         InvalidInputException self = assertThrows(InvalidInputException.class,
                 () -> as("bob").changeStatus(1, RecordStatus.IN_REVIEW, "a. author", null));
         assertTrue(self.getMessage().contains("four-eyes"), self.getMessage());
+        InvalidInputException ownAccount = assertThrows(InvalidInputException.class,
+                () -> as("alice").changeStatus(1, RecordStatus.IN_REVIEW, "B. Reviewer", null));
+        assertTrue(ownAccount.getMessage().contains("filed record 1") && ownAccount.getMessage().contains("(alice)"), ownAccount.getMessage());
         as("bob").changeStatus(1, RecordStatus.IN_REVIEW, "B. Reviewer", null);
         InvalidInputException reviewer = assertThrows(InvalidInputException.class,
                 () -> as("carol").changeStatus(1, RecordStatus.APPROVED, "B. Reviewer", "ok"));
@@ -166,12 +170,16 @@ class RegisterSuiteTest {
         InvalidInputException author = assertThrows(InvalidInputException.class,
                 () -> as("carol").changeStatus(1, RecordStatus.APPROVED, "A.  Author", "ok"));
         assertTrue(author.getMessage().contains("filed record 1"), author.getMessage());
-        // the same login under another typed name: refused where the server vouches for the login, recorded locally
-        if (name.equals("postgresql")) {
-            InvalidInputException login = assertThrows(InvalidInputException.class,
-                    () -> as("bob").changeStatus(1, RecordStatus.APPROVED, "M. Manager", "ok"));
-            assertTrue(login.getMessage().contains("(bob)"), login.getMessage());
-        }
+        // the same account at the keyboard under another typed name: refused on both stores (OS account, login)
+        InvalidInputException reviewerAccount = assertThrows(InvalidInputException.class,
+                () -> as("bob").changeStatus(1, RecordStatus.APPROVED, "M. Manager", "ok"));
+        assertTrue(reviewerAccount.getMessage().contains("reviewed record 1") && reviewerAccount.getMessage().contains("(bob)"),
+                reviewerAccount.getMessage());
+        InvalidInputException authorAccount = assertThrows(InvalidInputException.class,
+                () -> as("alice").changeStatus(1, RecordStatus.APPROVED, "M. Manager", "ok"));
+        assertTrue(authorAccount.getMessage().contains("filed record 1") && authorAccount.getMessage().contains("(alice)"),
+                authorAccount.getMessage());
+        assertEquals(1, authorAccount.getMessage().lines().count(), "one line");
         as("carol").changeStatus(1, RecordStatus.APPROVED, "M. Manager", "lab trials passed");
         assertEquals(3, as("erin").chain().size(), "refused steps wrote nothing");
     }
@@ -181,20 +189,29 @@ class RegisterSuiteTest {
     void theSiteCanSwitchFourEyesOffAndTheSwitchIsRecorded(String name) {
         use(name);
         assertTrue(as("erin").fourEyes().on(), "on by default");
-        as("alice").setFourEyes(false, "M. Manager", "one-person lab (invented)");
+        if (name.equals("postgresql")) {
+            // on the shared register only the owner or a register administrator switches rules (the server refuses others)
+            InvalidInputException notAdmin = assertThrows(InvalidInputException.class,
+                    () -> as("alice").setFourEyes(false, "A. Author", "I want to approve my own"));
+            assertTrue(notAdmin.getMessage().contains("cohesa_register_admin"), notAdmin.getMessage());
+            assertEquals(0, as("erin").chain().size(), "nothing written");
+        }
+        as("erin").setFourEyes(false, "M. Manager", "one-person lab (invented)");
         as("alice").create(draft("enamel thinner"), "A. Author");
         as("alice").changeStatus(1, RecordStatus.IN_REVIEW, "A. Author", null);
         as("alice").changeStatus(1, RecordStatus.APPROVED, "A. Author", "self-approved under the site rule");
         var rule = as("erin").fourEyes();
         assertFalse(rule.on());
         assertEquals("M. Manager", rule.by());
-        assertEquals("alice", rule.account());
+        assertEquals("erin", rule.account());
         assertEquals("one-person lab (invented)", rule.reason());
+        assertEquals(List.of("alice", "alice", "alice"), as("erin").get(1).history().stream().map(h -> h.account()).toList(),
+                "one account filed, reviewed and approved, as the rule now allows, and the register shows it");
         ChainReport r = verify(key(), null);
         assertTrue(r.intact(), r.problems().toString());
         assertEquals(4, r.events(), "the switch is an event of the chain");
         assertEquals(1, as("erin").all().size(), "the register's settings are not a record");
-        as("bob").setFourEyes(true, "M. Manager", "second person hired");
+        as("erin").setFourEyes(true, "M. Manager", "second person hired");
         assertTrue(as("erin").fourEyes().on());
     }
 
@@ -221,6 +238,37 @@ class RegisterSuiteTest {
             }
         }
         assertTrue(verify(key(), null).intact());
+    }
+
+    /** An event row as a client bypassing the program would insert it (the server's triggers judge it before anything else). */
+    private static String rawEvent(long recordId, int seq, String kind, String account, String payload) {
+        return "INSERT INTO record_event (record_id, seq, kind, payload, actor, account, at, prev_record_id, prev_seq, prev_hash, hash)"
+                + " VALUES (" + recordId + ", " + seq + ", '" + kind + "', '" + payload + "', 'Somebody Else', '" + account + "', 'x', 0, 0, 'x', '"
+                + java.util.UUID.randomUUID() + "')";
+    }
+
+    @Test
+    void theServerHoldsTheFourEyesRuleAgainstAnyClient() throws SQLException {
+        use("postgresql");
+        as("alice").create(draft("enamel thinner"), "A. Author");
+        as("bob").changeStatus(1, RecordStatus.IN_REVIEW, "B. Reviewer", null);
+        try (Connection alice = RegisterStores.adminConnection(store.address("alice"), null); Statement st = alice.createStatement()) {
+            // the author's login approving with plain SQL under another typed name, past the program's own check
+            SQLException own = assertThrows(SQLException.class, () -> st.execute(rawEvent(1, 3, "approved", "alice", "{\"comment\":\"ok\"}")));
+            assertTrue(own.getMessage().contains("four-eyes rule: the login alice filed record 1"), own.getMessage());
+            SQLException rule = assertThrows(SQLException.class, () -> st.execute(rawEvent(0, 1, "rule_set", "alice",
+                    "{\"reason\":\"x\",\"rule\":\"four_eyes\",\"value\":\"off\"}")));
+            assertTrue(rule.getMessage().contains("may not switch register rules"), rule.getMessage());
+        }
+        try (Connection bob = RegisterStores.adminConnection(store.address("bob"), null); Statement st = bob.createStatement()) {
+            SQLException reviewer = assertThrows(SQLException.class, () -> st.execute(rawEvent(1, 3, "approved", "bob", "{\"comment\":\"ok\"}")));
+            assertTrue(reviewer.getMessage().contains("four-eyes rule: the login bob reviewed record 1"), reviewer.getMessage());
+        }
+        ChainReport r = verify(key(), null);
+        assertTrue(r.intact(), r.problems().toString());
+        assertEquals(2, r.events(), "nothing was written");
+        assertTrue(as("erin").guardsInPlace(), "the four-eyes trigger counts among the guards");
+        as("carol").changeStatus(1, RecordStatus.APPROVED, "M. Manager", "a third login");
     }
 
     // ---------------------------------------------------------------- attacks with plain SQL (issue 17, Checks)
@@ -482,7 +530,7 @@ class RegisterSuiteTest {
     @MethodSource("stores")
     void fourWriterProcessesAtOnceLoseNothingAndKeepTheChain(String name) throws Exception {
         use(name);
-        // writers on one login each; every second record is also sent to review by a second name
+        // PostgreSQL: writers on one login each; SQLite: each writer process files and reviews under two accounts
         String[] people = {"alice", "bob", "carol", "dave"};
         if (name.equals("postgresql")) {
             // each writer reviews its own records under its one login: the site switches four-eyes off for this run (recorded)
@@ -496,7 +544,7 @@ class RegisterSuiteTest {
         long start = System.nanoTime();
         for (String p : people) {
             ProcessBuilder pb = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-XX:TieredStopAtLevel=1",
-                    "-Dcohesa.register.key=" + keyFile, "-Duser.name=" + p, "-cp", cp, RecordWriterProcess.class.getName(), store.address(p),
+                    "-Dcohesa.register.key=" + keyFile, "-cp", cp, RecordWriterProcess.class.getName(), store.address(p),
                     String.valueOf(perWriter), p, libraryDb.toString()).redirectErrorStream(true);
             writers.add(pb.start());
         }
