@@ -50,6 +50,38 @@ class MiscibilityTest {
         }
     }
 
+    /**
+     * Consensus rule: the liquid–liquid set splits DMSO, NMP, DMAc, 1,2-dimethoxyethane, ethyl lactate and morpholine from
+     * water, original UNIFAC does not, and they are miscible in all proportions (CRC Handbook, 95th ed., solubility column;
+     * from memory) — one phase, with the disagreement named. Pairs both sets split stay split (hexane–methanol, acetonitrile–
+     * hexane, DMSO–hexane, ethylene glycol–toluene: partly miscible at 25 °C, common practice, no source).
+     */
+    @Test
+    void aSplitIsReportedOnlyWhenBothUnifacParameterSetsFindIt() {
+        for (String s : List.of("dimethyl sulfoxide", "N-methyl-2-pyrrolidone", "N,N-dimethylacetamide", "1,2-dimethoxyethane", "ethyl lactate",
+                "morpholine")) {
+            for (double phi : new double[] {0.1, 0.35, 0.5, 0.65, 0.9}) {
+                MiscibilityResult r = check(T25, s, "water", phi);
+                assertFalse(r.splits(), s + " at " + phi + ": " + r.detail());
+            }
+            MiscibilityResult any = null;
+            for (double phi : new double[] {0.02, 0.1, 0.2, 0.35, 0.5, 0.65, 0.8, 0.9, 0.98}) {
+                MiscibilityResult r = check(T25, s, "water", phi);
+                if (r.detail().contains("consensus rule")) {
+                    any = r;
+                }
+            }
+            assertTrue(any != null, s + ": the liquid–liquid set's split and its overruling are named somewhere on the tested range");
+            assertTrue(any.detail().contains("finds none"), any.detail());
+        }
+        for (String[] pair : new String[][] {{"n-hexane", "methanol"}, {"acetonitrile", "n-hexane"}, {"dimethyl sulfoxide", "n-hexane"},
+                {"ethylene glycol", "toluene"}}) {
+            MiscibilityResult r = check(T25, pair[0], pair[1], 0.5);
+            assertTrue(r.splits(), pair[0] + "/" + pair[1] + ": " + r.detail());
+            assertTrue(r.detail().contains("agrees"), r.detail());
+        }
+    }
+
     @Test
     void smallAmountOfButanolDissolvesInWater() {
         // 1-butanol dissolves in water to about 7 wt % at 25 °C (CRC Handbook, aqueous solubility; from memory);
