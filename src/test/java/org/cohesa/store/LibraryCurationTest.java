@@ -182,6 +182,20 @@ class LibraryCurationTest {
     }
 
     @Test
+    void mixturesWithoutATableBoilingPointTakeTheMidpointOfAPublishedRange() {
+        // Turpentine: NIOSH Pocket Guide to Chemical Hazards, entry "Turpentine": boiling range 309-338 °F. Mineral
+        // spirits: ECHA registration dossier of Stoddard solvent, test material "Boiling Point Range 160-199 °C". Each
+        // is stored as the range's midpoint with the range in the note.
+        double turpentine = ((309 - 32) / 1.8 + (338 - 32) / 1.8) / 2;
+        assertEquals(turpentine, Double.parseDouble(solvent("8006-64-2").get("boiling_point_c")), 0.05);
+        assertEquals("niosh-npg", solvent("8006-64-2").get("src_boiling_point"));
+        assertTrue(solvent("8006-64-2").get("note").contains("309-338 °F"));
+        assertEquals((160 + 199) / 2.0, Double.parseDouble(solvent("8052-41-3").get("boiling_point_c")), 0.05);
+        assertEquals("echa-dossier-stoddard", solvent("8052-41-3").get("src_boiling_point"));
+        assertTrue(solvent("8052-41-3").get("note").contains("160-199 °C"));
+    }
+
+    @Test
     void familiesAreMultiValuedWhereSeveralApply() {
         // Common practice, no source: a chloroaromatic is both aromatic and chlorinated (the family list names every
         // family that applies, primary family first), an aromatic nitrile both nitrile and aromatic, etc.
