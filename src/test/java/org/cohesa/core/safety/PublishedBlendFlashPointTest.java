@@ -3,8 +3,19 @@ package org.cohesa.core.safety;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
+import java.io.InputStreamReader;
+import java.io.Reader;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
 import org.cohesa.core.solvent.Blend;
 import org.cohesa.core.solvent.BlendComponent;
 import org.cohesa.core.solvent.Solvent;
@@ -25,39 +36,97 @@ class PublishedBlendFlashPointTest {
         return SafetyProfiler.profile(new Blend(List.of(new BlendComponent(sa, fa), new BlendComponent(sb, 1 - fa))), 298.15, ideal);
     }
 
+    /** One measured point of {@code published-blend-flash-points.csv}. */
+    record MeasuredPoint(String system, String first, String second, String basis, double fraction, double celsius, String source) {
+    }
+
+    static List<MeasuredPoint> measuredPoints() {
+        CSVFormat format = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).setCommentMarker('#').get();
+        try (Reader in = new InputStreamReader(PublishedBlendFlashPointTest.class.getResourceAsStream("published-blend-flash-points.csv"),
+                StandardCharsets.UTF_8); CSVParser p = CSVParser.builder().setReader(in).setFormat(format).get()) {
+            List<MeasuredPoint> out = new ArrayList<>();
+            for (CSVRecord r : p) {
+                out.add(new MeasuredPoint(r.get("system"), r.get("component_1"), r.get("component_2"), r.get("basis"),
+                        Double.parseDouble(r.get("fraction_1")), Double.parseDouble(r.get("flash_point_c")), r.get("source")));
+            }
+            return out;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    /** The first component's volume fraction for a point given by volume or by mass (pure-liquid densities, no contraction). */
+    static double volumeFraction(MeasuredPoint m) {
+        if (m.basis().equals("volume")) {
+            return m.fraction();
+        }
+        if (!m.basis().equals("mass")) {
+            throw new IllegalArgumentException("basis " + m.basis());
+        }
+        double r1 = LIB.resolve("s", m.first()).density();
+        double r2 = LIB.resolve("s", m.second()).density();
+        double v1 = m.fraction() / r1;
+        double v2 = (1 - m.fraction()) / r2;
+        return v1 / (v1 + v2);
+    }
+
+    /** Mean and worst |model − measured| per system, K, for the activity model (UNIFAC) or the ideal solution. */
+    static Map<String, double[]> errorsBySystem(boolean ideal, StringBuilder report) {
+        Map<String, double[]> out = new LinkedHashMap<>();
+        Map<String, Integer> counts = new LinkedHashMap<>();
+        for (MeasuredPoint m : measuredPoints()) {
+            SafetyProfile p = profile(m.first(), volumeFraction(m), m.second(), ideal);
+            assertEquals(SafetyProfile.FlashPointStatus.COMPUTED, p.flashPoint().status(), m + ": " + p.flashPoint().detail());
+            double err = p.flashPoint().celsius() - m.celsius();
+            double[] e = out.computeIfAbsent(m.system(), k -> new double[2]);
+            e[0] += Math.abs(err);
+            e[1] = Math.max(e[1], Math.abs(err));
+            counts.merge(m.system(), 1, Integer::sum);
+            report.append(String.format(Locale.ROOT, " %s %.0f%%: %.1f / %.0f (%+.1f);", m.system(), 100 * m.fraction(), p.flashPoint().celsius(),
+                    m.celsius(), err));
+        }
+        out.forEach((k, e) -> e[0] /= counts.get(k));
+        return out;
+    }
+
     /**
-     * Ethanol–water, a strongly non-ideal aqueous pair. Measured closed-cup flash points by % alcohol by volume as
-     * tabulated in the "Ethanol" article of Wikipedia (Flammability section, citing its own source; here read from a
-     * 2015 copy on the ACS DCHAS list): 10 % 49 °C, 20 % 36, 30 % 29, 40 % 26, 50 % 24, 60 % 22, 70 % 21, 80 % 20,
-     * 90 % 17, 96 % 17. A tertiary source: the test method and the original publication were not checked. Volume
-     * fractions are converted to mole fractions with pure-liquid molar volumes (no volume contraction).
+     * Every published mixture in {@code published-blend-flash-points.csv} (our own file, a source per row), with
+     * Liaw et al. (2002) and the library's activity model, mean and worst |error| asserted at the figures measured on
+     * 2026-12-03 (docs/methods.md). Ethanol–water: the same tertiary numbers read once as % by volume (Wikipedia) and
+     * once as % by mass (Engineering ToolBox); which basis is right is not settled, so both are checked.
      */
     @Test
-    void ethanolWaterAgainstMeasuredFlashPoints() {
-        double[] abv = {0.10, 0.20, 0.30, 0.40, 0.50, 0.60, 0.70, 0.80, 0.90, 0.96};
-        double[] measured = {49, 36, 29, 26, 24, 22, 21, 20, 17, 17};
-        double sumAbs = 0;
-        double maxAbs = 0;
-        StringBuilder report = new StringBuilder("ethanol-water flash points (vol% ethanol: model / measured °C):");
-        for (int i = 0; i < abv.length; i++) {
-            SafetyProfile p = profile("ethanol", abv[i], "water", false);
-            assertEquals(SafetyProfile.FlashPointStatus.COMPUTED, p.flashPoint().status(), p.flashPoint().detail().toString());
-            double err = p.flashPoint().celsius() - measured[i];
-            sumAbs += Math.abs(err);
-            maxAbs = Math.max(maxAbs, Math.abs(err));
-            report.append(String.format(Locale.ROOT, " %.0f%%: %.1f / %.0f (%+.1f);", abv[i] * 100, p.flashPoint().celsius(), measured[i], err));
-            assertTrue(Math.abs(err) <= 8, report.toString());
+    void everyPublishedMixtureAgainstItsMeasuredFlashPoints() {
+        StringBuilder report = new StringBuilder("blend flash points, model / measured °C:");
+        Map<String, double[]> unifac = errorsBySystem(false, report);
+        Map<String, double[]> ideal = errorsBySystem(true, new StringBuilder());
+        unifac.forEach((k, e) -> report.append(String.format(Locale.ROOT, "%n  %s: activity model mean %.1f K, worst %.1f K; ideal solution mean %.1f K, worst %.1f K",
+                k, e[0], e[1], ideal.get(k)[0], ideal.get(k)[1])));
+        System.out.println(report);
+        assertEquals(List.of("ethanol-water (vol %)", "ethanol-water (mass %)"), List.copyOf(unifac.keySet()));
+        assertErrors(unifac.get("ethanol-water (vol %)"), VOL_MEAN, VOL_WORST, report);
+        assertErrors(unifac.get("ethanol-water (mass %)"), MASS_MEAN, MASS_WORST, report);
+        for (String k : unifac.keySet()) {
+            assertTrue(ideal.get(k)[0] > 2 * unifac.get(k)[0], k + ": the ideal solution is much worse; " + report);
         }
-        double mae = sumAbs / abv.length;
-        System.out.println(report + String.format(Locale.ROOT, " mean |error| %.1f K, max %.1f K", mae, maxAbs));
-        assertTrue(mae <= 3.0, "mean absolute error " + mae + " K; " + report);
-        assertTrue(profile("ethanol", 0.5, "water", false).flashPoint().model().contains("UNIFAC"),
-                "the model that served is named");
+        assertTrue(profile("ethanol", 0.5, "water", false).flashPoint().model().contains("UNIFAC"), "the model that served is named");
     }
+
+    private static void assertErrors(double[] e, double mean, double worst, StringBuilder report) {
+        assertTrue(e[0] <= mean + 0.05, "mean |error| " + e[0] + " K; " + report);
+        assertTrue(e[1] <= worst + 0.05, "worst |error| " + e[1] + " K; " + report);
+    }
+
+    // measured 2026-12-03, see docs/methods.md
+    private static final double VOL_MEAN = 1.9;
+    private static final double VOL_WORST = 7.0;
+    private static final double MASS_MEAN = 3.3;
+    private static final double MASS_WORST = 11.9;
 
     @Test
     void theIdealSolutionBadlyOverestimatesAqueousBlends() {
-        // same measured table: 20 % by volume flashes at 36 °C; Raoult's law (γ = 1) misses the water-driven rise of γ(ethanol)
+        // the same tertiary table (published-blend-flash-points.csv): 20 % by volume flashes at 36 °C; Raoult's law (γ = 1)
+        // misses the water-driven rise of γ(ethanol)
         double ideal = profile("ethanol", 0.20, "water", true).flashPoint().celsius();
         double real = profile("ethanol", 0.20, "water", false).flashPoint().celsius();
         assertTrue(ideal - 36 > 15, "ideal estimate " + ideal + " °C");
