@@ -348,6 +348,8 @@ def main(argv):
                          and num(hvap[c][4]) and num(hvap[c][5]))
     hvap_ratio = hvap_ratios[len(hvap_ratios) // 2]
     subgroups = {int(r[0]) for r in read_tsv(p("unifac-subgroups.tsv"))}
+    with open(os.path.join(HERE, "estimated-hsp.csv"), encoding="utf-8", newline="") as f:
+        structure_hsp = {e["cas"]: tuple(float(e[c]) for c in ("dD", "dP", "dH")) for e in csv.DictReader(f) if e["dD"]}
 
     ids = {}
     for row in read_tsv(p("chemical-identifiers-pubchem-small.tsv"), header=False):
@@ -536,6 +538,9 @@ def main(argv):
         hansen = None
         if r["dD"] and r["molar_volume"] and m["family"] in vapour.HANSEN_FAMILIES:
             hansen = ((float(r["dD"]), float(r["dP"]), float(r["dH"])), float(r["molar_volume"]), hvap_ratio)
+        elif not r["dD"] and r["molar_volume"] and m["family"] in vapour.HANSEN_FAMILIES and structure_hsp.get(cas):
+            # Hansen parameters that apply_structure_estimates fills later (curation/estimated-hsp.csv)
+            hansen = (structure_hsp[cas], float(r["molar_volume"]), hvap_ratio, True)
         r.update(vapour.choose(cas, tb, vapour_tables, notes, proxy_tb, hv_pair, fp_k, vapour_points.get(cas), hansen))
 
         # enthalpy of vaporisation at 25 °C (kJ/mol)

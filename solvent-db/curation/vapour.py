@@ -246,6 +246,9 @@ def crc_estimate(tb_k, hvap_tb, hvap_298):
 
 # Source key of the last-resort estimate: ΔHvap at 25 °C from the cohesive energy of the Hansen parameters.
 HANSEN_KEY = "estimate-clapeyron-hansen-hvap"
+# The same estimate where the Hansen parameters are themselves estimated from the structure (Mathieu 2018): two
+# estimates in a chain, measured as a chain (docs/methods.md).
+STRUCTURE_HANSEN_KEY = "estimate-clapeyron-structure-hvap"
 # Families the Hansen-based estimate is applied to. Left out, by its error measured on the bundled solvents that
 # have published correlations (docs/methods.md): glycols (median error 48 %, always too low), carboxylic acids
 # (dimerise in the vapour), nitriles (benzonitrile +244 %), "other" (phosphates, sulfur compounds: median 30 %, and
@@ -254,7 +257,7 @@ HANSEN_FAMILIES = {"alcohol", "aliphatic", "amine", "aromatic", "chlorinated", "
                    "glycol_ether_acetate", "dipolar_aprotic", "lactone", "carbonate", "terpene"}
 
 
-def hansen_estimate(tb_k, hansen, vm_cm3, ratio):
+def hansen_estimate(tb_k, hansen, vm_cm3, ratio, key=HANSEN_KEY):
     """Clausius–Clapeyron anchored at (Tb, 101.325 kPa) with ΔHvap(298.15 K) = δt²·Vm + R·298.15 (Hildebrand &
     Scott: δt² is the cohesive energy density, J/cm³ = MPa) and ΔHvap(Tb) = ΔHvap(298.15 K) / ratio, ratio = the median
     ΔHvap(298)/ΔHvap(Tb) of the CRC table over the bundled solvents (constant ΔCp between the two). None without Tb,
@@ -266,7 +269,7 @@ def hansen_estimate(tb_k, hansen, vm_cm3, ratio):
     htb = h298 / ratio
     dcp = (h298 - htb) / (ROOM_K - tb_k)
     coeffs = [f"{tb_k:.2f}", "101325", f"{htb:.0f}", f"{dcp:.2f}"]
-    return Candidate(HANSEN_KEY, "clapeyron", coeffs, f"{ROOM_K:.2f}", f"{tb_k:.2f}",
+    return Candidate(key, "clapeyron", coeffs, f"{ROOM_K:.2f}", f"{tb_k:.2f}",
                      label="estimate from Tb and ΔHvap from the Hansen cohesive energy")
 
 
@@ -320,10 +323,12 @@ def choose(cas, tb_k, tables, notes, proxy_tb=None, hvap=None, flash_k=None, poi
                      f"{est.label.split('CRC ')[1]}; no published correlation passes the boiling-point check)")
         return est.columns()
     if hansen is not None:
-        est = hansen_estimate(tb_k, *hansen)
+        from_structure = len(hansen) > 3 and hansen[3]
+        est = hansen_estimate(tb_k, *hansen[:3], key=STRUCTURE_HANSEN_KEY if from_structure else HANSEN_KEY)
         if est is not None:
             notes.append("vapour pressure roughly estimated: Clausius–Clapeyron from the boiling point and ΔHvap(25 °C) = "
-                         "δt²·Vm + RT from the Hansen parameters (no published correlation or data point found; error "
-                         "in docs/methods.md)")
+                         "δt²·Vm + RT from the Hansen parameters"
+                         + (", themselves estimated from the structure (two estimates in a chain)" if from_structure else "")
+                         + " (no published correlation or data point found; error in docs/methods.md)")
             return est.columns()
     return {}

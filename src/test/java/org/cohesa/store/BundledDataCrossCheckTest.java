@@ -82,6 +82,8 @@ class BundledDataCrossCheckTest {
     /** Keys that name no table: computed, hand-assigned, or recalled from memory (prefix "memory-"). */
     private static final Set<String> NON_TABLE_KEYS = Set.of("computed", "unifac-manual", "estimate-clapeyron-tb-point",
             "estimate-clapeyron-hansen-hvap",
+            // checked by VapourPressureAtBoilingPointTest (consistency, and the chain's measured error)
+            "estimate-clapeyron-structure-hvap",
             // checked by VapourPressureAtBoilingPointTest against the solvent's own published fit
             "tb-from-vapour-fit",
             // checked by EstimatedHansenTableTest against the structure estimator (Mathieu 2018)

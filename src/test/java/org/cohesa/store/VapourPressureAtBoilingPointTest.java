@@ -254,4 +254,57 @@ class VapourPressureAtBoilingPointTest {
                 errors.size(), 100 * median, 100 * p90, 100 * errors.get(errors.size() - 1));
         assertTrue(median < 0.20 && p90 < 0.70, "median " + median + ", p90 " + p90);
     }
+
+    @Test
+    void theEstimateOnStructureEstimatedHansenParametersIsMeasuredToo() {
+        // estimate-clapeyron-structure-hvap (SOURCES.md): the same Clausius–Clapeyron estimate, for solvents whose Hansen
+        // parameters are themselves estimated from the structure (Mathieu, ACS Omega 3 (2018) 17049). Measured by
+        // running the whole chain — structure estimate of δD/δP/δH from the SMILES, then the vapour-pressure estimate —
+        // on the bundled solvents of the applied families that have a published wide-range correlation valid at 25 °C.
+        double rgas = 8.314462618;
+        Double ratio = null;
+        java.util.Set<String> families = new java.util.HashSet<>();
+        List<String> bad = new ArrayList<>();
+        for (Solvent s : solvents) {
+            VapourCorrelation c = s.vapourPressure();
+            if (c != null && ("estimate-clapeyron-hansen-hvap".equals(c.source()) || "estimate-clapeyron-structure-hvap".equals(c.source()))) {
+                var e = (org.cohesa.core.solvent.ClapeyronEstimate) c;
+                double h298 = e.hvapJPerMol() + e.dCpJPerMolK() * (298.15 - e.anchorK());
+                ratio = h298 / e.hvapJPerMol();
+                families.add(s.family());
+                boolean structural = "estimate-structure-mathieu-2018".equals(s.sources().get("hsp"));
+                if (structural != "estimate-clapeyron-structure-hvap".equals(c.source())) {
+                    bad.add(s.name() + ": vapour-pressure key " + c.source() + " does not match its Hansen source " + s.sources().get("hsp"));
+                }
+            }
+        }
+        assertTrue(ratio != null && bad.isEmpty(), String.join("\n", bad));
+        List<Double> errors = new ArrayList<>();
+        for (Solvent s : solvents) {
+            VapourCorrelation c = s.vapourPressure();
+            if (c == null || s.smiles() == null || s.boilingPointC() == null || s.effectiveMolarVolume() == null || !families.contains(s.family())
+                    || !java.util.Set.of("mcgarry-1983-wagner", "vdi-2010-wagner", "perry-2008-dippr101", "poling-2000-wagner",
+                    "poling-2000-antoine").contains(c.source()) || !c.isValidAt(298.15, 0)) {
+                continue;
+            }
+            var e = org.cohesa.core.structure.StructureEstimator.estimate(
+                    org.cohesa.core.structure.StructureParser.parse("smiles", s.smiles()), org.cohesa.core.structure.MeasuredProperties.NONE);
+            if (!e.hasHansen()) {
+                continue;
+            }
+            double d2 = Math.pow(e.dD().value(), 2) + Math.pow(e.dP().value(), 2) + Math.pow(e.dH().value(), 2);
+            double tb = s.boilingPointC() + 273.15;
+            double h298 = d2 * s.effectiveMolarVolume() + rgas * 298.15;
+            double htb = h298 / ratio;
+            var est = new org.cohesa.core.solvent.ClapeyronEstimate(tb, VapourPressure.ATMOSPHERE_PA, htb, (h298 - htb) / (298.15 - tb), null, null, "test");
+            errors.add(Math.abs(est.pressurePa(298.15) / c.pressurePa(298.15) - 1));
+        }
+        java.util.Collections.sort(errors);
+        assertTrue(errors.size() >= 40, "only " + errors.size());
+        double median = errors.get(errors.size() / 2);
+        double p90 = errors.get((int) Math.floor(0.9 * (errors.size() - 1)));
+        System.out.printf(Locale.ROOT, "Estimate on structure-estimated HSP at 25 °C, %d solvents: median %.1f %% p90 %.1f %% max %.0f %%%n",
+                errors.size(), 100 * median, 100 * p90, 100 * errors.get(errors.size() - 1));
+        assertTrue(median < 0.35 && p90 < 0.90, "median " + median + ", p90 " + p90);
+    }
 }
