@@ -124,7 +124,19 @@ public final class Migrations {
                     "CREATE TRIGGER record_event_append_only_delete BEFORE DELETE ON record_event"
                             + " BEGIN SELECT RAISE(ABORT, 'substitution record events are append-only'); END",
                     "ALTER TABLE record_chain_head ADD COLUMN mac TEXT",
-                    "ALTER TABLE record_chain_head ADD COLUMN key_id TEXT")));
+                    "ALTER TABLE record_chain_head ADD COLUMN key_id TEXT")),
+            new Migration(7, "substitution cases of the desktop workbench: one row a case, its limits, candidates and checks as JSON",
+                    List.of(
+                    "CREATE TABLE substitution_case ("
+                            + " id INTEGER PRIMARY KEY AUTOINCREMENT,"
+                            + " title TEXT NOT NULL CHECK (length(title) BETWEEN 1 AND 200),"
+                            + " kind TEXT NOT NULL CHECK (kind IN ('replace', 'find')),"
+                            + " replaced TEXT NOT NULL, process TEXT NOT NULL,"
+                            + " material_name TEXT, material_source TEXT,"
+                            + " dD REAL CHECK (dD >= 0), dP REAL CHECK (dP >= 0), dH REAL CHECK (dH >= 0), r0 REAL CHECK (r0 > 0),"
+                            + " limits TEXT NOT NULL, found TEXT NOT NULL, chosen TEXT NOT NULL,"
+                            + " record_id INTEGER CHECK (record_id > 0),"
+                            + " created_at TEXT NOT NULL, updated_at TEXT NOT NULL)")));
 
     private Migrations() {
     }
