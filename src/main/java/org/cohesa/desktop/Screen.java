@@ -2,11 +2,14 @@ package org.cohesa.desktop;
 
 import java.util.Locale;
 
-/** The workbench's screens, in tab order; {@code key} is the name used by {@code --screen=} and the settings. */
+/** The workbench's screens: the case list, the panes of a case's steps, then the reference screens; {@code key} is the name used by {@code --screen=} and the settings. */
 public enum Screen {
+    CASES("cases", "Cases"),
+    TARGET("target", "Material"),
+    BLENDS("blends", "Limits and candidates"),
+    CHECKS("checks", "Checks"),
+    RECORD("record", "Record"),
     LIBRARY("library", "Library"),
-    TARGET("target", "Target"),
-    BLENDS("blends", "Blend design"),
     DRYING("drying", "Drying"),
     SPACE("space", "Parameter space"),
     RECORDS("register", "Register");

@@ -15,8 +15,6 @@ import javafx.scene.control.MenuBar;
 import javafx.scene.control.MenuItem;
 import javafx.scene.control.ProgressBar;
 import javafx.scene.control.SeparatorMenuItem;
-import javafx.scene.control.Tab;
-import javafx.scene.control.TabPane;
 import javafx.scene.input.KeyCombination;
 import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.HBox;
@@ -39,6 +37,12 @@ import org.cohesa.desktop.space.SpaceModel;
 import org.cohesa.desktop.space.SpaceView;
 import org.cohesa.desktop.target.TargetModel;
 import org.cohesa.desktop.target.TargetView;
+import org.cohesa.desktop.cases.CaseModel;
+import org.cohesa.desktop.cases.CaseStrip;
+import org.cohesa.desktop.cases.CasesView;
+import org.cohesa.desktop.cases.ChecksView;
+import org.cohesa.desktop.cases.RecordStepView;
+import java.util.List;
 import org.cohesa.core.hsp.SolubilitySphere;
 
 /**
@@ -53,8 +57,12 @@ public final class Workbench {
 
     private final Session session;
     private final BorderPane root = new BorderPane();
-    private final TabPane tabs = new TabPane();
-    private final Map<Screen, Tab> tabByScreen = new EnumMap<>(Screen.class);
+    private final javafx.scene.layout.StackPane deck = new javafx.scene.layout.StackPane();
+    private final Map<Screen, Node> paneByScreen = new EnumMap<>(Screen.class);
+    private Screen showing = Screen.CASES;
+    private final CaseModel caseModel;
+    private final CaseStrip strip;
+    private final BlendView blendView;
     private final LibraryModel libraryModel;
     private final LibraryView libraryView;
     private final TargetView targetView;
@@ -75,19 +83,38 @@ public final class Workbench {
         targetView = new TargetView(new TargetModel(session));
         spaceModel = new SpaceModel(session);
         spaceView = new SpaceView(spaceModel, antialiasing);
-        addScreen(Screen.LIBRARY, libraryView.node());
-        addScreen(Screen.TARGET, targetView.node());
         dryingModel = new DryingModel(session);
         blendModel = new BlendModel(session);
-        addScreen(Screen.BLENDS, new BlendView(blendModel, this::openDrying).node());
+        recordsModel = new RecordsModel(session);
+        caseModel = new CaseModel(session, blendModel, recordsModel, java.time.Clock.systemUTC());
+        blendView = new BlendView(blendModel, this::openDrying);
+        blendView.onChoose(rows -> {
+            try {
+                caseModel.choose(rows);
+            } catch (RuntimeException ex) {
+                session.jobs().complain(org.cohesa.desktop.common.ErrorText.of(ex));
+            }
+        });
+        addScreen(Screen.CASES, new CasesView(caseModel, () -> show(Screen.TARGET)).node());
+        addScreen(Screen.TARGET, targetView.node());
+        addScreen(Screen.BLENDS, blendView.node());
+        addScreen(Screen.CHECKS, new ChecksView(caseModel, this::openDrying).node());
+        addScreen(Screen.RECORD, new RecordStepView(caseModel, () -> show(Screen.RECORDS)).node());
+        addScreen(Screen.LIBRARY, libraryView.node());
         addScreen(Screen.DRYING, new DryingView(dryingModel).node());
         addScreen(Screen.SPACE, spaceView.node());
-        recordsModel = new RecordsModel(session);
         addScreen(Screen.RECORDS, new RecordsView(recordsModel).node());
-        tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
-        tabs.setId("screens");
-        root.setTop(menus());
-        root.setCenter(new javafx.scene.layout.StackPane(tabs, startOverlay));
+        deck.setId("screens");
+        strip = new CaseStrip(caseModel, this::showStep, () -> {
+            caseModel.refreshList(null);
+            show(Screen.CASES);
+        }, List.of(new CaseStrip.Reference("Library", "ref-library", () -> show(Screen.LIBRARY)),
+                new CaseStrip.Reference("Space", "ref-space", () -> show(Screen.SPACE)),
+                new CaseStrip.Reference("Drying", "ref-drying", () -> show(Screen.DRYING)),
+                new CaseStrip.Reference("Register", "ref-register", () -> show(Screen.RECORDS))));
+        root.setTop(new VBox(menus(), strip.node()));
+        root.setCenter(new javafx.scene.layout.StackPane(deck, startOverlay));
+        show(Screen.CASES);
         root.setBottom(statusBar());
     }
 
@@ -138,6 +165,28 @@ public final class Workbench {
         return libraryModel;
     }
 
+    public CaseModel caseModel() {
+        return caseModel;
+    }
+
+    public CaseStrip caseStrip() {
+        return strip;
+    }
+
+    public BlendView blendView() {
+        return blendView;
+    }
+
+    /** Shows the pane of a case's step. */
+    public void showStep(org.cohesa.core.cases.CaseStep step) {
+        show(switch (step) {
+            case MATERIAL -> Screen.TARGET;
+            case LIMITS, CANDIDATES -> Screen.BLENDS;
+            case CHECKS -> Screen.CHECKS;
+            case RECORD -> Screen.RECORD;
+        });
+    }
+
     public TargetView targetView() {
         return targetView;
     }
@@ -158,7 +207,7 @@ public final class Workbench {
                 then.run();
             }
         };
-        libraryModel.reload(() -> recordsModel.reload(done));
+        libraryModel.reload(() -> recordsModel.reload(() -> caseModel.refreshList(done)));
         // a failed load must not leave the cover up: the status bar then says why
         session.jobs().runningProperty().addListener(new javafx.beans.value.ChangeListener<>() {
             @Override
@@ -196,15 +245,25 @@ public final class Workbench {
     }
 
     public void show(Screen s) {
-        Tab t = tabByScreen.get(s);
-        if (t != null) {
-            tabs.getSelectionModel().select(t);
+        Node n = paneByScreen.get(s);
+        if (n == null) {
+            return;
+        }
+        paneByScreen.forEach((k, v) -> v.setVisible(k == s));
+        showing = s;
+        if (strip != null) {
+            strip.showing(switch (s) {
+                case TARGET -> org.cohesa.core.cases.CaseStep.MATERIAL;
+                case BLENDS -> org.cohesa.core.cases.CaseStep.CANDIDATES;
+                case CHECKS -> org.cohesa.core.cases.CaseStep.CHECKS;
+                case RECORD -> org.cohesa.core.cases.CaseStep.RECORD;
+                default -> null;
+            });
         }
     }
 
     public Screen currentScreen() {
-        Tab t = tabs.getSelectionModel().getSelectedItem();
-        return tabByScreen.entrySet().stream().filter(e -> e.getValue() == t).map(Map.Entry::getKey).findFirst().orElse(Screen.LIBRARY);
+        return showing;
     }
 
     /** Restores the screen, plot settings and target remembered from the last run. */
@@ -224,7 +283,7 @@ public final class Workbench {
             }
         }
         Screen screen = Screen.byKey(s.screen);
-        show(screen == null ? Screen.LIBRARY : screen);
+        show(screen == null ? Screen.CASES : screen);
     }
 
     /** Copies the current screen, plot settings and target into {@code s}. */
@@ -244,10 +303,9 @@ public final class Workbench {
     }
 
     private void addScreen(Screen s, Node content) {
-        Tab t = new Tab(s.title(), content);
-        t.setId("tab-" + s.key());
-        tabs.getTabs().add(t);
-        tabByScreen.put(s, t);
+        content.setVisible(false);
+        deck.getChildren().add(content);
+        paneByScreen.put(s, content);
     }
 
     private MenuBar menus() {
@@ -257,7 +315,7 @@ public final class Workbench {
         file.getItems().addAll(reload, new SeparatorMenuItem(), quit);
         Menu view = new Menu("_View");
         int i = 1;
-        for (Screen s : tabByScreen.keySet()) {
+        for (Screen s : paneByScreen.keySet()) {
             view.getItems().add(item("_" + i + " " + s.title(), "Shortcut+" + i, e -> show(s)));
             i++;
         }
@@ -265,7 +323,7 @@ public final class Workbench {
         help.getItems().addAll(
                 item("_Safety notice", null, e -> Dialogs.message(root, "Safety notice", SAFETY_NOTICE)),
                 item("_Keyboard", null, e -> Dialogs.message(root, "Keyboard",
-                        "Ctrl+1…" + tabByScreen.size() + ": screens · Ctrl+C: copy the selected rows · F5: reload the library\n"
+                        "Ctrl+1…" + paneByScreen.size() + ": the case list, the steps, the reference screens · Ctrl+C: copy the selected rows · F5: reload the library\n"
                                 + "Alt + underlined letter: buttons and fields\n"
                                 + "3D view: arrow keys rotate, + and − zoom, R resets; drag rotates, the wheel zooms, "
                                 + "right- or shift-drag pans")),

@@ -20,6 +20,11 @@ import org.cohesa.core.blend.BlendSuggestion;
 import org.cohesa.core.blend.CancellationToken;
 import org.cohesa.core.blend.PhaseCheck;
 import org.cohesa.core.blend.RankBy;
+import org.cohesa.core.blend.ReactiveFlag;
+import org.cohesa.core.blend.WaterCheck;
+import org.cohesa.core.activity.WaterMiscibility;
+import org.cohesa.core.activity.WaterSolubilityTable;
+import org.cohesa.store.WaterMiscibilityCsv;
 import org.cohesa.core.safety.SafetyProfile;
 import org.cohesa.core.safety.SafetyProfiler;
 import org.cohesa.core.solvent.BlendComponent;
@@ -58,16 +63,39 @@ public final class BlendModel {
     public final StringProperty maxCost = new SimpleStringProperty("");
     public final StringProperty redLimit = new SimpleStringProperty("0.8"); // as the command line: a margin of 0.2 from the surface
     public final StringProperty temperatureC = new SimpleStringProperty("25");
+    /** Only solvents of these families (any of a solvent's families counts), "a; b". */
+    public final StringProperty families = new SimpleStringProperty("");
+    /** Never solvents of these families (any of a solvent's families counts), "a; b". */
+    public final StringProperty excludeFamilies = new SimpleStringProperty("");
+    /** Process-suitability flags to leave out (reactive solvents). */
+    public final java.util.Map<ReactiveFlag, BooleanProperty> excludeReactive = new java.util.EnumMap<>(ReactiveFlag.class);
+    /** How the blend must behave with water: {@link #WATER_ANY}, {@link #WATER_SEPARATES} or {@link #WATER_MIXES}. */
+    public final ObjectProperty<String> withWater = new SimpleObjectProperty<>(WATER_ANY);
+    /** Least computed flash point of the blend itself, °C (components may be lower). */
+    public final StringProperty minBlendFlash = new SimpleStringProperty("");
+    /** Let ICH Q3C class 1 solvents take part (left out by default, as on the command line). */
+    public final BooleanProperty allowIchClass1 = new SimpleBooleanProperty(false);
+    private final StringProperty searchNote = new SimpleStringProperty("");
+    private final ObservableList<String> leftOutBySafety = FXCollections.observableArrayList();
     private final ObservableList<Row> rows = FXCollections.observableArrayList();
     private final ObservableList<Row> compared = FXCollections.observableArrayList();
     private CancellationToken cancel;
 
+    public static final String WATER_ANY = "no demand";
+    public static final String WATER_SEPARATES = "separates from water (extraction)";
+    public static final String WATER_MIXES = "mixes with water (waterborne)";
+
     public BlendModel(Session session) {
         this.session = session;
+        for (ReactiveFlag f : ReactiveFlag.values()) {
+            excludeReactive.put(f, new SimpleBooleanProperty(false));
+        }
         // suggestions belong to the target they were searched for: a new target (picked, fitted, typed) clears them
         session.targetProperty().addListener((o, a, t) -> {
             rows.clear();
             compared.clear();
+            searchNote.set("");
+            leftOutBySafety.clear();
         });
         session.jobs().runningProperty().addListener((o, a, running) -> {
             if (!running && cancel != null) {
@@ -89,6 +117,100 @@ public final class BlendModel {
         return compared;
     }
 
+    /** What the last search searched and left out, in one paragraph (empty before a search). */
+    public StringProperty searchNoteProperty() {
+        return searchNote;
+    }
+
+    /** What the safety-first defaults (no CMR, no ICH class 1) left out of the last search, one line per default. */
+    public ObservableList<String> leftOutBySafety() {
+        return leftOutBySafety;
+    }
+
+    /** The form as field key → text, as a case stores it. */
+    public java.util.Map<String, String> limits() {
+        java.util.Map<String, String> m = new java.util.LinkedHashMap<>();
+        m.put("max-components", String.valueOf(maxComponents.get()));
+        m.put("top", String.valueOf(top.get()));
+        m.put("rank-by", rankBy.get().name());
+        m.put("include", include.get());
+        m.put("exclude", exclude.get());
+        m.put("families", families.get());
+        m.put("exclude-families", excludeFamilies.get());
+        m.put("fixed", fixed.get());
+        m.put("min-fraction", minFractionPercent.get());
+        m.put("bp-min", boilingMin.get());
+        m.put("bp-max", boilingMax.get());
+        m.put("min-flash", minFlashPoint.get());
+        m.put("min-blend-flash", minBlendFlash.get());
+        m.put("ich", maxIchClass.get());
+        m.put("allow-ich-class-1", String.valueOf(allowIchClass1.get()));
+        m.put("no-cmr", String.valueOf(noCmr.get()));
+        m.put("max-cost", maxCost.get());
+        m.put("red-limit", redLimit.get());
+        m.put("temperature", temperatureC.get());
+        m.put("with-water", withWater.get());
+        m.put("exclude-reactive", excludeReactive.entrySet().stream().filter(e -> e.getValue().get()).map(e -> e.getKey().word())
+                .collect(java.util.stream.Collectors.joining(",")));
+        return m;
+    }
+
+    /** Puts stored limits back into the form; keys it does not know are ignored, missing ones keep the form's value. */
+    public void applyLimits(java.util.Map<String, String> m) {
+        java.util.function.BiConsumer<String, StringProperty> text = (k, p) -> {
+            if (m.containsKey(k)) {
+                p.set(m.get(k) == null ? "" : m.get(k));
+            }
+        };
+        integer(m.get("max-components"), 1, 4, maxComponents);
+        integer(m.get("top"), 1, 100, top);
+        if (m.get("rank-by") != null) {
+            java.util.Arrays.stream(RankBy.values()).filter(r -> r.name().equals(m.get("rank-by"))).findFirst().ifPresent(rankBy::set);
+        }
+        text.accept("include", include);
+        text.accept("exclude", exclude);
+        text.accept("families", families);
+        text.accept("exclude-families", excludeFamilies);
+        text.accept("fixed", fixed);
+        text.accept("min-fraction", minFractionPercent);
+        text.accept("bp-min", boilingMin);
+        text.accept("bp-max", boilingMax);
+        text.accept("min-flash", minFlashPoint);
+        text.accept("min-blend-flash", minBlendFlash);
+        text.accept("max-cost", maxCost);
+        text.accept("red-limit", redLimit);
+        text.accept("temperature", temperatureC);
+        if (m.get("ich") != null) {
+            maxIchClass.set(m.get("ich"));
+        }
+        if (m.get("with-water") != null) {
+            withWater.set(m.get("with-water"));
+        }
+        if (m.get("allow-ich-class-1") != null) {
+            allowIchClass1.set(Boolean.parseBoolean(m.get("allow-ich-class-1")));
+        }
+        if (m.get("no-cmr") != null) {
+            noCmr.set(Boolean.parseBoolean(m.get("no-cmr")));
+        }
+        if (m.get("exclude-reactive") != null) {
+            java.util.Set<String> on = java.util.Set.of(m.get("exclude-reactive").split(","));
+            excludeReactive.forEach((f, p) -> p.set(on.contains(f.word())));
+        }
+    }
+
+    private static void integer(String text, int lo, int hi, ObjectProperty<Integer> p) {
+        try {
+            if (text != null) {
+                int v = Integer.parseInt(text.strip());
+                if (v >= lo && v <= hi) {
+                    p.set(v);
+                }
+            }
+        } catch (NumberFormatException e) {
+            // a damaged stored value keeps the form's own
+        }
+    }
+
     /** Runs the search against the current target. @throws InvalidInputException naming the first bad field */
     public void search(Runnable then) {
         TargetChoice target = session.target();
@@ -106,6 +228,8 @@ public final class BlendModel {
         BlendDesigner.Request req = new BlendDesigner.Request(target.sphere(), c, k, top.get(), rankBy.get(), limit, false, kelvin);
         CancellationToken token = new CancellationToken();
         cancel = token;
+        Object[] notes = new Object[2];
+        WaterCheck water = waterCheck(lib, c.more().withWater());
         session.jobs().run("Searching blends", p -> {
             Thread watcher = new Thread(() -> {
                 while (!token.isCancelled()) {
@@ -122,9 +246,11 @@ public final class BlendModel {
             watcher.setDaemon(true);
             watcher.start();
             try {
-                BlendDesigner.Result r = BlendDesigner.design(lib.all(), req, miscibility(),
+                BlendDesigner.Result r = BlendDesigner.design(lib.all(), req, miscibility(), water,
                         (done, total) -> p.update(total == 0 ? -1 : 0.9 * done / (double) total, null), token);
                 List<Row> out = new ArrayList<>();
+                notes[0] = SearchNotes.summary(r, c);
+                notes[1] = SearchNotes.safetyDefaults(r.pool());
                 int i = 1;
                 for (BlendSuggestion s : r.suggestions()) {
                     if (p.isCancelled()) {
@@ -145,6 +271,10 @@ public final class BlendModel {
                 token.cancel();
             }
         }, out -> {
+            searchNote.set((String) notes[0]);
+            @SuppressWarnings("unchecked")
+            List<String> defaults = (List<String>) notes[1];
+            leftOutBySafety.setAll(defaults);
             rows.setAll(out);
             compared.clear();
             session.jobs().say(out.size() + " candidates for " + target.name() + (out.isEmpty() ? ": loosen the constraints." : "."));
@@ -190,13 +320,63 @@ public final class BlendModel {
             throw new InvalidInputException("minimum fraction (%)", minFractionPercent.get(), "must lie between 0 and 100");
         }
         Integer ich = "any".equals(maxIchClass.get()) || maxIchClass.get() == null ? null : Integer.valueOf(maxIchClass.get().substring(0, 1));
+        Set<String> fams = families(lib, "families", families.get());
+        Set<String> notFams = families(lib, "exclude families", excludeFamilies.get());
+        Set<ReactiveFlag> reactive = java.util.EnumSet.noneOf(ReactiveFlag.class);
+        excludeReactive.forEach((flag, on) -> {
+            if (on.get()) {
+                reactive.add(flag);
+            }
+        });
+        WaterCheck.Need water = WATER_SEPARATES.equals(withWater.get()) ? WaterCheck.Need.IMMISCIBLE
+                : WATER_MIXES.equals(withWater.get()) ? WaterCheck.Need.MISCIBLE : null;
         try {
-            return new BlendConstraints(inc, exc, Set.of(), Set.of(), fix, minF, 1.0, java.util.Map.of(),
+            return new BlendConstraints(inc, exc, fams, notFams, fix, minF, 1.0, java.util.Map.of(),
                     optional("boiling point min.", boilingMin.get()), optional("boiling point max.", boilingMax.get()),
-                    optional("minimum flash point", minFlashPoint.get()), ich, noCmr.get(), optional("maximum cost", maxCost.get()));
+                    optional("minimum flash point", minFlashPoint.get()), ich, noCmr.get(), optional("maximum cost", maxCost.get()))
+                    .with(new BlendConstraints.More(!allowIchClass1.get(), false, List.of(), reactive,
+                            optional("minimum blend flash point", minBlendFlash.get()), null, null, water));
         } catch (IllegalArgumentException e) {
             throw e instanceof InvalidInputException ? e : new InvalidInputException("constraints", "", e.getMessage());
         }
+    }
+
+    /** "ester; alcohol" → the family keys, each checked against the families the library has. */
+    static Set<String> families(SolventLibrary lib, String field, String text) {
+        if (text == null || text.isBlank()) {
+            return Set.of();
+        }
+        java.util.Set<String> known = new java.util.TreeSet<>();
+        lib.all().forEach(s -> s.families().forEach(f -> known.add(f.toLowerCase(java.util.Locale.ROOT))));
+        java.util.Set<String> out = new java.util.LinkedHashSet<>();
+        for (String part : text.split("[;,]")) {
+            String k = part.strip().toLowerCase(java.util.Locale.ROOT);
+            if (k.isEmpty()) {
+                continue;
+            }
+            if (!known.contains(k)) {
+                throw new InvalidInputException(field, part.strip(), "no solvent of that family in the library; families: " + String.join(", ", known));
+            }
+            out.add(k);
+        }
+        return out;
+    }
+
+    /** The judgement for a water demand: published mutual solubilities with water first, the activity model elsewhere. */
+    static WaterCheck waterCheck(SolventLibrary lib, WaterCheck.Need need) {
+        if (need == null) {
+            return WaterCheck.NONE;
+        }
+        Solvent water = lib.all().stream().filter(WaterMiscibility::isWater).findFirst()
+                .orElseThrow(() -> new InvalidInputException("with water", need.word(), "the library has no water entry to judge with"));
+        WaterSolubilityTable data = WaterMiscibilityCsv.bundled();
+        return (components, fractions, kelvin) -> {
+            try {
+                return WaterMiscibility.withWater(components, fractions, water, kelvin, data);
+            } catch (IllegalArgumentException e) {
+                return null; // not judged (missing data): does not meet the demand
+            }
+        };
     }
 
     private static List<Solvent> names(SolventLibrary lib, String field, String text) {

@@ -113,13 +113,60 @@ public final class BlendView {
         right.getTabs().addAll(new Tab("Safety profile", profile), new Tab("Side by side", comparison));
         right.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         right.getTabs().get(1).setId("blend-compare-tab");
-        SplitPane split = new SplitPane(table, right);
+        Label note = new Label();
+        note.setId("blend-search-note");
+        note.setWrapText(true);
+        note.getStyleClass().add("hint");
+        note.textProperty().bind(model.searchNoteProperty());
+        note.visibleProperty().bind(model.searchNoteProperty().isNotEmpty());
+        note.managedProperty().bind(note.visibleProperty());
+        Label defaults = new Label();
+        defaults.setId("blend-left-out");
+        defaults.setWrapText(true);
+        defaults.getStyleClass().add("left-out");
+        Runnable showDefaults = () -> defaults.setText(model.leftOutBySafety().isEmpty() ? ""
+                : "Left out by the safety defaults:\n" + model.leftOutBySafety().stream().map(x -> "• " + x).collect(Collectors.joining("\n")));
+        model.leftOutBySafety().addListener((javafx.collections.ListChangeListener<String>) ch -> showDefaults.run());
+        defaults.visibleProperty().bind(javafx.beans.binding.Bindings.isNotEmpty(model.leftOutBySafety()));
+        defaults.managedProperty().bind(defaults.visibleProperty());
+        Button choose = new Button("C_hoose for checks");
+        choose.setId("blend-choose");
+        choose.disableProperty().bind(table.getSelectionModel().selectedItemProperty().isNull());
+        choose.setOnAction(e -> {
+            if (onChoose != null) {
+                onChoose.accept(List.copyOf(table.getSelectionModel().getSelectedItems()));
+            }
+        });
+        Label chooseHint = new Label("Select one or more cards (Ctrl+click) and take them to the checks.");
+        chooseHint.getStyleClass().add("hint");
+        chooseHint.setWrapText(true);
+        HBox chooseBar = new HBox(10, choose, chooseHint);
+        chooseBar.setAlignment(Pos.CENTER_LEFT);
+        VBox cardsBox = new VBox(6, chooseBar, note, defaults, table);
+        cardsBox.setPadding(new Insets(6, 0, 0, 6));
+        javafx.scene.layout.VBox.setVgrow(table, javafx.scene.layout.Priority.ALWAYS);
+        SplitPane split = new SplitPane(cardsBox, right);
         split.setDividerPositions(0.66);
         root.setCenter(split);
     }
 
     public Node node() {
         return root;
+    }
+
+    private Consumer<List<BlendModel.Row>> onChoose;
+
+    /** What "Choose for checks" does with the selected candidates (the case takes them). */
+    public void onChoose(Consumer<List<BlendModel.Row>> action) {
+        this.onChoose = action;
+    }
+
+    /** Adds a tab to the right-hand panel, first (the parameter panel of the case). */
+    public void addPanel(String title, Node content, String id) {
+        Tab t = new Tab(title, content);
+        t.setId(id);
+        right.getTabs().add(0, t);
+        right.getSelectionModel().select(0);
     }
 
     private Node form() {
@@ -156,13 +203,37 @@ public final class BlendView {
         g.addRow(row++, new Label("Rank by"), rank);
         g.addRow(row++, new Label("Include only (a;b)"), field(model.include, "blend-include"));
         g.addRow(row++, new Label("Exclude (a;b)"), field(model.exclude, "blend-exclude"));
+        g.addRow(row++, new Label("Families only (a;b)"), field(model.families, "blend-families"));
+        g.addRow(row++, new Label("Exclude families (a;b)"), field(model.excludeFamilies, "blend-exclude-families"));
         g.addRow(row++, new Label("Fixed (NAME:FRACTION)"), field(model.fixed, "blend-fixed"));
         g.addRow(row++, new Label("Minimum fraction (%)"), field(model.minFractionPercent, "blend-min-fraction"));
         g.addRow(row++, new Label("Boiling point min. (°C)"), field(model.boilingMin, "blend-bp-min"));
         g.addRow(row++, new Label("Boiling point max. (°C)"), field(model.boilingMax, "blend-bp-max"));
         g.addRow(row++, new Label("Minimum flash point (°C)"), field(model.minFlashPoint, "blend-min-flash"));
+        g.addRow(row++, new Label("Minimum blend flash point (°C)"), field(model.minBlendFlash, "blend-min-blend-flash"));
         g.addRow(row++, new Label("ICH Q3C classes"), ich);
+        CheckBox ich1 = new CheckBox("Allow ICH class 1 (to be avoided)");
+        ich1.setId("blend-allow-ich1");
+        ich1.selectedProperty().bindBidirectional(model.allowIchClass1);
+        g.add(ich1, 0, row++, 2, 1);
+        cmr.setId("blend-no-cmr");
         g.add(cmr, 0, row++, 2, 1);
+        ComboBox<String> water = new ComboBox<>();
+        water.setId("blend-with-water");
+        water.getItems().setAll(BlendModel.WATER_ANY, BlendModel.WATER_SEPARATES, BlendModel.WATER_MIXES);
+        water.valueProperty().bindBidirectional(model.withWater);
+        g.addRow(row++, new Label("With water"), water);
+        Label reactiveTitle = new Label("Leave out reactive solvents");
+        g.add(reactiveTitle, 0, row++, 2, 1);
+        javafx.scene.layout.FlowPane reactive = new javafx.scene.layout.FlowPane(10, 4);
+        reactive.setPrefWrapLength(330);
+        for (var e : model.excludeReactive.entrySet()) {
+            CheckBox box = new CheckBox(e.getKey().label());
+            box.setId("blend-reactive-" + e.getKey().word());
+            box.selectedProperty().bindBidirectional(e.getValue());
+            reactive.getChildren().add(box);
+        }
+        g.add(reactive, 0, row++, 2, 1);
         g.addRow(row++, new Label("Maximum cost per litre"), field(model.maxCost, "blend-max-cost"));
         g.addRow(row++, new Label("RED limit"), field(model.redLimit, "blend-red-limit"));
         g.addRow(row++, new Label("Temperature (°C)"), field(model.temperatureC, "blend-temperature"));
@@ -321,7 +392,7 @@ public final class BlendView {
         rows.add(row("Cautions", sel, r -> r.safety() == null ? "" : String.valueOf(SafetyText.cautions(r.safety()).size() - 1)));
         rows.add(row("Phases", sel, BlendView::phaseText));
         comparison.getItems().setAll(rows);
-        right.getSelectionModel().select(1);
+        right.getTabs().stream().filter(t -> "blend-compare-tab".equals(t.getId())).findFirst().ifPresent(t -> right.getSelectionModel().select(t));
     }
 
     private static List<String> row(String label, List<BlendModel.Row> sel, java.util.function.Function<BlendModel.Row, String> f) {

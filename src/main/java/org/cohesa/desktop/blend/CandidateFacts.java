@@ -14,19 +14,19 @@ import org.cohesa.desktop.common.Numbers;
  * What a candidate card says, as text: the facts a formulator reads first (flash point and GHS category, the worst
  * ICH Q3C class with its meaning, health badges, cost), each unknown said as "unknown" and never left blank.
  */
-final class CandidateFacts {
+public final class CandidateFacts {
 
     /** How serious a badge is; shown by word and by a colour-blind-safe fill. */
-    enum Severity { SEVERE, NOTABLE, INFO }
+    public enum Severity { SEVERE, NOTABLE, INFO }
 
-    record Badge(String text, Severity severity, String detail) {
+    public record Badge(String text, Severity severity, String detail) {
     }
 
     private CandidateFacts() {
     }
 
     /** "Flash point 12 °C · GHS category 2" (blend value when it could be computed; "unknown" otherwise). */
-    static String flash(SafetyProfile p, Blend b) {
+    public static String flash(SafetyProfile p, Blend b) {
         if (p == null) {
             return "Flash point unknown · GHS category unknown (no safety profile)";
         }
@@ -57,7 +57,7 @@ final class CandidateFacts {
      * The strictest ICH Q3C(R8) class among the components with the guideline's meaning of it
      * (ICH Q3C(R8), 2021, section 2: class 1 to be avoided, class 2 to be limited, class 3 low toxic potential).
      */
-    static String worstIch(Blend b) {
+    public static String worstIch(Blend b) {
         Integer worst = null;
         for (BlendComponent c : b.components()) {
             Integer k = c.solvent().ichClass();
@@ -78,7 +78,7 @@ final class CandidateFacts {
     }
 
     /** Health and handling badges: CMR effects first, then the serious single hazards, then watch-outs. */
-    static List<Badge> badges(SafetyProfile p, Blend b) {
+    public static List<Badge> badges(SafetyProfile p, Blend b) {
         List<Badge> out = new ArrayList<>();
         if (p == null) {
             Set<String> cmr = new LinkedHashSet<>();
@@ -120,7 +120,7 @@ final class CandidateFacts {
     }
 
     /** "Cost 3.10 per litre" when every component has a price, else "cost unknown" with how many lack one. */
-    static String cost(Blend b) {
+    public static String cost(Blend b) {
         double sum = 0;
         int missing = 0;
         for (BlendComponent c : b.components()) {
