@@ -28,11 +28,13 @@ public final class PostgresRegister implements RegisterDb, AutoCloseable {
     private final String location;
     private final Connection connection;
     private final String account;
+    private final String secretId;
 
-    private PostgresRegister(String location, Connection connection, String account) {
+    private PostgresRegister(String location, Connection connection, String account, String secretId) {
         this.location = location;
         this.connection = connection;
         this.account = account;
+        this.secretId = secretId;
     }
 
     /** True for text that names a PostgreSQL register. */
@@ -51,7 +53,12 @@ public final class PostgresRegister implements RegisterDb, AutoCloseable {
                 login = rs.getString(1);
             }
             PostgresMigrations.migrate(c);
-            return new PostgresRegister(t.shown(), c, login);
+            String secret;
+            try (Statement st = c.createStatement(); ResultSet rs = st.executeQuery("SELECT cohesa_register_key_id()")) {
+                rs.next();
+                secret = rs.getString(1);
+            }
+            return new PostgresRegister(t.shown(), c, login, secret);
         } catch (SQLException e) {
             throw new StoreException("cannot open the shared register " + t.shown() + ": " + oneLine(e), e);
         }
@@ -180,9 +187,33 @@ public final class PostgresRegister implements RegisterDb, AutoCloseable {
         return true;
     }
 
-    /** The register's own triggers on {@code record_event}, all of which must be enabled. */
+    /** The register's own triggers (on {@code record_event} and its head), all of which must be enabled. */
     static final List<String> GUARDS = List.of("record_event_append_only", "record_event_no_truncate", "record_event_own_account",
-            "record_event_four_eyes");
+            "record_event_four_eyes", "record_event_seal", "record_chain_head_seal");
+
+    @Override
+    public String serverSecretId() {
+        return secretId;
+    }
+
+    @Override
+    public org.cohesa.core.records.ChainSeal serverSeal(Connection c, org.cohesa.core.records.ChainHead head,
+                                                        org.cohesa.core.records.Anchor anchor) throws SQLException {
+        return ServerSeal.read(c, secretId, head, anchor);
+    }
+
+    @Override
+    public String serverAnchorMac(String content) {
+        return read(c -> {
+            try (java.sql.PreparedStatement ps = c.prepareStatement("SELECT cohesa_register_anchor_mac(?)")) {
+                ps.setString(1, content);
+                try (ResultSet rs = ps.executeQuery()) {
+                    rs.next();
+                    return rs.getString(1);
+                }
+            }
+        });
+    }
 
     @Override
     public void requireMayChangeRules(Connection c, String by) throws SQLException {
@@ -232,6 +263,67 @@ public final class PostgresRegister implements RegisterDb, AutoCloseable {
 
     /** The register's tables on PostgreSQL, by the same step numbers as the local schema ({@link Migrations}). */
     static final class PostgresMigrations {
+
+        /**
+         * Step 9: the server seals every event and the head itself, with a 32-byte secret in a table only the register's
+         * owner can read; writers never see it, and may only ask whether a seal is genuine. pgcrypto's hmac() computes the
+         * HMAC-SHA-256 (RFC 2104); without pgcrypto on the server, or on a register that already holds events sealed with a
+         * key file, no secret is created and the register stays sealed by key files.
+         */
+        static final List<String> SERVER_SECRET = List.of(
+                "DO $$ BEGIN IF EXISTS (SELECT 1 FROM pg_available_extensions WHERE name = 'pgcrypto') THEN"
+                        + " CREATE EXTENSION IF NOT EXISTS pgcrypto; END IF; END $$",
+                "CREATE TABLE cohesa_register_secret (singleton INTEGER PRIMARY KEY CHECK (singleton = 1), secret BYTEA NOT NULL,"
+                        + " key_id TEXT NOT NULL)",
+                "REVOKE ALL ON cohesa_register_secret FROM PUBLIC",
+                "CREATE FUNCTION cohesa_register_mac(msg text) RETURNS text LANGUAGE plpgsql STABLE SECURITY DEFINER"
+                        + " SET search_path FROM CURRENT AS $$ DECLARE s bytea; BEGIN"
+                        + " SELECT secret INTO s FROM cohesa_register_secret WHERE singleton = 1;"
+                        + " IF s IS NULL THEN RETURN NULL; END IF;"
+                        + " RETURN encode(hmac(convert_to(msg, 'UTF8'), s, 'sha256'), 'hex'); END $$",
+                "CREATE FUNCTION cohesa_register_seal_ok(msg text, mac text) RETURNS boolean LANGUAGE plpgsql STABLE SECURITY DEFINER"
+                        + " SET search_path FROM CURRENT AS $$ BEGIN RETURN COALESCE(mac = cohesa_register_mac(msg), false); END $$",
+                "CREATE FUNCTION cohesa_register_anchor_mac(content text) RETURNS text LANGUAGE plpgsql STABLE SECURITY DEFINER"
+                        + " SET search_path FROM CURRENT AS $$ BEGIN RETURN cohesa_register_mac('anchor:' || content); END $$",
+                "CREATE FUNCTION cohesa_register_key_id() RETURNS text LANGUAGE plpgsql STABLE SECURITY DEFINER"
+                        + " SET search_path FROM CURRENT AS $$ BEGIN RETURN (SELECT key_id FROM cohesa_register_secret WHERE singleton = 1); END $$",
+                // the secret's HMAC is never handed out: writers may only check a seal, seal an anchor, and read the key's id
+                "REVOKE ALL ON FUNCTION cohesa_register_mac(text), cohesa_register_seal_ok(text, text), cohesa_register_anchor_mac(text),"
+                        + " cohesa_register_key_id() FROM PUBLIC",
+                "GRANT EXECUTE ON FUNCTION cohesa_register_seal_ok(text, text), cohesa_register_anchor_mac(text), cohesa_register_key_id()"
+                        + " TO cohesa_register_writer",
+                // every event inserted is sealed by the server, whatever MAC the client sent
+                "CREATE FUNCTION record_event_seal() RETURNS trigger LANGUAGE plpgsql SECURITY DEFINER SET search_path FROM CURRENT AS $$"
+                        + " BEGIN IF EXISTS (SELECT 1 FROM cohesa_register_secret) THEN NEW.mac := cohesa_register_mac('event:' || NEW.hash);"
+                        + " END IF; RETURN NEW; END $$",
+                "CREATE TRIGGER record_event_seal BEFORE INSERT ON record_event FOR EACH ROW EXECUTE FUNCTION record_event_seal()",
+                // the head is sealed only as it moves on by one event to the newest one, so a login cannot get a seal for a
+                // head that hides events (a verbatim copy by the owner writes the whole head at once)
+                "CREATE FUNCTION record_chain_head_seal() RETURNS trigger LANGUAGE plpgsql SECURITY DEFINER SET search_path FROM CURRENT AS $$"
+                        + " DECLARE newest record; copying boolean; BEGIN"
+                        + " IF NOT EXISTS (SELECT 1 FROM cohesa_register_secret) THEN RETURN NEW; END IF;"
+                        + " IF TG_OP = 'INSERT' AND EXISTS (SELECT 1 FROM record_chain_head) THEN RETURN NEW; END IF;"
+                        + " copying := session_user = record_event_owner() AND current_setting('cohesa.copy', true) = 'on';"
+                        + " SELECT hash, record_id, seq INTO newest FROM record_event ORDER BY id DESC LIMIT 1;"
+                        + " IF NOT FOUND OR NEW.last_hash IS DISTINCT FROM newest.hash OR NEW.last_record_id <> newest.record_id"
+                        + "  OR NEW.last_seq <> newest.seq THEN"
+                        + "  RAISE EXCEPTION 'the register head must name the newest event'; END IF;"
+                        + " IF TG_OP = 'UPDATE' AND NOT copying AND (NEW.events <> OLD.events + 1 OR NEW.max_record_id < OLD.max_record_id) THEN"
+                        + "  RAISE EXCEPTION 'the register head moves on by one event at a time (% events, not %)', OLD.events + 1, NEW.events; END IF;"
+                        + " IF TG_OP = 'INSERT' AND NEW.events <> (SELECT count(*) FROM record_event) THEN"
+                        + "  RAISE EXCEPTION 'the register head must count every event'; END IF;"
+                        + " NEW.mac := cohesa_register_mac('head:' || NEW.events || ':' || NEW.last_hash || ':' || NEW.max_record_id);"
+                        + " NEW.key_id := (SELECT key_id FROM cohesa_register_secret WHERE singleton = 1);"
+                        + " RETURN NEW; END $$",
+                "CREATE TRIGGER record_chain_head_seal BEFORE INSERT OR UPDATE ON record_chain_head"
+                        + " FOR EACH ROW EXECUTE FUNCTION record_chain_head_seal()",
+                // a new register gets its secret now; one already sealed by a key file keeps that key
+                "DO $$ DECLARE s bytea; BEGIN"
+                        + " IF EXISTS (SELECT 1 FROM pg_extension WHERE extname = 'pgcrypto') AND NOT EXISTS (SELECT 1 FROM record_event) THEN"
+                        + "  s := gen_random_bytes(32);"
+                        + "  INSERT INTO cohesa_register_secret (singleton, secret, key_id) VALUES (1, s,"
+                        + "   substr(encode(digest('cohesa register key id:' || encode(s, 'hex'), 'sha256'), 'hex'), 1, 16));"
+                        + " END IF; END $$");
 
         /** Steps 4 and 6 of the local schema, in PostgreSQL's dialect; the solvent-library steps do not apply to a register. */
         static final List<Migration> ALL = List.of(
@@ -304,7 +396,9 @@ public final class PostgresRegister implements RegisterDb, AutoCloseable {
                                 + "  CASE NEW.kind WHEN 'approved' THEN 'approve it' ELSE 'review it' END; END IF;"
                                 + " RETURN NEW; END $$",
                         "CREATE TRIGGER record_event_four_eyes BEFORE INSERT ON record_event"
-                                + " FOR EACH ROW EXECUTE FUNCTION record_event_four_eyes()")));
+                                + " FOR EACH ROW EXECUTE FUNCTION record_event_four_eyes()")),
+                new Migration(9, "register: a chain secret held by the server (HMAC by pgcrypto, the key in a table only the owner reads)",
+                        SERVER_SECRET));
 
         private PostgresMigrations() {
         }

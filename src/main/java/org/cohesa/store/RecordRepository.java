@@ -19,6 +19,7 @@ import org.cohesa.core.records.Anchor;
 import org.cohesa.core.records.CanonicalJson;
 import org.cohesa.core.records.ChainHead;
 import org.cohesa.core.records.ChainReport;
+import org.cohesa.core.records.ChainSeal;
 import org.cohesa.core.records.ChainVerifier;
 import org.cohesa.core.records.EventKind;
 import org.cohesa.core.records.FourEyesRule;
@@ -80,6 +81,10 @@ public final class RecordRepository {
      * never sealed with two keys.
      */
     private RegisterKey writeKey(ChainHead head) {
+        if (register.serverSecretId() != null) {
+            // the server seals every event and the head itself (schema step 9); no key file is read or created
+            return null;
+        }
         Path file = keyFile();
         Optional<RegisterKey> existing = RegisterKeyFile.load("--key", file);
         if (existing.isEmpty() && head.keyId() != null) {
@@ -280,16 +285,20 @@ public final class RecordRepository {
     /** Every stored event in storage order, one at a time, from one snapshot; returns the head note of that snapshot. */
     public ChainHead forEachEvent(Consumer<RecordEvent> each) {
         return register.read(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT * FROM record_event ORDER BY id")) {
-                ps.setFetchSize(200);
-                try (ResultSet rs = ps.executeQuery()) {
-                    while (rs.next()) {
-                        each.accept(row(rs));
-                    }
-                }
-            }
+            streamEvents(c, each);
             return head(c);
         });
+    }
+
+    private static void streamEvents(Connection c, Consumer<RecordEvent> each) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT * FROM record_event ORDER BY id")) {
+            ps.setFetchSize(200);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    each.accept(row(rs));
+                }
+            }
+        }
     }
 
     /** Checks the whole register with the key file when it exists, without an anchor. */
@@ -304,9 +313,44 @@ public final class RecordRepository {
      * @param anchor a state kept elsewhere (null: none)
      */
     public ChainReport verify(RegisterKey key, Anchor anchor) {
-        ChainVerifier v = new ChainVerifier(key, anchor);
-        ChainHead head = forEachEvent(v::accept);
+        return register.read(c -> {
+            ChainHead head = head(c);
+            ChainSeal seal = register.serverSecretId() != null ? register.serverSeal(c, head, anchor) : key;
+            return check(c, head, seal, anchor);
+        });
+    }
+
+    /** Checks only what needs no secret (the SHA-256 chain, the head note, the status moves) and the anchor if given. */
+    public ChainReport verifyWithoutSeal(Anchor anchor) {
+        return register.read(c -> check(c, head(c), null, anchor));
+    }
+
+    private static ChainReport check(Connection c, ChainHead head, ChainSeal seal, Anchor anchor) throws SQLException {
+        ChainVerifier v = new ChainVerifier(seal, anchor);
+        streamEvents(c, v::accept);
         return v.finish(head);
+    }
+
+    /**
+     * The id of what seals this register: the server's secret when it holds one, else the key file's key (empty when
+     * there is none).
+     */
+    public Optional<String> sealId(RegisterKey fileKey) {
+        String server = register.serverSecretId();
+        return Optional.ofNullable(server != null ? server : fileKey == null ? null : fileKey.id());
+    }
+
+    /** True when the server, not a key file, seals this register. */
+    public boolean sealedByServer() {
+        return register.serverSecretId() != null;
+    }
+
+    /** The seal of an anchor's content line: by the server's secret, or the key file's key (null without either). */
+    public String anchorMac(String content, RegisterKey fileKey) {
+        if (register.serverSecretId() != null) {
+            return register.serverAnchorMac(content);
+        }
+        return fileKey == null ? null : fileKey.anchorMac(content);
     }
 
     /** The head note as stored. */
@@ -337,10 +381,12 @@ public final class RecordRepository {
                 }
             }
             register.beginVerbatimCopy(c);
+            // a register whose server holds the secret seals the copied events and head itself
+            RegisterKey sealWith = register.serverSecretId() != null ? null : key;
             ChainHead head = ChainHead.EMPTY;
             for (RecordEvent e : events) {
                 insert(c, e);
-                head = head.after(e, e.mac() == null ? null : key);
+                head = head.after(e, e.mac() == null ? null : sealWith);
             }
             writeHead(c, head);
             return (long) events.size();

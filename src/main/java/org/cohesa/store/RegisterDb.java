@@ -44,6 +44,26 @@ public interface RegisterDb {
     default void beginVerbatimCopy(java.sql.Connection c) throws java.sql.SQLException {
     }
 
+    /**
+     * The id of the secret the server holds to seal this register (schema step 9 on PostgreSQL), or null when the
+     * register is sealed with key files (every local register; a shared one that already held events sealed with a key
+     * file when the server secret arrived, or whose server lacks pgcrypto).
+     */
+    default String serverSecretId() {
+        return null;
+    }
+
+    /** The server's seal check for snapshot {@code c} (only when {@link #serverSecretId()} is not null). */
+    default org.cohesa.core.records.ChainSeal serverSeal(java.sql.Connection c, org.cohesa.core.records.ChainHead head,
+                                                         org.cohesa.core.records.Anchor anchor) throws java.sql.SQLException {
+        throw new UnsupportedOperationException("this register has no server-held secret");
+    }
+
+    /** The server's seal of an anchor file's content line (only when {@link #serverSecretId()} is not null). */
+    default String serverAnchorMac(String content) {
+        throw new UnsupportedOperationException("this register has no server-held secret");
+    }
+
     /** True while the database's own append-only guards on {@code record_event} are in place. */
     boolean guardsInPlace();
 }

@@ -159,6 +159,7 @@ public final class RegisterStores {
             public void dropGuards(Connection admin) throws SQLException {
                 try (Statement st = admin.createStatement()) {
                     st.execute("ALTER TABLE record_event DISABLE TRIGGER USER");
+                    st.execute("ALTER TABLE record_chain_head DISABLE TRIGGER USER");
                 }
             }
 

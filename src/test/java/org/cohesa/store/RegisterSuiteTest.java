@@ -92,8 +92,18 @@ class RegisterSuiteTest {
         return store.as(person, keyFile);
     }
 
-    private RegisterKey key() {
-        return RegisterKeyFile.load("--key", keyFile).orElseThrow();
+    /** Checks with the register's own seal: the key file on SQLite, the server's secret on PostgreSQL (step 9). */
+    static final boolean SEALED = true;
+    /** Checks without any secret (what someone sees who has neither the key file nor a server that holds the secret). */
+    static final boolean UNSEALED = false;
+
+    private RegisterKey keyFile() {
+        return RegisterKeyFile.load("--key", keyFile).orElse(null);
+    }
+
+    /** The id of what seals the register (the key file's key, or the server's secret). */
+    private String sealId() {
+        return as("erin").sealId(keyFile()).orElseThrow();
     }
 
     private static RecordDraft draft(String process) {
@@ -110,14 +120,14 @@ class RegisterSuiteTest {
         as("carol").changeStatus(1, RecordStatus.APPROVED, "M. Manager", "lab trials passed");
     }
 
-    private ChainReport verify(RegisterKey key, Anchor anchor) {
-        return as("erin").verify(key, anchor);
+    private ChainReport verify(boolean sealed, Anchor anchor) {
+        return sealed ? as("erin").verify(keyFile(), anchor) : as("erin").verifyWithoutSeal(anchor);
     }
 
     private Anchor anchorNow() {
-        ChainReport r = verify(key(), null);
+        ChainReport r = verify(SEALED, null);
         assertTrue(r.intact(), r.problems().toString());
-        return new Anchor(r.headHash(), r.events(), r.records(), RecordEvent.formatAt(Instant.now()), key().id(), null);
+        return new Anchor(r.headHash(), r.events(), r.records(), RecordEvent.formatAt(Instant.now()), sealId(), null);
     }
 
     // ---------------------------------------------------------------- the register as people use it
@@ -127,7 +137,7 @@ class RegisterSuiteTest {
     void eventsAreSealedAndCarryTheActingAccount(String name) {
         use(name);
         fileThree();
-        ChainReport r = verify(key(), null);
+        ChainReport r = verify(SEALED, null);
         assertTrue(r.intact(), r.problems().toString());
         assertEquals(6, r.events());
         assertEquals(3, r.records());
@@ -149,7 +159,7 @@ class RegisterSuiteTest {
         assertThrows(InvalidInputException.class, () -> as("erin").changeStatus(1, RecordStatus.REJECTED, "E. Someone", "too late"));
         assertThrows(InvalidInputException.class, () -> as("erin").changeStatus(42, RecordStatus.IN_REVIEW, "E. Someone", null));
         assertEquals(before, as("erin").chain().size());
-        assertTrue(verify(key(), null).intact());
+        assertTrue(verify(SEALED, null).intact());
     }
 
     @ParameterizedTest(name = "{0}")
@@ -207,7 +217,7 @@ class RegisterSuiteTest {
         assertEquals("one-person lab (invented)", rule.reason());
         assertEquals(List.of("alice", "alice", "alice"), as("erin").get(1).history().stream().map(h -> h.account()).toList(),
                 "one account filed, reviewed and approved, as the rule now allows, and the register shows it");
-        ChainReport r = verify(key(), null);
+        ChainReport r = verify(SEALED, null);
         assertTrue(r.intact(), r.problems().toString());
         assertEquals(4, r.events(), "the switch is an event of the chain");
         assertEquals(1, as("erin").all().size(), "the register's settings are not a record");
@@ -237,7 +247,7 @@ class RegisterSuiteTest {
                 assertThrows(SQLException.class, () -> st.execute("TRUNCATE record_event"));
             }
         }
-        assertTrue(verify(key(), null).intact());
+        assertTrue(verify(SEALED, null).intact());
     }
 
     /** An event row as a client bypassing the program would insert it (the server's triggers judge it before anything else). */
@@ -264,11 +274,40 @@ class RegisterSuiteTest {
             SQLException reviewer = assertThrows(SQLException.class, () -> st.execute(rawEvent(1, 3, "approved", "bob", "{\"comment\":\"ok\"}")));
             assertTrue(reviewer.getMessage().contains("four-eyes rule: the login bob reviewed record 1"), reviewer.getMessage());
         }
-        ChainReport r = verify(key(), null);
+        ChainReport r = verify(SEALED, null);
         assertTrue(r.intact(), r.problems().toString());
         assertEquals(2, r.events(), "nothing was written");
         assertTrue(as("erin").guardsInPlace(), "the four-eyes trigger counts among the guards");
         as("carol").changeStatus(1, RecordStatus.APPROVED, "M. Manager", "a third login");
+    }
+
+    @Test
+    void theServerHoldsTheChainSecretAndNoLoginCanUseIt() throws SQLException {
+        use("postgresql");
+        fileThree();
+        assertTrue(as("erin").sealedByServer(), "a new shared register gets a server-held secret");
+        assertTrue(java.nio.file.Files.notExists(keyFile), "no key file is read or created for it");
+        ChainReport r = verify(SEALED, null);
+        assertTrue(r.intact() && r.keyChecked() && r.sealedEvents() == 6, r.toString());
+        try (Connection alice = RegisterStores.adminConnection(store.address("alice"), null); Statement st = alice.createStatement()) {
+            // a writer can read neither the secret nor a seal for a message of her choosing
+            SQLException secret = assertThrows(SQLException.class, () -> st.executeQuery("SELECT secret FROM cohesa_register_secret"));
+            assertTrue(secret.getMessage().contains("permission denied"), secret.getMessage());
+            SQLException oracle = assertThrows(SQLException.class, () -> st.executeQuery("SELECT cohesa_register_mac('event:' || repeat('0', 64))"));
+            assertTrue(oracle.getMessage().contains("permission denied"), oracle.getMessage());
+            // nor move the head back over events to have the server seal a shortened chain
+            SQLException back = assertThrows(SQLException.class, () -> st.execute("UPDATE record_chain_head SET events = events - 1"));
+            assertTrue(back.getMessage().contains("one event at a time"), back.getMessage());
+            // a seal sent by the client (e.g. computed with an old key file) is replaced by the server's own
+            st.execute("INSERT INTO record_event (record_id, seq, kind, payload, actor, account, at, prev_record_id, prev_seq, prev_hash, hash, mac)"
+                    + " VALUES (3, 2, 'sent_to_review', '{\"comment\":null}', 'A. Author', 'alice', 'x', 0, 0, 'x', 'f00d', 'client-mac')");
+            try (ResultSet rs = st.executeQuery("SELECT mac FROM record_event WHERE hash = 'f00d'")) {
+                assertTrue(rs.next());
+                assertEquals(64, rs.getString(1).length(), "the server's HMAC, not the client's: " + rs.getString(1));
+            }
+        }
+        // that row was not written by Cohesa (its hash is wrong), and the seal does not make it pass
+        assertEquals(ChainProblem.Kind.ALTERED, firstKind(verify(SEALED, null)));
     }
 
     // ---------------------------------------------------------------- attacks with plain SQL (issue 17, Checks)
@@ -354,7 +393,6 @@ class RegisterSuiteTest {
         use(name);
         fileThree();
         Anchor anchor = anchorNow();
-        RegisterKey key = key();
         outside(c -> {
             List<RecordEvent> es = rows(c);
             try (Statement st = c.createStatement()) {
@@ -362,9 +400,9 @@ class RegisterSuiteTest {
             }
             setHead(c, 4, es.get(3), 3);
         });
-        assertUndetectedWithoutKeyOrAnchor(verify(null, null));
-        assertEquals(ChainProblem.Kind.FORGED, firstKind(verify(key, null)), "the head's HMAC no longer matches");
-        assertEquals(ChainProblem.Kind.ANCHOR_MISMATCH, firstKind(verify(null, anchor)), "the anchored head is gone");
+        assertUndetectedWithoutKeyOrAnchor(verify(UNSEALED, null));
+        assertEquals(ChainProblem.Kind.FORGED, firstKind(verify(SEALED, null)), "the head's HMAC no longer matches");
+        assertEquals(ChainProblem.Kind.ANCHOR_MISMATCH, firstKind(verify(UNSEALED, anchor)), "the anchored head is gone");
     }
 
     @ParameterizedTest(name = "{0}")
@@ -373,7 +411,6 @@ class RegisterSuiteTest {
         use(name);
         fileThree();
         Anchor anchor = anchorNow();
-        RegisterKey key = key();
         // record 1's reason is changed and every later hash and the head recomputed, with this project's docs in hand
         outside(c -> {
             List<RecordEvent> es = rows(c);
@@ -399,9 +436,9 @@ class RegisterSuiteTest {
             setHead(c, es.size(), last, 3);
         });
         assertTrue(as("erin").get(1).content().reason().contains("cost"), "the edit took");
-        assertUndetectedWithoutKeyOrAnchor(verify(null, null));
-        assertEquals(ChainProblem.Kind.FORGED, firstKind(verify(key, null)), "recomputed hashes do not have the key's HMACs");
-        assertEquals(ChainProblem.Kind.ANCHOR_MISMATCH, firstKind(verify(null, anchor)));
+        assertUndetectedWithoutKeyOrAnchor(verify(UNSEALED, null));
+        assertEquals(ChainProblem.Kind.FORGED, firstKind(verify(SEALED, null)), "recomputed hashes do not have the key's HMACs");
+        assertEquals(ChainProblem.Kind.ANCHOR_MISMATCH, firstKind(verify(UNSEALED, anchor)));
     }
 
     @ParameterizedTest(name = "{0}")
@@ -410,15 +447,14 @@ class RegisterSuiteTest {
         use(name);
         fileThree();
         Anchor anchor = anchorNow();
-        RegisterKey key = key();
         outside(c -> forgeAppend(c, 2, 3, "approved", "M. Manager", "{\"comment\":\"forged\"}"));
         assertEquals(RecordStatus.APPROVED, as("erin").get(2).status(), "the forgery took");
-        assertUndetectedWithoutKeyOrAnchor(verify(null, null));
-        ChainReport keyed = verify(key, null);
+        assertUndetectedWithoutKeyOrAnchor(verify(UNSEALED, null));
+        ChainReport keyed = verify(SEALED, null);
         assertEquals(ChainProblem.Kind.FORGED, firstKind(keyed));
         assertEquals(2, keyed.firstProblem().orElseThrow().recordId());
         // an anchor vouches only for what came before it: an append after it is named as not covered, not as an error
-        ChainReport anchored = verify(null, anchor);
+        ChainReport anchored = verify(UNSEALED, anchor);
         assertTrue(anchored.intact(), anchored.problems().toString());
         assertEquals(1, anchored.sinceAnchor());
         assertTrue(anchored.limits().stream().anyMatch(l -> l.contains("appended after the anchor")), anchored.limits().toString());
@@ -431,7 +467,7 @@ class RegisterSuiteTest {
         fileThree();
         outside(c -> forgeAppend(c, 1, 4, "rejected", "M. Manager", "{\"comment\":\"reversed\"}"));
         // detected by replaying the status machine, with or without key
-        ChainReport plain = verify(null, null);
+        ChainReport plain = verify(UNSEALED, null);
         assertEquals(ChainProblem.Kind.ILLEGAL_MOVE, firstKind(plain));
         assertEquals(1, plain.firstProblem().orElseThrow().recordId());
         assertTrue(plain.firstProblem().orElseThrow().detail().contains("approved to rejected"), plain.firstProblem().orElseThrow().detail());
@@ -450,32 +486,35 @@ class RegisterSuiteTest {
         use(name);
         as("alice").create(draft("first"), "A. Author");
         List<RecordEvent> old;
+        org.cohesa.core.records.ChainHead oldHead;
         try (Connection c = store.admin()) {
             old = rows(c);
+            oldHead = headRow(c);
         }
         fileThreeMore();
         Anchor anchor = anchorNow();
-        RegisterKey key = key();
         // another valid register, sealed with another key, copied over this one's rows
         Path otherKey = dir.resolve("other.key");
         List<RecordEvent> other;
+        org.cohesa.core.records.ChainHead otherHead;
         try (RegisterStores.Store second = name.equals("postgresql") ? RegisterStores.postgres() : RegisterStores.sqlite(dir)) {
             second.as("alice", otherKey).create(draft("a different register"), "Z. Other");
             second.as("bob", otherKey).changeStatus(1, RecordStatus.IN_REVIEW, "Y. Other", null);
             try (Connection c = second.admin()) {
                 other = rows(c);
+                otherHead = headRow(c);
             }
         }
-        replaceRows(other, RegisterKeyFile.load("--key", otherKey).orElseThrow(), 1);
-        assertUndetectedWithoutKeyOrAnchor(verify(null, null));
-        assertEquals(ChainProblem.Kind.OTHER_KEY, firstKind(verify(key, null)));
-        assertEquals(ChainProblem.Kind.ANCHOR_MISMATCH, firstKind(verify(null, anchor)));
+        replaceRows(other, otherHead);
+        assertUndetectedWithoutKeyOrAnchor(verify(UNSEALED, null));
+        assertEquals(ChainProblem.Kind.OTHER_KEY, firstKind(verify(SEALED, null)));
+        assertEquals(ChainProblem.Kind.ANCHOR_MISMATCH, firstKind(verify(UNSEALED, anchor)));
         // a rollback to an old copy of itself: the key cannot tell (every seal is genuine), the later anchor can
-        replaceRows(old, key, 1);
-        ChainReport keyed = verify(key, null);
+        replaceRows(old, oldHead);
+        ChainReport keyed = verify(SEALED, null);
         assertTrue(keyed.intact(), "a rollback carries genuine seals: " + keyed.problems());
         assertTrue(keyed.limits().stream().anyMatch(l -> l.contains("rollback")), "and the report says what it cannot see: " + keyed.limits());
-        assertEquals(ChainProblem.Kind.ANCHOR_MISMATCH, firstKind(verify(key, anchor)));
+        assertEquals(ChainProblem.Kind.ANCHOR_MISMATCH, firstKind(verify(SEALED, anchor)));
     }
 
     private void fileThreeMore() {
@@ -484,13 +523,22 @@ class RegisterSuiteTest {
         as("carol").changeStatus(1, RecordStatus.APPROVED, "M. Manager", "ok");
     }
 
-    /** Replaces every event and the head with {@code events} (as restoring another file or backup would). */
-    private void replaceRows(List<RecordEvent> events, RegisterKey sealedWith, long maxRecordId) throws SQLException {
+    /** The head row as stored (seal and key id included). */
+    private static org.cohesa.core.records.ChainHead headRow(Connection c) throws SQLException {
+        try (Statement st = c.createStatement(); ResultSet rs = st.executeQuery("SELECT events, last_hash, last_record_id, last_seq,"
+                + " max_record_id, mac, key_id FROM record_chain_head WHERE singleton = 1")) {
+            assertTrue(rs.next(), "a head row");
+            return new org.cohesa.core.records.ChainHead(rs.getLong(1), rs.getString(2), rs.getLong(3), rs.getInt(4), rs.getLong(5),
+                    rs.getString(6), rs.getString(7));
+        }
+    }
+
+    /** Replaces every event and the head row with those of another copy (as restoring another file or backup would). */
+    private void replaceRows(List<RecordEvent> events, org.cohesa.core.records.ChainHead head) throws SQLException {
         outside(c -> {
             try (Statement st = c.createStatement()) {
                 st.execute("DELETE FROM record_event");
             }
-            org.cohesa.core.records.ChainHead head = org.cohesa.core.records.ChainHead.EMPTY;
             for (RecordEvent e : events) {
                 try (PreparedStatement ps = c.prepareStatement("INSERT INTO record_event (record_id, seq, kind, payload, actor, account, at,"
                         + " prev_record_id, prev_seq, prev_hash, hash, mac) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
@@ -508,7 +556,6 @@ class RegisterSuiteTest {
                     ps.setString(12, e.mac());
                     ps.executeUpdate();
                 }
-                head = head.after(e, sealedWith);
             }
             try (PreparedStatement ps = c.prepareStatement("UPDATE record_chain_head SET events = ?, last_hash = ?, last_record_id = ?, last_seq = ?,"
                     + " max_record_id = ?, mac = ?, key_id = ? WHERE singleton = 1")) {
@@ -516,7 +563,7 @@ class RegisterSuiteTest {
                 ps.setString(2, head.lastHash());
                 ps.setLong(3, head.lastRecordId());
                 ps.setInt(4, head.lastSeq());
-                ps.setLong(5, Math.max(maxRecordId, head.maxRecordId()));
+                ps.setLong(5, head.maxRecordId());
                 ps.setString(6, head.mac());
                 ps.setString(7, head.keyId());
                 ps.executeUpdate();
@@ -559,7 +606,7 @@ class RegisterSuiteTest {
             assertEquals(0, w.exitValue(), log.toString());
         }
         double seconds = (System.nanoTime() - start) / 1e9;
-        ChainReport r = verify(key(), null);
+        ChainReport r = verify(SEALED, null);
         assertTrue(r.intact(), r.problems().toString());
         long expectedEvents = 1 + people.length * (perWriter + perWriter / 2L);
         assertEquals(expectedEvents, r.events(), "nothing lost");

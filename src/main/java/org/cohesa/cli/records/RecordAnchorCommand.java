@@ -27,17 +27,18 @@ public final class RecordAnchorCommand extends RecordSubcommand {
     @Override
     protected void run() throws Exception {
         OutputFile.check("FILE", file, overwrite);
-        RegisterKey key = repo().key().orElse(null);
+        RegisterKey key = repo().sealedByServer() ? null : repo().key().orElse(null);
         ChainReport chain = repo().verify(key, null);
+        String sealId = repo().sealId(key).orElse(null);
         if (!chain.intact()) {
             throw new org.cohesa.core.InvalidInputException("register", repo().register().location(),
                     "is broken (" + chain.firstProblem().orElseThrow().describe() + "); an anchor would vouch for a damaged register."
                             + " Run cohesa record verify");
         }
         String at = RecordEvent.formatAt(Instant.now());
-        Anchor a = new Anchor(chain.headHash(), chain.events(), chain.records(), at, key == null ? null : key.id(), null);
+        Anchor a = new Anchor(chain.headHash(), chain.events(), chain.records(), at, sealId, null);
         AnchorFile.Content content = new AnchorFile.Content(AnchorFile.FORMAT, repo().register().kind() + " " + repo().register().location(),
-                a.headHash(), chain.events(), chain.records(), at, a.keyId(), key == null ? null : key.anchorMac(a.content()),
+                a.headHash(), chain.events(), chain.records(), at, a.keyId(), repo().anchorMac(a.content(), key),
                 "Keep this file outside the database (quality file, e-mail to yourself, print). cohesa record verify --anchor FILE"
                         + " shows whether the register still holds this state.");
         byte[] bytes = (Output.mapper().writeValueAsString(content) + "\n").getBytes(StandardCharsets.UTF_8);
@@ -47,6 +48,6 @@ public final class RecordAnchorCommand extends RecordSubcommand {
             return;
         }
         out().println("Wrote anchor " + file + ": " + chain.events() + " events in " + chain.records() + " records, head hash "
-                + chain.headHash() + (key == null ? " (no register key: the anchor carries no HMAC)" : "") + ".");
+                + chain.headHash() + (sealId == null ? " (no register key: the anchor carries no HMAC)" : "") + ".");
     }
 }

@@ -43,15 +43,18 @@ public final class RecordCopyCommand extends RecordSubcommand {
             long copied = shared.copyFrom(source, key);
             ChainReport after = shared.verify(key, org.cohesa.core.records.Anchor.ofHash(before.headHash()));
             boolean same = after.intact() && after.events() == before.events() && after.headHash().equals(before.headHash());
+            String sealId = shared.sealId(key).orElse(null);
             if (json()) {
                 Output.json(out(), new Json(source.register().location(), target.location(), copied, after.records(), after.headHash(),
-                        before.intact(), same, key == null ? null : key.id()));
+                        before.intact(), same, sealId));
             } else {
                 out().println("Copied " + copied + " events (" + after.records() + " records) from " + source.register().location() + " to "
                         + target.location() + ".");
                 out().println("Before: chain intact, head " + before.headHash() + ". After: " + (same ? "chain intact, same head." : "PROBLEM: "
                         + after.firstProblem().map(p -> p.describe()).orElse("different head " + after.headHash())));
-                out().println("From now on use --register " + to + (key == null ? "" : " with the same key file (key " + key.id() + ")") + ".");
+                out().println("From now on use --register " + to + (shared.sealedByServer()
+                        ? " (the server holds its secret and sealed the copy with it, key " + sealId + "; no key file is needed)"
+                        : key == null ? "" : " with the same key file (key " + key.id() + ")") + ".");
             }
             if (!same) {
                 throw new org.cohesa.store.StoreException("the copy in " + target.location() + " does not verify; do not use it");

@@ -28,13 +28,15 @@ public final class RecordVerifyCommand extends RecordSubcommand {
     @Override
     protected void run() {
         Anchor a = anchor == null ? null : AnchorFile.parse("--anchor", anchor);
-        RegisterKey key = repo().key().orElse(null);
+        boolean byServer = repo().sealedByServer();
+        RegisterKey key = byServer ? null : repo().key().orElse(null);
         ChainReport report = repo().verify(key, a);
+        String sealId = repo().sealId(key).orElse(null);
         boolean guards = repo().guardsInPlace();
         broken = !report.intact();
         String where = repo().register().kind() + " " + repo().register().location();
         if (json()) {
-            Output.json(out(), RecordJson.Verify.of(report, where, guards, key == null ? null : key.id()));
+            Output.json(out(), RecordJson.Verify.of(report, where, guards, sealId));
             return;
         }
         if (report.intact()) {
@@ -50,12 +52,13 @@ public final class RecordVerifyCommand extends RecordSubcommand {
             t.print(out());
         }
         out().println("Checked: SHA-256 chain, head note, status moves"
-                + (report.keyChecked() ? ", HMAC seal (key " + key.id() + ", " + report.sealedEvents() + " sealed events)" : "")
+                + (report.keyChecked() ? ", HMAC seal (" + (byServer ? "secret held by the server, key " : "key ") + sealId + ", "
+                        + report.sealedEvents() + " sealed events)" : "")
                 + (report.anchorChecked() ? ", anchor (" + report.sinceAnchor() + " events since)" : "") + ".");
         for (String limit : report.limits()) {
             out().println("not detectable in this run: " + limit);
         }
-        if (key == null && Files.notExists(repo().keyFile())) {
+        if (!byServer && key == null && Files.notExists(repo().keyFile())) {
             out().println("(no key file at " + repo().keyFile() + ")");
         }
         if (!guards) {

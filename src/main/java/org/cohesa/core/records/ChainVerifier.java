@@ -34,7 +34,7 @@ public final class ChainVerifier {
     private record BrokenLink(RecordEvent event, int index, boolean intact, long previousPosition) {
     }
 
-    private final RegisterKey key;
+    private final ChainSeal key;
     private final Anchor anchor;
     private final List<ChainProblem> problems = new ArrayList<>();
     private final Map<String, Integer> indexByHash = new HashMap<>();
@@ -56,7 +56,7 @@ public final class ChainVerifier {
      * @param key    the register key, or null to check only the SHA-256 chain and the status moves
      * @param anchor a state of the chain kept elsewhere, or null
      */
-    public ChainVerifier(RegisterKey key, Anchor anchor) {
+    public ChainVerifier(ChainSeal key, Anchor anchor) {
         this.key = key;
         this.anchor = anchor;
     }
@@ -66,7 +66,7 @@ public final class ChainVerifier {
         return verify(events, head, null, null);
     }
 
-    public static ChainReport verify(List<RecordEvent> events, ChainHead head, RegisterKey key, Anchor anchor) {
+    public static ChainReport verify(List<RecordEvent> events, ChainHead head, ChainSeal key, Anchor anchor) {
         ChainVerifier v = new ChainVerifier(key, anchor);
         events.forEach(v::accept);
         return v.finish(head);
@@ -150,7 +150,7 @@ public final class ChainVerifier {
                         "step " + e.seq() + " at position " + e.position() + " carries no HMAC although the events before it are sealed:"
                                 + " it was written by someone without the register key"));
             }
-        } else if (!RegisterKey.sameMac(e.mac(), key.mac(e.hash()))) {
+        } else if (!key.eventSealed(e.hash(), e.mac())) {
             macMismatches.add(new ChainProblem(ChainProblem.Kind.FORGED, e.position(), e.recordId(), e.seq(),
                     "step " + e.seq() + " at position " + e.position() + " has an HMAC that does not match the register key:"
                             + " it was written or rewritten without the key (or the key file is not this register's)"));
@@ -261,7 +261,7 @@ public final class ChainVerifier {
                     "the register is sealed with key " + head.keyId() + ", not with the given key " + key.id()
                             + ": another register, or the wrong key file"));
             return true;
-        } else if (!RegisterKey.sameMac(head.mac(), key.headMac(head.events(), head.lastHash(), head.maxRecordId()))) {
+        } else if (!key.headSealed(head.events(), head.lastHash(), head.maxRecordId(), head.mac())) {
             problems.add(new ChainProblem(ChainProblem.Kind.FORGED, lastPosition + 1, 0, 0,
                     "the head note's HMAC does not match (" + head.events() + " events, newest " + shortHash(head.lastHash())
                             + "): it was moved by someone without the key, e.g. to hide removed events"));
@@ -273,7 +273,7 @@ public final class ChainVerifier {
         if (anchor == null) {
             return 0;
         }
-        if (anchor.mac() != null && key != null && !RegisterKey.sameMac(anchor.mac(), key.anchorMac(anchor.content()))) {
+        if (anchor.mac() != null && key != null && !key.anchorSealed(anchor.content(), anchor.mac())) {
             problems.add(new ChainProblem(ChainProblem.Kind.ANCHOR_MISMATCH, 0, 0, 0,
                     "the anchor file's own HMAC does not match the key: the anchor was edited, or belongs to another register"));
         }

@@ -14,7 +14,7 @@ import javax.crypto.spec.SecretKeySpec;
  * register), so someone who edits the stored events and recomputes every SHA-256 still cannot produce MACs that
  * verify. The key id (a hash of the key) is stored in the head so a wrong key is told apart from a forgery.
  */
-public final class RegisterKey {
+public final class RegisterKey implements ChainSeal {
 
     /** Key length in bytes (the HMAC-SHA-256 block-size recommendation of RFC 2104 is at least the 32-byte output). */
     public static final int BYTES = 32;
@@ -48,6 +48,7 @@ public final class RegisterKey {
     }
 
     /** A short public name of the key: the first 16 hex digits of a SHA-256 over it (reveals nothing of the key). */
+    @Override
     public String id() {
         return id;
     }
@@ -60,6 +61,21 @@ public final class RegisterKey {
     /** The MAC of the head note: its count, newest hash and highest record number. */
     public String headMac(long events, String lastHash, long maxRecordId) {
         return hmacHex("head:" + events + ":" + lastHash + ":" + maxRecordId);
+    }
+
+    @Override
+    public boolean eventSealed(String hash, String mac) {
+        return sameMac(mac, mac(hash));
+    }
+
+    @Override
+    public boolean headSealed(long events, String lastHash, long maxRecordId, String mac) {
+        return sameMac(mac, headMac(events, lastHash, maxRecordId));
+    }
+
+    @Override
+    public boolean anchorSealed(String content, String mac) {
+        return sameMac(mac, anchorMac(content));
     }
 
     /** The MAC of an anchor file's content line. */
