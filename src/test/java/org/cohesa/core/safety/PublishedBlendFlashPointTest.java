@@ -123,6 +123,37 @@ class PublishedBlendFlashPointTest {
     private static final double MASS_MEAN = 3.3;
     private static final double MASS_WORST = 11.9;
 
+    /**
+     * Minimum-flash-point behaviour, qualitatively: Vidal, Rogers &amp; Mannan, "Prediction of minimum flash point behaviour
+     * for binary mixtures", <i>Process Saf. Environ. Prot.</i> 84 (2006) 1, state in their abstract that octane–ethanol and
+     * octane–1-butanol exhibit it (the mixture flashes below both pure liquids); their measured values could not be read
+     * here, so only the behaviour is checked: the activity model must show a minimum at least 1 K below the lower pure flash
+     * point (of the library), the ideal solution must not (it cannot, for a positive-deviation pair).
+     */
+    @Test
+    void alcoholOctaneBlendsFlashBelowBothLiquids() {
+        StringBuilder report = new StringBuilder("minimum flash point (model, vol % alcohol):");
+        for (String alcohol : List.of("ethanol", "1-butanol")) {
+            double lowerPure = Math.min(LIB.resolve("s", alcohol).flashPointC(), LIB.resolve("s", "n-octane").flashPointC());
+            double minModel = Double.POSITIVE_INFINITY;
+            double minIdeal = Double.POSITIVE_INFINITY;
+            double at = Double.NaN;
+            for (double f : new double[] {0.02, 0.05, 0.1, 0.2, 0.3, 0.5, 0.7, 0.9, 0.98}) {
+                double m = profile(alcohol, f, "n-octane", false).flashPoint().celsius();
+                if (m < minModel) {
+                    minModel = m;
+                    at = f;
+                }
+                minIdeal = Math.min(minIdeal, profile(alcohol, f, "n-octane", true).flashPoint().celsius());
+            }
+            report.append(String.format(Locale.ROOT, " %s + n-octane %.1f °C at %.0f %% (lower pure liquid %.1f °C, ideal solution %.1f °C);",
+                    alcohol, minModel, 100 * at, lowerPure, minIdeal));
+            assertTrue(minModel < lowerPure - 1, report.toString());
+            assertTrue(minIdeal > lowerPure - 0.5, report.toString());
+        }
+        System.out.println(report);
+    }
+
     @Test
     void theIdealSolutionBadlyOverestimatesAqueousBlends() {
         // the same tertiary table (published-blend-flash-points.csv): 20 % by volume flashes at 36 °C; Raoult's law (γ = 1)
