@@ -122,6 +122,28 @@ class FitCommandTest {
     }
 
     @Test
+    void priorFromTheStructureIsNamedInTheOutput() throws Exception {
+        // aspirin, PubChem CID 2244 (SMILES from memory); the estimate and its errors come from the Mathieu 2018 group method
+        Run r = run("fit", demo().toString(), "--json", "--prior-smiles", "CC(=O)Oc1ccccc1C(=O)O");
+        assertEquals(0, r.code(), r.err());
+        JsonNode p = new ObjectMapper().readTree(r.out()).get("prior");
+        assertEquals("structure estimate", p.get("kind").asText());
+        assertTrue(p.get("source").asText().startsWith("estimated from the structure"), p.toString());
+        assertTrue(p.get("sd_dP").asDouble() > p.get("sd_dD").asDouble(), "δP is estimated less well than δD: " + p);
+        Run text = run("fit", demo().toString(), "--prior-smiles", "CC(=O)Oc1ccccc1C(=O)O");
+        assertTrue(text.out().contains("note: prior: the centre was pulled towards") && text.out().contains("estimated from the structure"), text.out());
+        Run both = run("fit", demo().toString(), "--prior", "PMMA", "--prior-smiles", "CCO");
+        assertEquals(2, both.code());
+        assertTrue(both.err().startsWith("error: --prior-smiles 'CCO'"), both.err());
+        Run bad = run("fit", demo().toString(), "--prior-smiles", "C1CC(");
+        assertEquals(2, bad.code());
+        assertTrue(bad.err().startsWith("error: --prior-smiles"), bad.err());
+        Run lonely = run("fit", demo().toString(), "--prior-spread", "2");
+        assertEquals(2, lonely.code());
+        assertTrue(lonely.err().startsWith("error: --prior-spread"), lonely.err());
+    }
+
+    @Test
     void sameSeedSameOutput() {
         String a = run("fit", demo().toString(), "--json", "--seed", "4", "--resamples", "30").out();
         String b = run("fit", demo().toString(), "--json", "--seed", "4", "--resamples", "30").out();

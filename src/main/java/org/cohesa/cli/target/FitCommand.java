@@ -12,7 +12,10 @@ import java.util.List;
 import java.util.Locale;
 import org.cohesa.core.InvalidInputException;
 
+import org.cohesa.cli.structure.StructureEstimates;
 import org.cohesa.core.solvent.SolventLibrary;
+import org.cohesa.core.structure.MeasuredProperties;
+import org.cohesa.core.structure.StructureEstimate;
 import org.cohesa.core.target.CentrePrior;
 import org.cohesa.core.target.ConfidenceRegion;
 import org.cohesa.core.target.FitMethod;
@@ -70,8 +73,14 @@ public final class FitCommand extends CohesaSubcommand {
             + "related library material (a Gaussian prior in Ra; the output says so).")
     String prior;
 
-    @Option(names = "--prior-spread", paramLabel = "MPA", description = "Spread of the --prior centre, MPa^½ in Ra (default ${DEFAULT-VALUE}).")
-    double priorSpread = CentrePrior.DEFAULT_SPREAD;
+    @Option(names = "--prior-smiles", paramLabel = "SMILES", description = "Likelihood fit only: pull the centre towards the centre estimated "
+            + "from the material's own structure (a drug substance, an additive; Mathieu 2018 group contribution), each component by its "
+            + "measured error (the output says so).")
+    String priorSmiles;
+
+    @Option(names = "--prior-spread", paramLabel = "MPA", description = "Spread of the prior centre, MPa^½ in Ra (default 3 for --prior; "
+            + "for --prior-smiles each component's spread comes from the estimator's measured error unless this is given).")
+    Double priorSpread;
 
     @Option(names = "--allow-cmr", description = "Let the suggested next tests include carcinogenic, mutagenic or reprotoxic liquids "
             + "(H340/H350/H360) and ICH Q3C class 1 solvents; left out by default, as in blend.")
@@ -106,17 +115,7 @@ public final class FitCommand extends CohesaSubcommand {
         } catch (IllegalArgumentException e) {
             throw new InvalidInputException("--method", method, "must be one of " + FitMethod.allowed());
         }
-        CentrePrior centrePrior = null;
-        if (prior != null) {
-            if (fitMethod != FitMethod.LIKELIHOOD) {
-                throw new InvalidInputException("--prior", prior, "a prior works with --method likelihood only");
-            }
-            if (!(priorSpread >= 0.5 && priorSpread <= 20)) {
-                throw new InvalidInputException("--prior-spread", String.valueOf(priorSpread), "must lie between 0.5 and 20 MPa^½");
-            }
-            Material related = ctx().materials().library().resolve("--prior", prior);
-            centrePrior = new CentrePrior(related.sphere().centre(), priorSpread, "published sphere of " + related.name() + " (" + related.source() + ")");
-        }
+        CentrePrior centrePrior = prior(fitMethod);
         SolventLibrary library = ctx().library();
         List<TestResult> results = read(library);
         // a lab should not be sent to test a carcinogen or reprotoxicant to refine a sphere: safety first, as in blend
@@ -143,6 +142,40 @@ public final class FitCommand extends CohesaSubcommand {
         if (png != null) {
             out().println("wrote " + png);
         }
+    }
+
+    /** The centre prior of --prior or --prior-smiles, or null. */
+    private CentrePrior prior(FitMethod fitMethod) {
+        if (prior != null && priorSmiles != null) {
+            throw new InvalidInputException("--prior-smiles", priorSmiles, "give either --prior or --prior-smiles, not both");
+        }
+        String field = prior != null ? "--prior" : "--prior-smiles";
+        String value = prior != null ? prior : priorSmiles;
+        if (value == null) {
+            if (priorSpread != null) {
+                throw new InvalidInputException("--prior-spread", String.valueOf(priorSpread), "needs --prior or --prior-smiles");
+            }
+            return null;
+        }
+        if (fitMethod != FitMethod.LIKELIHOOD) {
+            throw new InvalidInputException(field, value, "a prior works with --method likelihood only");
+        }
+        if (priorSpread != null && !(priorSpread >= 0.5 && priorSpread <= 20)) {
+            throw new InvalidInputException("--prior-spread", String.valueOf(priorSpread), "must lie between 0.5 and 20 MPa^½");
+        }
+        if (prior != null) {
+            Material related = ctx().materials().library().resolve("--prior", prior);
+            return CentrePrior.inRa(related.sphere().centre(), priorSpread == null ? CentrePrior.DEFAULT_SPREAD : priorSpread,
+                    "published sphere of " + related.name() + " (" + related.source() + ")");
+        }
+        StructureEstimate e = StructureEstimates.estimate("--prior-smiles", priorSmiles, MeasuredProperties.NONE);
+        if (!e.hasHansen()) {
+            throw new InvalidInputException("--prior-smiles", priorSmiles, "the group method cannot estimate "
+                    + (e.dD() == null ? "δD" : e.dP() == null ? "δP" : "δH") + " for this structure, so it cannot serve as a prior; "
+                    + "use --prior with a related material instead");
+        }
+        CentrePrior p = CentrePrior.fromStructure(e);
+        return priorSpread == null ? p : p.withRaSpread(priorSpread);
     }
 
     private List<TestResult> read(SolventLibrary library) throws IOException {

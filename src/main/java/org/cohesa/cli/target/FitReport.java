@@ -4,6 +4,7 @@ import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonProperty;
 import java.util.List;
 import org.cohesa.cli.Output;
+import org.cohesa.core.target.CentrePrior;
 import org.cohesa.core.target.ConfidenceRegion;
 import org.cohesa.core.target.FitResult;
 import org.cohesa.core.target.Interval;
@@ -51,7 +52,9 @@ record FitReport(
                   double softness, double lapse, List<List<Double>> samples) {
     }
 
-    record Prior(double dD, double dP, double dH, double spread, String source) {
+    /** The centre prior: its centre, the standard deviation of each component (MPa^½), its kind and source. */
+    record Prior(String kind, double dD, double dP, double dH, @JsonProperty("sd_dD") double sdD, @JsonProperty("sd_dP") double sdP,
+                 @JsonProperty("sd_dH") double sdH, String source) {
     }
 
     record Next(String name, double red, @JsonProperty("inside_share") double insideShare,
@@ -76,8 +79,10 @@ record FitReport(
             region = new Region(r.level(), Output.round(r.threshold(), 3), Output.round(r.centreRadius(), 2), interval(r.r0()), r.bounded(),
                     r.boundedNote(), r.withPrior(), r.model().softness(), r.model().lapse(), samples);
         }
-        Prior prior = fit.prior() == null ? null : new Prior(fit.prior().centre().dD(), fit.prior().centre().dP(), fit.prior().centre().dH(),
-                fit.prior().spread(), fit.prior().source());
+        var p = fit.prior();
+        Prior prior = p == null ? null : new Prior(p.kind() == CentrePrior.Kind.STRUCTURE ? "structure estimate" : "related material",
+                p.centre().dD(), p.centre().dP(), p.centre().dH(), Output.round(p.sdD(), 2), Output.round(p.sdP(), 2), Output.round(p.sdH(), 2),
+                p.source());
         List<Next> next = fit.nextTests().stream().map(t -> new Next(t.name(), Output.round(t.red(), 3), Output.round(t.insideShare(), 3),
                 likelihood ? Output.round(t.expectedShrinkage(), 3) : null, t.reason())).toList();
         return new FitReport(fit.method().key(), Output.round(c.dD(), 2), Output.round(c.dP(), 2), Output.round(c.dH(), 2),

@@ -28,6 +28,15 @@ public final class StructureEstimator {
     private StructureEstimator() {
     }
 
+    /**
+     * Mean absolute error {δD, δP, δH} of the group method for {@code family} when that family is estimated much
+     * worse than average on the published table (the families the estimate warns about), else null.
+     */
+    public static double[] muchWorseFamilyError(String family) {
+        double[] e = EstimateErrors.MUCH_WORSE.get(family);
+        return e == null ? null : e.clone();
+    }
+
     public static StructureEstimate estimate(Structure structure, MeasuredProperties measured) {
         MeasuredProperties m = measured == null ? MeasuredProperties.NONE : measured;
         MathieuEstimate group = MathieuMethod.estimate(structure);

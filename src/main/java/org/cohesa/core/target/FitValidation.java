@@ -34,6 +34,18 @@ public final class FitValidation {
                           int classicBoxCovered, int classicDetected) {
     }
 
+    /** A known sphere with a prior on its centre (e.g. a drug substance's centre estimated from its structure). */
+    public record PriorCase(String name, SolubilitySphere truth, CentrePrior prior) {
+    }
+
+    /**
+     * The same series fitted without and with the prior: median centre and R0 error of both, the prior's own centre
+     * error, and how often the (penalised) 95 % region holds the true sphere.
+     */
+    public record PriorFigures(int size, int trials, double plainCentreMedian, double priorCentreMedian, double plainR0Median,
+                               double priorR0Median, double priorGuessMedian, int plainCovered, int priorCovered) {
+    }
+
     /** Median centre error after adding k = 0..n tests: the suggested batch and random common liquids. */
     public record DesignCurve(int trials, int startSize, double[] suggested, double[] random) {
     }
@@ -133,6 +145,34 @@ public final class FitValidation {
         return new DesignCurve(trials, startSize, s, r);
     }
 
+    /** Clean series of {@code size} common liquids for each case in turn, fitted without and with the case's prior. */
+    public static PriorFigures priorBenefit(List<PriorCase> cases, List<NamedPoint> pool, int size, int trials, long seed) {
+        SplittableRandom rng = new SplittableRandom(seed);
+        List<Double> plain = new ArrayList<>();
+        List<Double> withPrior = new ArrayList<>();
+        List<Double> plainR0 = new ArrayList<>();
+        List<Double> priorR0 = new ArrayList<>();
+        List<Double> guess = new ArrayList<>();
+        int plainCovered = 0;
+        int priorCovered = 0;
+        for (int t = 0; t < trials; t++) {
+            PriorCase c = cases.get(t % cases.size());
+            SyntheticSeries series = usable(c.truth(), pool, new Scenario(size, 0, 0), rng);
+            FitOptions o = new FitOptions(seed + t, 0, 12, 0);
+            FitResult a = SphereFitter.fit(series.results(), List.of(), o);
+            FitResult b = SphereFitter.fit(series.results(), List.of(), o.withPrior(c.prior()));
+            plain.add(plain(a.sphere(), c.truth()));
+            withPrior.add(plain(b.sphere(), c.truth()));
+            plainR0.add(Math.abs(a.sphere().r0() - c.truth().r0()));
+            priorR0.add(Math.abs(b.sphere().r0() - c.truth().r0()));
+            guess.add(plain(c.prior().centre(), c.truth().centre()));
+            plainCovered += LikelihoodFitter.regionHolds(a, series.results(), c.truth()) ? 1 : 0;
+            priorCovered += LikelihoodFitter.regionHolds(b, series.results(), c.truth()) ? 1 : 0;
+        }
+        return new PriorFigures(size, trials, median(plain), median(withPrior), median(plainR0), median(priorR0), median(guess), plainCovered,
+                priorCovered);
+    }
+
     /** A series with the requested flips, and at least 3 dissolving and 3 non-dissolving results (redrawn until so). */
     static SyntheticSeries usable(SolubilitySphere truth, List<NamedPoint> pool, Scenario s, SplittableRandom rng) {
         for (int attempt = 0; attempt < 1000; attempt++) {
@@ -147,8 +187,10 @@ public final class FitValidation {
 
     /** |Δ(δD, δP, δH)|, MPa^½. */
     public static double plain(SolubilitySphere a, SolubilitySphere b) {
-        HansenParameters x = a.centre();
-        HansenParameters y = b.centre();
+        return plain(a.centre(), b.centre());
+    }
+
+    static double plain(HansenParameters x, HansenParameters y) {
         return Math.sqrt(Math.pow(x.dD() - y.dD(), 2) + Math.pow(x.dP() - y.dP(), 2) + Math.pow(x.dH() - y.dH(), 2));
     }
 

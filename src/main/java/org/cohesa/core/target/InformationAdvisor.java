@@ -45,11 +45,10 @@ final class InformationAdvisor {
             info = info.add(outer(v));
         }
         if (prior != null) {
-            // the prior adds its precision on the centre (Ra metric: δD counts twice)
-            double q = 1 / (prior.spread() * prior.spread());
-            info.addToEntry(0, 0, 4 * q);
-            info.addToEntry(1, 1, q);
-            info.addToEntry(2, 2, q);
+            // the prior adds its precision on each centre component
+            info.addToEntry(0, 0, 1 / (prior.sdD() * prior.sdD()));
+            info.addToEntry(1, 1, 1 / (prior.sdP() * prior.sdP()));
+            info.addToEntry(2, 2, 1 / (prior.sdH() * prior.sdH()));
         }
         double ridge = RIDGE * Math.max(1e-9, info.getTrace());
         for (int k = 0; k < 4; k++) {

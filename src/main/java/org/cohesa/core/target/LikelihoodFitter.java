@@ -260,9 +260,14 @@ public final class LikelihoodFitter {
             notes.add(near + " result(s) lie in that band near the surface; a wrong one there would not show as a misfit");
         }
         if (prior != null) {
-            notes.add(String.format(Locale.ROOT, "prior: the centre was pulled towards %.1f/%.1f/%.1f (%s), spread %.1f MPa^½ in Ra; "
-                    + "the region is that of the penalised likelihood", prior.centre().dD(), prior.centre().dP(), prior.centre().dH(),
-                    prior.source(), prior.spread()));
+            notes.add(String.format(Locale.ROOT, "prior: the centre was pulled towards %.1f/%.1f/%.1f (%s), standard deviation δD %.1f, "
+                    + "δP %.1f, δH %.1f MPa^½; the region is that of the penalised likelihood", prior.centre().dD(), prior.centre().dP(),
+                    prior.centre().dH(), prior.source(), prior.sdD(), prior.sdP(), prior.sdH()));
+            if (prior.kind() == CentrePrior.Kind.STRUCTURE) {
+                notes.add("the structure estimate is a guess from group contributions (errors measured on liquids, where drug-like solids may "
+                        + "do worse); the tests decide wherever they bound the sphere");
+            }
+            prior.cautions().forEach(c -> notes.add("prior caution: " + c));
         }
         return notes;
     }

@@ -9,6 +9,9 @@ import java.util.List;
 import org.cohesa.core.hsp.HansenParameters;
 import org.cohesa.core.hsp.SolubilitySphere;
 import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.structure.StructureEstimate;
+import org.cohesa.core.structure.StructureEstimator;
+import org.cohesa.core.structure.StructureParser;
 import org.junit.jupiter.api.Test;
 
 class LikelihoodFitterTest {
@@ -98,12 +101,55 @@ class LikelihoodFitterTest {
         List<NamedPoint> few = common().subList(0, 12);
         List<TestResult> r = scored(truth, few);
         FitResult plain = SphereFitter.fit(r, List.of(), FitOptions.defaults(2).withNextTests(0));
-        CentrePrior prior = new CentrePrior(HansenParameters.of(18.2, 10.0, 7.0), 2.0, "a related sphere (test value)");
+        CentrePrior prior = CentrePrior.inRa(HansenParameters.of(18.2, 10.0, 7.0), 2.0, "a related sphere (test value)");
         FitResult withPrior = SphereFitter.fit(r, List.of(), FitOptions.defaults(2).withNextTests(0).withPrior(prior));
         assertTrue(withPrior.sphere().centre().distanceTo(prior.centre()) < plain.sphere().centre().distanceTo(prior.centre()));
         assertTrue(withPrior.region().withPrior());
         assertTrue(withPrior.region().centreRadius() < plain.region().centreRadius(), "the prior narrows the region");
         assertTrue(withPrior.notes().stream().anyMatch(n -> n.startsWith("prior:")), withPrior.notes().toString());
+    }
+
+    @Test
+    void aStructurePriorTakesItsSpreadsFromTheRoutesMeasuredErrorAndPullsAThinSeries() {
+        // paracetamol: SMILES from PubChem (CID 1983, from memory); centre 17.8/10.5/13.9 from Alshehri et al., AIChE J. 68
+        // (2022) e17469 (the bundled drug substance), R0 7.0 the bundled default screening radius
+        StructureEstimate e = StructureEstimator.estimate(StructureParser.parse("smiles", "CC(=O)Nc1ccc(O)cc1"), null);
+        CentrePrior prior = CentrePrior.fromStructure(e);
+        assertEquals(CentrePrior.Kind.STRUCTURE, prior.kind());
+        assertEquals(e.hansen(), prior.centre());
+        // an amide: the group method's amide error on the published table (MAE δD 1.28, δP 3.26, δH 2.70, EstimateErrors)
+        // exceeds the overall one, so sd = MAE·√(π/2) (normal distribution: mean |error| = sd·√(2/π))
+        assertEquals(1.28 * Math.sqrt(Math.PI / 2), prior.sdD(), 1e-9);
+        assertEquals(3.26 * Math.sqrt(Math.PI / 2), prior.sdP(), 1e-9);
+        assertEquals(2.70 * Math.sqrt(Math.PI / 2), prior.sdH(), 1e-9);
+        assertTrue(prior.source().contains("CC(=O)Nc1ccc(O)cc1") && prior.source().contains("Mathieu 2018"), prior.source());
+        assertFalse(prior.cautions().isEmpty(), "the amide warning travels with the prior");
+
+        SolubilitySphere truth = SolubilitySphere.of(17.8, 10.5, 13.9, 7.0);
+        // every other common test liquid: 18 of the 35
+        List<NamedPoint> all = common();
+        List<NamedPoint> half = new ArrayList<>();
+        for (int i = 0; i < all.size(); i += 2) {
+            half.add(all.get(i));
+        }
+        List<TestResult> r = scored(truth, half);
+        FitResult plain = SphereFitter.fit(r, List.of(), FitOptions.defaults(3).withNextTests(0));
+        FitResult withPrior = SphereFitter.fit(r, List.of(), FitOptions.defaults(3).withNextTests(0).withPrior(prior));
+        assertTrue(withPrior.region().centreRadius() < plain.region().centreRadius(), "the prior narrows the region");
+        assertTrue(LikelihoodFitter.regionHolds(withPrior, r, truth), "the penalised region still holds the true sphere");
+        assertTrue(withPrior.notes().stream().anyMatch(n -> n.startsWith("prior: the centre was pulled towards") && n.contains("estimated from the structure")),
+                withPrior.notes().toString());
+        assertTrue(withPrior.notes().stream().anyMatch(n -> n.startsWith("prior caution:")), withPrior.notes().toString());
+    }
+
+    @Test
+    void aPriorInTheRaMetricHalvesTheDispersionSpread() {
+        // Ra² = 4ΔδD² + ΔδP² + ΔδH² (Hansen 2007, ch. 1): a Gaussian of spread s in Ra has sd s/2 on δD
+        CentrePrior p = CentrePrior.inRa(HansenParameters.of(18, 8, 6), 3.0, "test value");
+        assertEquals(1.5, p.sdD(), 1e-12);
+        assertEquals(3.0, p.sdP(), 1e-12);
+        assertEquals(3.0, p.sdH(), 1e-12);
+        assertEquals(CentrePrior.Kind.RELATED_MATERIAL, p.kind());
     }
 
     @Test
