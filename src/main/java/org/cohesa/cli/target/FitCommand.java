@@ -185,7 +185,10 @@ public final class FitCommand extends CohesaSubcommand {
     private void print(FitResult fit, int n) {
         ConfidenceRegion c = fit.confidence();
         LikelihoodRegion region = fit.region();
-        out().println("Sphere fitted to " + n + " test results in " + file.getFileName() + " (" + fit.method().key() + " fit, seed " + seed + ")");
+        String withPrior = fit.prior() == null ? ""
+                : fit.prior().kind() == CentrePrior.Kind.STRUCTURE ? " with a prior from the structure" : " with a prior from a related material";
+        out().println("Sphere fitted to " + n + " test results in " + file.getFileName() + " (" + fit.method().key() + " fit" + withPrior
+                + ", seed " + seed + ")");
         int pct = (int) Math.round(100 * c.level());
         String span = region != null ? " region" : " box";
         TextTable t = new TextTable("", "fitted", pct + " %" + span + " low", pct + " %" + span + " high");

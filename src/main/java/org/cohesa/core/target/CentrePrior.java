@@ -93,8 +93,10 @@ public record CentrePrior(HansenParameters centre, double sdD, double sdP, doubl
                 sd[k] = Math.max(sd[k], familyMae[k] * SD_PER_MAE);
             }
         }
-        String source = String.format(Locale.ROOT, "estimated from the structure %s (%s)", e.structure().smiles(), e.dD().route());
-        return new CentrePrior(e.hansen(), sd[0], sd[1], sd[2], Kind.STRUCTURE, source, e.warnings());
+        String source = String.format(Locale.ROOT, "estimated from the structure %s by %s", e.structure().smiles(), e.dD().route());
+        // the estimate's notes on UNIFAC groups concern activity models, not the centre
+        List<String> cautions = e.warnings().stream().filter(w -> !w.contains("UNIFAC")).toList();
+        return new CentrePrior(e.hansen(), sd[0], sd[1], sd[2], Kind.STRUCTURE, source, cautions);
     }
 
     private static double sd(EstimatedValue v) {
