@@ -259,12 +259,13 @@ class LibraryCurationTest {
         assertEquals("supplier-sds-checked", solvent("3470-98-2").get("src_hazard_statements"));
         // Annex VI entries read from stored copies (SOURCES.md, clp-annex-vi-checked): ethanol Flam. Liq. 2 H225 only
         // (ECHA C&L Inventory, index 603-002-00-5); acetone and ethyl acetate H225 H336 H319; n-butyl acetate H226 H336; propylene carbonate H319;
-        // MIBK H225 H332 H319 H335 (GisChem); THF H225 H319 H351 H335 (GisChem); methanol H225 H301 H311 H331 H370 (BGN).
+        // acetonitrile H225 H302 H312 H332 H319 (ECHA Brief Profile); MIBK H225 H332 H319 H335 (GisChem); THF H225 H319 H351 H335 (GisChem); methanol H225 H301 H311 H331 H370 (BGN).
         Map<String, Set<String>> annexVi = Map.of(
                 "64-17-5", Set.of("H225"),
                 "67-64-1", Set.of("H225", "H336", "H319"),
                 "141-78-6", Set.of("H225", "H336", "H319"),
                 "123-86-4", Set.of("H226", "H336"),
+                "75-05-8", Set.of("H225", "H302", "H312", "H332", "H319"),
                 "108-32-7", Set.of("H319"),
                 "108-10-1", Set.of("H225", "H332", "H319", "H335"),
                 "109-99-9", Set.of("H225", "H319", "H351", "H335"),
