@@ -60,7 +60,8 @@ public final class MaterialFromStructure {
         } else {
             r = DEFAULT_R0;
             lines.add(String.format(Locale.ROOT, "caution: R0 %.1f is a default screening radius for small-molecule solids, not a measurement "
-                    + "(a radius cannot be estimated from the structure); measure the sphere with 'cohesa fit' from dissolving tests", r));
+                    + "(a radius cannot be estimated from the structure); measure the sphere with 'cohesa fit' from dissolving tests "
+                    + "('cohesa fit FILE --prior-smiles SMILES' starts from this estimate)", r));
         }
         e.warnings().forEach(w -> lines.add("caution: " + w));
         return new Centre(d, p, h, r, source, lines);
