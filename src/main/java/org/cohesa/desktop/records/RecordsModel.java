@@ -22,15 +22,45 @@ import org.cohesa.desktop.common.TargetChoice;
 import org.cohesa.report.RecordPdf;
 import org.cohesa.report.RegisterCsv;
 import org.cohesa.store.Database;
+import org.cohesa.store.PostgresRegister;
 import org.cohesa.store.RecordRepository;
 import org.cohesa.store.SourceCatalog;
 
 /**
  * View-model of the register screen: the substitution records, filing a new one (with its evidence snapshot),
- * moving it through review, verifying the hash chain and exporting (PDF per record, CSV register). All work
- * runs off the FX thread; the register itself lives in {@link RecordRepository}.
+ * moving it through review, verifying the hash chain and exporting (PDF per record, CSV register). The register is the
+ * local database's or a shared one on PostgreSQL ({@code $COHESA_REGISTER} at start, or chosen on the screen); every
+ * piece of work opens it on a worker thread, never on the FX thread. The register itself lives in
+ * {@link RecordRepository}, which holds the four-eyes rule against the account at the keyboard.
  */
 public final class RecordsModel {
+
+    /**
+     * Which register the screen works on and who is at the keyboard, as the register sees it.
+     *
+     * @param kind        "sqlite" or "postgresql"
+     * @param location    the file or the server address (never a password)
+     * @param account     the account the register records for this person (OS account, or database login)
+     * @param login       true when {@code account} is a database login (vouched for by the server)
+     * @param seal        what seals the chain, in words
+     * @param fourEyes    whether the four-eyes rule is on
+     * @param events      events in the register
+     */
+    public record RegisterInfo(String kind, String location, String account, boolean login, String seal, boolean fourEyes,
+                               long events) {
+
+        /** One line for the screen. */
+        public String describe() {
+            return ("postgresql".equals(kind) ? "Shared register " : "Local register ") + location + " · you: " + account
+                    + (login ? " (database login)" : " (operating-system account)") + " · four eyes " + (fourEyes ? "on" : "off")
+                    + " · " + seal;
+        }
+    }
+
+    private final javafx.beans.property.ObjectProperty<String> sharedAddress = new javafx.beans.property.SimpleObjectProperty<>();
+    private final javafx.beans.property.ObjectProperty<RegisterInfo> info = new javafx.beans.property.SimpleObjectProperty<>();
+    /** The address as worker threads read it (the property is the FX thread's). */
+    private volatile String address;
 
     /** What the user typed into the filing form. */
     public record Filing(String process, String site, String replaced, String replacement, String reason, String author,
@@ -42,6 +72,73 @@ public final class RecordsModel {
 
     public RecordsModel(Session session) {
         this.session = session;
+        String env = System.getenv("COHESA_REGISTER");
+        if (env != null && PostgresRegister.isAddress(env.strip())) {
+            sharedAddress.set(env.strip());
+        }
+        address = sharedAddress.get();
+        sharedAddress.addListener((o, a, b) -> address = b);
+    }
+
+    /** The shared register's address, or null for the local database's register. */
+    public javafx.beans.property.ReadOnlyObjectProperty<String> sharedAddressProperty() {
+        return sharedAddress;
+    }
+
+    /** Which register is shown and who is at the keyboard (null until the first reload). */
+    public javafx.beans.property.ReadOnlyObjectProperty<RegisterInfo> infoProperty() {
+        return info;
+    }
+
+    /**
+     * Switches to the shared register at {@code address} (null or blank: the local one), after opening it on a worker
+     * thread; a register that cannot be opened is named in the status bar and the screen stays on the one it had.
+     */
+    public void useRegister(String address, Runnable then) {
+        String chosen = address == null || address.isBlank() ? null : address.strip();
+        session.jobs().run(chosen == null ? "Opening the local register" : "Connecting to the shared register", p -> {
+            try (Opened o = open(chosen)) {
+                return describe(o.repo());
+            }
+        }, i -> {
+            sharedAddress.set(chosen);
+            info.set(i);
+            reload(then);
+        });
+    }
+
+    /** An open register for one piece of work on a worker thread. */
+    private record Opened(RecordRepository repo, AutoCloseable resource) implements AutoCloseable {
+        @Override
+        public void close() throws Exception {
+            resource.close();
+        }
+    }
+
+    private Opened open(String address) {
+        if (address != null) {
+            PostgresRegister shared = PostgresRegister.open("register", address);
+            return new Opened(new RecordRepository(shared, java.time.Clock.systemUTC(), null), shared);
+        }
+        Database db = session.openDatabase();
+        return new Opened(new RecordRepository(db), db);
+    }
+
+    private Opened open() {
+        return open(address);
+    }
+
+    private static RegisterInfo describe(RecordRepository repo) {
+        var register = repo.register();
+        String seal;
+        if (repo.sealedByServer()) {
+            seal = "sealed by the server's secret (key " + register.serverSecretId() + ")";
+        } else {
+            seal = repo.key().map(k -> "sealed with key file " + repo.keyFile() + " (key " + k.id() + ")")
+                    .orElse("no key file yet at " + repo.keyFile() + " (the first write creates it)");
+        }
+        return new RegisterInfo(register.kind(), register.location(), register.account(), register.accountIsAuthenticated(), seal,
+                repo.fourEyes().on(), repo.head().events());
     }
 
     public Session session() {
@@ -54,11 +151,12 @@ public final class RecordsModel {
 
     public void reload(Runnable then) {
         session.jobs().run("Reading the register", p -> {
-            try (Database db = session.openDatabase()) {
-                return new RecordRepository(db).all();
+            try (Opened o = open()) {
+                return new Reading(o.repo().all(), describe(o.repo()));
             }
-        }, list -> {
-            records.setAll(list);
+        }, read -> {
+            records.setAll(read.records());
+            info.set(read.info());
             if (then != null) {
                 then.run();
             }
@@ -93,8 +191,8 @@ public final class RecordsModel {
             var evidence = EvidenceAssembler.assemble(from, to, ref, SourceCatalog.bundled().all(), appVersion());
             RecordDraft draft = new RecordDraft(f.process(), f.site(), from.describe(), to.describe(), targetText, f.reason(),
                     evidence);
-            try (Database db = session.openDatabase()) {
-                return new RecordRepository(db).create(draft, required("author", f.author()));
+            try (Opened o = open()) {
+                return o.repo().create(draft, required("author", f.author()));
             }
         }, r -> reload(() -> {
             session.jobs().say("Filed record " + r.id() + " as a draft.");
@@ -106,8 +204,8 @@ public final class RecordsModel {
 
     public void changeStatus(long id, RecordStatus next, String by, String comment, Runnable then) {
         session.jobs().run("Recording the decision on record " + id, p -> {
-            try (Database db = session.openDatabase()) {
-                return new RecordRepository(db).changeStatus(id, next, required("by", by), comment);
+            try (Opened o = open()) {
+                return o.repo().changeStatus(id, next, required("by", by), comment);
             }
         }, r -> reload(() -> {
             session.jobs().say("Record " + id + " is now " + r.status().label().replace('_', ' ') + ".");
@@ -120,13 +218,13 @@ public final class RecordsModel {
     /** Walks the hash chain; the status bar says whether it is intact or names the first problem. */
     public void verify(java.util.function.Consumer<ChainReport> then) {
         session.jobs().run("Verifying the register", p -> {
-            try (Database db = session.openDatabase()) {
-                return new RecordRepository(db).verify();
+            try (Opened o = open()) {
+                return o.repo().verify();
             }
         }, report -> {
             if (report.intact()) {
-                session.jobs().say("Register intact: " + report.events() + " events in " + report.records() + " records, head hash "
-                        + report.headHash());
+                session.jobs().say("Register intact: " + report.events() + " events in " + report.records() + " records"
+                        + (report.keyChecked() ? ", seals checked" : ", seals not checked (no key)") + ", head hash " + report.headHash());
             } else {
                 session.jobs().complain("Register altered: " + report.firstProblem().map(x -> x.describe()).orElse("see the report"));
             }
@@ -138,8 +236,8 @@ public final class RecordsModel {
 
     public void exportPdf(long id, Path file) {
         session.jobs().run("Writing the PDF of record " + id, p -> {
-            try (Database db = session.openDatabase()) {
-                RecordRepository repo = new RecordRepository(db);
+            try (Opened o = open()) {
+                RecordRepository repo = o.repo();
                 SubstitutionRecord r = repo.get(id);
                 List<RecordEvent> events = repo.events(id);
                 ChainReport chain = repo.verify();
@@ -151,8 +249,8 @@ public final class RecordsModel {
 
     public void exportCsv(Path file) {
         session.jobs().run("Writing the register as CSV", p -> {
-            try (Database db = session.openDatabase()) {
-                List<SubstitutionRecord> all = new RecordRepository(db).all();
+            try (Opened o = open()) {
+                List<SubstitutionRecord> all = o.repo().all();
                 writeAtomically(file, tmp -> {
                     try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
                         RegisterCsv.write(all, w);
@@ -161,6 +259,9 @@ public final class RecordsModel {
             }
             return file;
         }, f -> session.jobs().say("Saved " + f));
+    }
+
+    private record Reading(List<SubstitutionRecord> records, RegisterInfo info) {
     }
 
     private interface FileWork {

@@ -9,6 +9,7 @@ import javafx.geometry.Insets;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
+import javafx.scene.control.ButtonBar;
 import javafx.scene.control.ButtonType;
 import javafx.scene.control.CheckBox;
 import javafx.scene.control.Dialog;
@@ -54,16 +55,25 @@ public final class RecordsView {
         Button pdf = button("Export _PDF…", "records-pdf", e -> exportPdf());
         Button csv = button("Export register _CSV…", "records-csv", e -> exportCsv());
         Button verify = button("_Verify register", "records-verify", e -> model.verify(null));
+        Button which = button("Re_gister…", "records-which", e -> chooseRegister());
         review.disableProperty().bind(Bindings.createBooleanBinding(() -> !canMove(RecordStatus.IN_REVIEW), table.getSelectionModel().selectedItemProperty()));
         approve.disableProperty().bind(Bindings.createBooleanBinding(() -> !canMove(RecordStatus.APPROVED), table.getSelectionModel().selectedItemProperty()));
         reject.disableProperty().bind(approve.disableProperty());
         pdf.disableProperty().bind(table.getSelectionModel().selectedItemProperty().isNull());
         Region grow = new Region();
         HBox.setHgrow(grow, Priority.ALWAYS);
-        HBox bar = new HBox(8, file, review, approve, reject, grow, verify, pdf, csv);
+        HBox bar = new HBox(8, file, review, approve, reject, grow, verify, pdf, csv, which);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(8, 10, 8, 10));
         bar.getStyleClass().add("toolbar-strip");
+        // which register this is, who the register takes the user for, and the rule it holds them to
+        Label where = new Label();
+        where.setId("records-register");
+        where.setWrapText(true);
+        where.textProperty().bind(Bindings.createStringBinding(() -> model.infoProperty().get() == null ? "Register: opening…"
+                : model.infoProperty().get().describe(), model.infoProperty()));
+        where.setPadding(new Insets(0, 10, 6, 10));
+        VBox top = new VBox(bar, where);
 
         table.setId("records-table");
         SortedList<SubstitutionRecord> sorted = new SortedList<>(model.records());
@@ -78,6 +88,7 @@ public final class RecordsView {
                 Columns.<SubstitutionRecord>text("Replacement", r -> r.content().replacement(), 220),
                 Columns.<SubstitutionRecord>text("Reason", r -> r.content().reason(), 150),
                 Columns.<SubstitutionRecord>text("Filed by", SubstitutionRecord::author, 90),
+                Columns.<SubstitutionRecord>text("Last step by", RecordsView::lastStep, 150),
                 Columns.<SubstitutionRecord>text("Filed (local time)", r -> LocalTimes.of(r.created()), 130)));
         table.setPlaceholder(new Label("No substitution records yet. File one with \"New record…\"."));
         TableTools.equip(table, this::exportCsv);
@@ -88,7 +99,7 @@ public final class RecordsView {
         details.getStyleClass().add("details");
         SplitPane split = new SplitPane(table, details);
         split.setDividerPositions(0.68);
-        root.setTop(bar);
+        root.setTop(top);
         root.setCenter(split);
     }
 
@@ -113,6 +124,7 @@ public final class RecordsView {
         b.append("Reason: ").append(r.content().reason()).append("\n\nHistory\n");
         for (StatusChange c : r.history()) {
             b.append(c.seq()).append(". ").append(LocalTimes.of(c.at())).append("  ").append(c.kind()).append(" by ").append(c.by())
+                    .append(c.account() == null || c.account().isBlank() ? "" : " (account " + c.account() + ")")
                     .append(c.comment() == null ? "" : " — " + c.comment()).append('\n');
         }
         b.append("\nEvidence (snapshot taken when the record was filed)\n").append(EvidenceText.of(r.evidence()));
@@ -191,16 +203,54 @@ public final class RecordsView {
         TextField by = new TextField(System.getProperty("user.name", ""));
         TextField comment = new TextField();
         comment.setPrefColumnCount(40);
+        by.setId("decision-by");
+        comment.setId("decision-comment");
         GridPane g = new GridPane();
         g.setHgap(8);
         g.setVgap(6);
         g.addRow(0, new Label("By *"), by);
         g.addRow(1, new Label("Comment"), comment);
+        RecordsModel.RegisterInfo who = model.infoProperty().get();
+        if (who != null) {
+            // the four-eyes rule compares this account with the record's author and reviewer, whatever name is typed
+            Label signedIn = new Label("Recorded under " + (who.login() ? "the database login " : "the operating-system account ") + who.account()
+                    + (who.fourEyes() ? "; four eyes: the author and the reviewer cannot approve" : "; four-eyes rule off"));
+            signedIn.setId("decision-account");
+            signedIn.setWrapText(true);
+            g.add(signedIn, 0, 2, 2, 1);
+        }
         g.setPadding(new Insets(10));
         d.getDialogPane().setContent(g);
         d.getDialogPane().getButtonTypes().addAll(ButtonType.OK, ButtonType.CANCEL);
         d.setResultConverter(b -> b == ButtonType.OK ? new String[] {by.getText(), comment.getText()} : null);
         d.showAndWait().ifPresent(a -> model.changeStatus(r.id(), next, a[0], a[1], () -> select(r.id())));
+    }
+
+    /** Who took the newest step, with the account it was taken under. */
+    static String lastStep(SubstitutionRecord r) {
+        StatusChange c = r.history().get(r.history().size() - 1);
+        return c.by() + (c.account() == null || c.account().isBlank() ? "" : " (" + c.account() + ")");
+    }
+
+    /** Chooses the local register or a shared one on PostgreSQL. */
+    private void chooseRegister() {
+        Dialog<String> d = new Dialog<>();
+        d.setTitle("Which register");
+        d.setHeaderText("The local database's register, or a shared register on a PostgreSQL server.");
+        TextField address = new TextField(model.sharedAddressProperty().get() == null ? "" : model.sharedAddressProperty().get());
+        address.setId("register-address");
+        address.setPromptText("postgresql://USER@HOST:PORT/DATABASE (empty: the local register)");
+        address.setPrefColumnCount(44);
+        Label hint = new Label("The password, if the server needs one, comes from PGPASSWORD; four eyes is held against the login.");
+        hint.setWrapText(true);
+        VBox box = new VBox(8, new Label("Shared register address"), address, hint);
+        box.setPadding(new Insets(10));
+        d.getDialogPane().setContent(box);
+        ButtonType local = new ButtonType("Use the local register", ButtonBar.ButtonData.LEFT);
+        d.getDialogPane().getButtonTypes().addAll(ButtonType.OK, local, ButtonType.CANCEL);
+        ((Button) d.getDialogPane().lookupButton(ButtonType.OK)).setText("Connect");
+        d.setResultConverter(b -> b == ButtonType.OK ? address.getText() : b == local ? "" : null);
+        d.showAndWait().ifPresent(a -> model.useRegister(a, null));
     }
 
     private void select(long id) {
