@@ -258,13 +258,14 @@ class LibraryCurationTest {
         assertEquals(Set.of("H302", "H312", "H315", "H319", "H361"), Set.of(solvent("3470-98-2").get("hazard_statements").split(" ")));
         assertEquals("supplier-sds-checked", solvent("3470-98-2").get("src_hazard_statements"));
         // Annex VI entries read from stored copies (SOURCES.md, clp-annex-vi-checked): ethanol Flam. Liq. 2 H225 only
-        // (ECHA C&L Inventory, index 603-002-00-5); acetone and ethyl acetate H225 H336 H319; n-butyl acetate H226 H336; propylene carbonate H319;
+        // (ECHA C&L Inventory, index 603-002-00-5); acetone, ethyl acetate and MEK H225 H336 H319; n-butyl acetate H226 H336; propylene carbonate H319;
         // acetonitrile H225 H302 H312 H332 H319 (ECHA Brief Profile); MIBK H225 H332 H319 H335 (GisChem); THF H225 H319 H351 H335 (GisChem); methanol H225 H301 H311 H331 H370 (BGN).
         Map<String, Set<String>> annexVi = Map.of(
                 "64-17-5", Set.of("H225"),
                 "67-64-1", Set.of("H225", "H336", "H319"),
                 "141-78-6", Set.of("H225", "H336", "H319"),
                 "123-86-4", Set.of("H226", "H336"),
+                "78-93-3", Set.of("H225", "H336", "H319"),
                 "75-05-8", Set.of("H225", "H302", "H312", "H332", "H319"),
                 "108-32-7", Set.of("H319"),
                 "108-10-1", Set.of("H225", "H332", "H319", "H335"),
