@@ -89,6 +89,8 @@ HAZARD_BASIS_KEYS = {"harmonised": "memory-clp-annex-vi", "self": "memory-suppli
                      # UN GHS classification of an International Chemical Safety Card, read from a stored copy
                      "icsc": "icsc"}
 SELF_CLASSIFICATION_NOTE = "hazard statements: supplier self-classification, check the SDS"
+# The manual note that says a solvent carries no hazard statement because it is not classified (not because none is known).
+NOT_CLASSIFIED_NOTE = "not classified as hazardous"
 # A solvent without published Hansen parameters keeps all its other data and says so (never silently dropped).
 HSP_MISSING_NOTE = ("no published Hansen parameters found: left for the structure-based estimate "
                     "(marked estimated when filled); until then left out of HSP searches")
@@ -578,6 +580,10 @@ def main(argv):
             r["src_hazard_statements"] = HAZARD_BASIS_KEYS[basis]
             if basis == "self":
                 notes.append(SELF_CLASSIFICATION_NOTE)
+        elif NOT_CLASSIFIED_NOTE in m["note"] and m.get("hazard_basis", "").strip() in HAZARD_BASIS_KEYS:
+            # "no statements" is itself the classification here (the note says so and names its basis), not a gap:
+            # the source key records it, so the ranking does not treat the liquid as unknown
+            r["src_hazard_statements"] = HAZARD_BASIS_KEYS[m["hazard_basis"].strip()]
         if m["peroxide_former"]:
             r["peroxide_former"] = "yes"
             r["src_peroxide_former"] = "memory-peroxide-formers"

@@ -65,7 +65,8 @@ public final class BlendCommand extends CohesaSubcommand {
             throw new org.cohesa.core.InvalidInputException("--max-components", String.valueOf(k),
                     "must exceed the number of fixed components (" + c.fixed().size() + ")");
         }
-        BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, k, top, rankBy, redLimit, options.keepTwoPhase, kelvin, options.weights());
+        BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, k, top, rankBy, redLimit, options.keepTwoPhase, kelvin,
+                options.weights(org.cohesa.core.blend.ProcessUse.GENERAL, null));
         BlendDesigner.Result r = BlendDesigner.design(lib.all(), req, PhaseChecks.miscibility(), BlendOptions.waterCheck(lib, c),
                 BlendView.progress(spec.commandLine().getErr()), null);
         if (json()) {

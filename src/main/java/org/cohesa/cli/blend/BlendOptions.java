@@ -23,6 +23,7 @@ import org.cohesa.core.solvent.BlendComponent;
 import org.cohesa.core.solvent.Solvent;
 import org.cohesa.core.solvent.SolventLibrary;
 import picocli.CommandLine.Option;
+import org.cohesa.core.blend.ProcessUse;
 
 /** The constraint and ranking options shared by {@code blend} and {@code replace}. */
 public final class BlendOptions {
@@ -102,8 +103,17 @@ public final class BlendOptions {
     @Option(names = "--rank-by", paramLabel = "KEY", description = "desirability (the default: qualifying blends by one documented score), or red (closest to the centre first, the exact earlier behaviour), hazard, cost, components, evaporation.")
     String rankBy = "desirability";
 
-    @Option(names = "--red-limit", paramLabel = "RED", description = "RED up to which a blend qualifies (desirability) or counts as good for the other keys (default ${DEFAULT-VALUE}: a margin of 0.2 from the sphere surface).")
-    String redLimit = "0.8";
+    @Option(names = "--red-limit", paramLabel = "RED", description = "RED up to which a blend qualifies (desirability) or counts as good for the other keys (default 0.8: a margin of 0.2 from a material's sphere surface; replace around the original: 1.0, its radius already is the tolerance).")
+    String redLimit;
+
+    @Option(names = "--process", paramLabel = "USE", description = {
+            "How the solvent must leave afterwards (a ranking term, docs/methods.md): general (blend default: it evaporates, RER ≥ 0.1, n-butyl acetate = 1),",
+            "film (coatings, inks, adhesives drying in air: RER 0.2–6), workup (stripped after a reaction: boiling point 70–139 °C), cleaning (RER 0.3–8),",
+            "as-original (replace default: boiling point near the original's) or any (no process term)."})
+    String process;
+
+    /** The limit used when --red-limit is not given (the commands set it: 0.8, or 1.0 around a replaced solvent). */
+    private double defaultRedLimit = 0.8;
 
     @Option(names = "--top", paramLabel = "N", description = "How many suggestions (default ${DEFAULT-VALUE}).")
     String top = "10";
@@ -134,7 +144,15 @@ public final class BlendOptions {
         return RankBy.parse("--rank-by", rankBy);
     }
 
+    /** Sets the limit used when the user gives none. */
+    void defaultRedLimit(double limit) {
+        defaultRedLimit = limit;
+    }
+
     double redLimit() {
+        if (redLimit == null) {
+            return defaultRedLimit;
+        }
         double r = Args.number("--red-limit", redLimit);
         if (!(r > 0) || r > 10) {
             throw new InvalidInputException("--red-limit", redLimit, "must be above 0 and at most 10");
@@ -150,15 +168,22 @@ public final class BlendOptions {
         return c + 273.15;
     }
 
-    /** The desirability weights: the preference's, then the expert's overrides. */
-    Desirability.Weights weights() {
+    /**
+     * The desirability weights: the preference's, then the expert's overrides, then the process use (--process, else
+     * {@code dflt}); {@code original} is the replaced solvent (replace) or null (blend: no as-original use).
+     */
+    Desirability.Weights weights(ProcessUse dflt, org.cohesa.core.solvent.Solvent original) {
         Desirability.Weights base = prefer == null ? Desirability.DEFAULT : Desirability.Preference.parse("--prefer", prefer).weights();
-        return weights == null ? base : Desirability.parseWeights("--weights", weights, base);
+        Desirability.Weights w = weights == null ? base : Desirability.parseWeights("--weights", weights, base);
+        ProcessUse use = process == null ? dflt : ProcessUse.parse("--process", process, original != null);
+        return w.withProcess(use, use == ProcessUse.AS_ORIGINAL ? ProcessUse.rate(original) : null);
     }
 
     /** The ranking settings as printed under --json. */
     BlendReport.Ranking ranking(org.cohesa.core.blend.BlendDesigner.Result r, Desirability.Weights w) {
-        return new BlendReport.Ranking(rankBy().word(), preferWord(), w.describe(), redLimit(), BlendView.costNote(this, r));
+        BlendReport.Process p = new BlendReport.Process(w.use().word(), w.use().meaning(), w.use().window(w.reference()), w.process(),
+                w.processCounts());
+        return new BlendReport.Ranking(rankBy().word(), preferWord(), w.describe(), redLimit(), BlendView.costNote(this, r), p);
     }
 
     /** Ranking or limiting by cost needs prices: with none in the library, say so in one line with the command that sets them. */
@@ -174,11 +199,6 @@ public final class BlendOptions {
         if (rankBy() == RankBy.COST) {
             throw new InvalidInputException("--rank-by", rankBy, why);
         }
-    }
-
-    /** True when the expert named the boiling weight. */
-    boolean boilingWeightGiven() {
-        return weights != null && weights.toLowerCase(Locale.ROOT).contains("boiling");
     }
 
     /** The preference word shown in the output. */

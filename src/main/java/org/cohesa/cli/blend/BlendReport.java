@@ -109,7 +109,11 @@ final class BlendReport {
     }
 
     record Ranking(@JsonProperty("rank_by") String rankBy, String prefer, String weights, @JsonProperty("red_limit") double redLimit,
-            @JsonProperty("cost_note") String costNote) {
+            @JsonProperty("cost_note") String costNote, Process process) {
+    }
+
+    /** The process term of the ranking: the use, what it means, its preferred window, its weight and whether it counted. */
+    record Process(String use, String meaning, String window, double weight, boolean counted) {
     }
 
     record Target(@JsonProperty("dD") double dD, @JsonProperty("dP") double dP, @JsonProperty("dH") double dH, double r0,

@@ -17,6 +17,7 @@ import org.cohesa.core.blend.BlendDesigner;
 import org.cohesa.core.blend.BlendSuggestion;
 import org.cohesa.core.blend.Desirability;
 import org.cohesa.core.blend.HazardLimit;
+import org.cohesa.core.blend.ProcessUse;
 import org.cohesa.core.safety.FlammableLiquidClass;
 import org.cohesa.core.target.Material;
 import org.cohesa.core.blend.RankedBlend;
@@ -48,6 +49,14 @@ public final class ReplaceCommand extends CohesaSubcommand {
 
     /** Default radius around the replaced solvent, MPa^½ (see the class comment for why). */
     public static final double DEFAULT_RADIUS = 4.0;
+
+    /**
+     * The qualifying RED on the sphere around the original: 1, i.e. Ra ≤ the radius. The 0.8 of a material's sphere is
+     * a margin for a fitted sphere's uncertainty; the radius around a solvent is already the chosen tolerance, and applying
+     * 0.8 to it as well shrank it to 3.2 MPa^½, where substitutes keep 85 % of the bundled materials the original
+     * dissolves instead of the 80 % the radius was chosen for (docs/methods.md, ReplaceRadiusTest).
+     */
+    public static final double CENTRED_RED_LIMIT = 1.0;
 
     @Parameters(paramLabel = "NAME", description = "The solvent to replace.")
     String name;
@@ -107,6 +116,8 @@ public final class ReplaceCommand extends CohesaSubcommand {
                 }
             }
             sphere = new SolubilitySphere(original.hansen(), r);
+            // around the original the radius itself is the tolerance (docs/methods.md): Ra ≤ radius qualifies
+            options.defaultRedLimit(CENTRED_RED_LIMIT);
         }
         int k = options.maxComponents();
         Reasons why = reasons(original);
@@ -169,14 +180,15 @@ public final class ReplaceCommand extends CohesaSubcommand {
     }
 
     /**
-     * Weight of the boiling term in replace: a substitute should leave the process the way the original does, so each
-     * 50 °C between a component's boiling point and the original's costs a point (as much as a flammability category).
+     * The default weights of replace: the process term measures from the original (a substitute should leave the process
+     * the way the original does: its evaporation rate within a factor of 3 of the original's, docs/methods.md).
      */
-    public static final double BOILING_WEIGHT = 1.0;
+    public static Desirability.Weights defaultWeights(Solvent original) {
+        return Desirability.DEFAULT.withProcess(ProcessUse.AS_ORIGINAL, ProcessUse.rate(original));
+    }
 
     static Desirability.Weights replaceWeights(BlendOptions o, Solvent original) {
-        Desirability.Weights w = o.weights();
-        return w.withBoiling(o.boilingWeightGiven() ? w.boiling() : BOILING_WEIGHT, original.boilingPointC());
+        return o.weights(ProcessUse.AS_ORIGINAL, original);
     }
 
     /** The reasons the user named, or by default the original's own health statements. */

@@ -36,66 +36,66 @@ public final class Desirability {
      * @param components points per component beyond the first
      * @param cost       points per "one median price per litre"
      * @param distance   points per unit of RED
-     * @param boiling    points per 50 °C between a component's boiling point and {@code boilingReferenceC} (replace: the
-     *                   original's), capped at 3 × the weight, also when the boiling point is unknown
-     * @param boilingReferenceC the boiling point the boiling term measures from, °C; null: no boiling term
+     * @param process    points per point of the process term ({@link ProcessUse}: how the solvent must leave the process)
+     * @param use        the process the solvent serves; {@link ProcessUse#ANY} for no process term
+     * @param reference  the replaced solvent's evaporation rate, for {@link ProcessUse#AS_ORIGINAL}; null otherwise
      */
-    public record Weights(double hazard, double components, double cost, double distance, double boiling, Double boilingReferenceC) {
+    public record Weights(double hazard, double components, double cost, double distance, double process, ProcessUse use, ProcessUse.Rate reference) {
         public Weights {
-            for (double w : new double[] {hazard, components, cost, distance, boiling}) {
+            for (double w : new double[] {hazard, components, cost, distance, process}) {
                 if (!(w >= 0) || !Double.isFinite(w) || w > 1000) {
                     throw new IllegalArgumentException("weights must be numbers from 0 to 1000, got " + w);
                 }
             }
+            java.util.Objects.requireNonNull(use, "use");
         }
 
-        /** Weights without a boiling term. */
+        /** Weights without a process term. */
         public Weights(double hazard, double components, double cost, double distance) {
-            this(hazard, components, cost, distance, 0, null);
+            this(hazard, components, cost, distance, 0, ProcessUse.ANY, null);
         }
 
-        /** The same weights measuring boiling points from {@code referenceC} with weight {@code w}. */
-        public Weights withBoiling(double w, Double referenceC) {
-            return new Weights(hazard, components, cost, distance, w, referenceC);
+        /** The same weights for another process use (and, for {@link ProcessUse#AS_ORIGINAL}, the original's evaporation rate). */
+        public Weights withProcess(ProcessUse u, ProcessUse.Rate ref) {
+            return new Weights(hazard, components, cost, distance, process, u, ref);
         }
 
-        /** "hazard 1, components 2, cost 1, distance 1". */
+        /** The same weights with another process weight. */
+        public Weights withProcessWeight(double w) {
+            return new Weights(hazard, components, cost, distance, w, use, reference);
+        }
+
+        /** True when the process term counts. */
+        public boolean processCounts() {
+            return process > 0 && use != ProcessUse.ANY && (use != ProcessUse.AS_ORIGINAL || reference != null);
+        }
+
+        /** "hazard 1, components 2, cost 1, distance 1, process 1 (general: RER ≥ 0.1 (n-butyl acetate = 1))". */
         public String describe() {
             return "hazard " + HazardPenalty.fmt(hazard) + ", components " + HazardPenalty.fmt(components) + ", cost "
                     + HazardPenalty.fmt(cost) + ", distance " + HazardPenalty.fmt(distance)
-                    + (boilingReferenceC == null || boiling == 0 ? "" : ", boiling " + HazardPenalty.fmt(boiling) + " per 50 °C from "
-                    + HazardPenalty.fmt(Math.round(boilingReferenceC)) + " °C");
+                    + (processCounts() ? ", process " + HazardPenalty.fmt(process) + " (" + use.word() + ": " + use.window(reference) + ")"
+                    : ", no process term");
         }
     }
 
-    /** Points of the boiling term per 50 °C, unweighted, for one solvent (0 without a reference). */
-    static double boilingPoints(Solvent s, Double referenceC) {
-        if (referenceC == null) {
-            return 0;
-        }
-        if (s.boilingPointC() == null) {
-            return 3; // unknown: as far as the cap (a substitute must be shown to leave the process like the original)
-        }
-        return Math.min(3, Math.abs(s.boilingPointC() - referenceC) / 50.0);
-    }
-
-    /** The weighted penalty one component brings: hazard and (replace) boiling distance. The blend takes its worst component's. */
+    /** The weighted penalty one component brings: hazard and process term. The blend takes its worst component's. */
     static double componentPenalty(Solvent s, Weights w) {
-        return w.hazard() * HazardPenalty.of(s).points() + (w.boilingReferenceC() == null ? 0 : w.boiling() * boilingPoints(s, w.boilingReferenceC()));
+        return w.hazard() * HazardPenalty.of(s).points() + (w.processCounts() ? w.process() * w.use().of(s, w.reference()).points() : 0);
     }
 
     /** What the user leans towards; each preset is a set of weights (docs/methods.md gives the reasons). */
     public enum Preference {
         /** The default: no CMR (a constraint), then fewer components, then lower hazard, cost, margin. */
-        BALANCED(new Weights(1, 2, 1, 1)),
+        BALANCED(new Weights(1, 2, 1, 1, 1, ProcessUse.GENERAL, null)),
         /** Hazard counts twice, an extra component half as much. */
-        SAFETY(new Weights(2, 1, 0.5, 1)),
+        SAFETY(new Weights(2, 1, 0.5, 1, 1, ProcessUse.GENERAL, null)),
         /** Each extra component costs as much as a CMR-suspect statement: singles and pairs first. */
-        SIMPLICITY(new Weights(1, 6, 1, 1)),
+        SIMPLICITY(new Weights(1, 6, 1, 1, 1, ProcessUse.GENERAL, null)),
         /** Price dominates (needs prices). */
-        COST(new Weights(1, 2, 5, 1)),
-        /** Closest to the centre first, hazard and components only break near-ties. */
-        CLOSENESS(new Weights(0.25, 1, 0.25, 10));
+        COST(new Weights(1, 2, 5, 1, 1, ProcessUse.GENERAL, null)),
+        /** Closest to the centre first, hazard, components and process only break near-ties. */
+        CLOSENESS(new Weights(0.25, 1, 0.25, 10, 0.25, ProcessUse.GENERAL, null));
 
         private final Weights weights;
 
@@ -130,8 +130,8 @@ public final class Desirability {
      * @throws InvalidInputException naming the field and the bad part
      */
     public static Weights parseWeights(String field, String text, Weights base) {
-        double[] w = {base.hazard(), base.components(), base.cost(), base.distance(), base.boiling()};
-        String[] names = {"hazard", "components", "cost", "distance", "boiling"};
+        double[] w = {base.hazard(), base.components(), base.cost(), base.distance(), base.process()};
+        String[] names = {"hazard", "components", "cost", "distance", "process"};
         for (String part : text.split(",")) {
             String p = part.strip();
             if (p.isEmpty()) {
@@ -139,9 +139,12 @@ public final class Desirability {
             }
             int eq = p.indexOf('=');
             if (eq <= 0) {
-                throw new InvalidInputException(field, text, "write NAME=NUMBER pairs, e.g. hazard=1,components=2,cost=1,distance=1");
+                throw new InvalidInputException(field, text, "write NAME=NUMBER pairs, e.g. hazard=1,components=2,cost=1,distance=1,process=1");
             }
             String key = p.substring(0, eq).strip().toLowerCase(Locale.ROOT);
+            if (key.equals("boiling")) {
+                key = "process"; // the earlier name of the replace boiling term, now one of the process uses
+            }
             int idx = -1;
             for (int i = 0; i < names.length; i++) {
                 if (names[i].equals(key)) {
@@ -149,7 +152,7 @@ public final class Desirability {
                 }
             }
             if (idx < 0) {
-                throw new InvalidInputException(field, p, "unknown weight '" + key + "'; weights are hazard, components, cost, distance, boiling");
+                throw new InvalidInputException(field, p, "unknown weight '" + key + "'; weights are hazard, components, cost, distance, process");
             }
             double v;
             try {
@@ -162,7 +165,7 @@ public final class Desirability {
             }
             w[idx] = v;
         }
-        return new Weights(w[0], w[1], w[2], w[3], w[4], base.boilingReferenceC());
+        return new Weights(w[0], w[1], w[2], w[3], w[4], base.use(), base.reference());
     }
 
     /** Median price per litre of the solvents that have one, or NaN when none has. */
@@ -202,14 +205,18 @@ public final class Desirability {
         List<String> shown = worstP == null ? List.of() : worstP.terms();
         String who = components.size() == 1 ? "" : "worst component " + worst.name() + ": ";
         String boil = "";
-        if (worst != null && weights.boilingReferenceC() != null && weights.boiling() > 0) {
-            double b = boilingPoints(worst, weights.boilingReferenceC());
-            boil = worst.boilingPointC() == null ? "; boiling point unknown (+" + HazardPenalty.fmt(weights.boiling() * b) + ")"
-                    : String.format(Locale.ROOT, "; boils %.0f °C from the original (+%s)", Math.abs(worst.boilingPointC() - weights.boilingReferenceC()),
-                    HazardPenalty.fmt(Math.round(weights.boiling() * b * 100) / 100.0));
+        if (worst != null && weights.processCounts()) {
+            ProcessUse.Term pt = weights.use().of(worst, weights.reference());
+            if (pt.points() > 0) {
+                boil = "; " + pt.text() + " (+" + HazardPenalty.fmt(Math.round(weights.process() * pt.points() * 100) / 100.0) + ")";
+            }
         }
         why.add((hazard == 0 ? (components.size() == 1 ? "no hazard terms" : who + "no hazard terms")
                 : who + "hazard " + HazardPenalty.fmt(hazard) + " (" + String.join(", ", shown) + ")") + boil);
+        if (weights.processCounts() && components.stream().allMatch(c -> weights.use().of(c.solvent(), weights.reference()).points() == 0)) {
+            why.add("process " + weights.use().word() + ": " + (components.size() == 1 ? "inside " : "every component inside ")
+                    + weights.use().window(weights.reference()) + rateNote(components, weights.use()));
+        }
         int k = components.size();
         why.add(k + (k == 1 ? " component" : " components"));
         // a sphere position resting on a structure estimate (δP error about 2 MPa½) must say so beside the rank
@@ -231,6 +238,27 @@ public final class Desirability {
         double score = Math.max(0, worstPen) + weights.components() * (k - 1) + weights.cost() * cost + weights.distance() * red;
         why.add(String.format(Locale.ROOT, "score %.2f", score));
         return new Explanation(score, hazard, worst == null ? null : worst.name(), why);
+    }
+
+    /** ", RER 3.8" or ", RER 0.68–3.8" for an RER window (how fast the components evaporate, n-butyl acetate = 1). */
+    private static String rateNote(List<BlendComponent> components, ProcessUse use) {
+        if (use == ProcessUse.WORKUP || use == ProcessUse.ANY) {
+            return "";
+        }
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = 0;
+        boolean estimated = false;
+        for (BlendComponent c : components) {
+            ProcessUse.Rate r = ProcessUse.rate(c.solvent());
+            if (r == null) {
+                return "";
+            }
+            lo = Math.min(lo, r.rer());
+            hi = Math.max(hi, r.rer());
+            estimated |= r.fromBoilingPoint();
+        }
+        return ", RER " + (lo == hi ? ProcessUse.rerText(lo) : ProcessUse.rerText(lo) + "–" + ProcessUse.rerText(hi))
+                + (estimated ? " (partly estimated from the boiling point)" : "");
     }
 
     /**

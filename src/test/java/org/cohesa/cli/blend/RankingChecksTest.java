@@ -146,7 +146,7 @@ class RankingChecksTest {
             SolubilitySphere sphere = new SolubilitySphere(original.hansen(), ReplaceCommand.DEFAULT_RADIUS);
             List<HazardLimit> limits = HazardLimit.from(original, HazardLimit.DEFAULT_KINDS);
             // as replace does: the boiling term measures from the original's boiling point
-            BlendDesigner.Result r = design(sphere, defaults(limits, original), Desirability.DEFAULT.withBoiling(ReplaceCommand.BOILING_WEIGHT, original.boilingPointC()));
+            BlendDesigner.Result r = design(sphere, defaults(limits, original), ReplaceCommand.defaultWeights(original));
             List<String> offered = new ArrayList<>();
             r.suggestions().forEach(s -> solvents(s).forEach(v -> offered.add(v.name())));
             List<String> found = e.getValue().stream().filter(offered::contains).toList();
