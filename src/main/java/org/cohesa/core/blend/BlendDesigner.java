@@ -98,7 +98,9 @@ public final class BlendDesigner {
             List<BlendSuggestion> list = SuggestionList.arrange(sc.ordered(), req.top(), fixed);
             // Too many left out (two phases, flash point) or folded while the search had more to give: search again, wider.
             long tested = list.stream().filter(x -> x.phase() == null || x.phase().checked()).count();
-            if (tested >= req.top() || o.blends().size() < keep || keep >= MAX_KEEP) {
+            // the share rule may only give way when the search has nothing more to give, so widen while it had to
+            boolean distinct = SuggestionList.ideas(sc.ordered(), req.top(), fixed) >= Math.min(req.top(), list.size());
+            if ((tested >= req.top() && distinct) || o.blends().size() < keep || keep >= MAX_KEEP) {
                 list = keepSimpleInView(list, pool, req, checks, refPrice, fixed, progress, cancel);
                 return new Result(list, pool, o.subsets(), o.solved(), sc.droppedTwoPhase, sc.droppedFlash, sc.droppedBoiling, refPrice,
                         sc.droppedWater);

@@ -59,7 +59,17 @@ class RankingChecksTest {
     }
 
     static BlendDesigner.Result design(SolubilitySphere sphere, BlendConstraints c, Desirability.Weights w) {
-        BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, 3, 10, RankBy.DESIRABILITY, 0.8, false, 298.15, w);
+        return design(sphere, c, w, 0.8);
+    }
+
+    /** As replace does around the original: Ra ≤ the radius qualifies (RED 1.0). */
+    static BlendDesigner.Result replaceAround(Solvent original, BlendConstraints c) {
+        return design(new SolubilitySphere(original.hansen(), ReplaceCommand.DEFAULT_RADIUS), c, ReplaceCommand.defaultWeights(original),
+                ReplaceCommand.CENTRED_RED_LIMIT);
+    }
+
+    static BlendDesigner.Result design(SolubilitySphere sphere, BlendConstraints c, Desirability.Weights w, double redLimit) {
+        BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, 3, 10, RankBy.DESIRABILITY, redLimit, false, 298.15, w);
         return BlendDesigner.design(library, req, PhaseChecks.miscibility(), null, null);
     }
 
@@ -145,8 +155,8 @@ class RankingChecksTest {
             Solvent original = BundledLiquids.get(e.getKey());
             SolubilitySphere sphere = new SolubilitySphere(original.hansen(), ReplaceCommand.DEFAULT_RADIUS);
             List<HazardLimit> limits = HazardLimit.from(original, HazardLimit.DEFAULT_KINDS);
-            // as replace does: the boiling term measures from the original's boiling point
-            BlendDesigner.Result r = design(sphere, defaults(limits, original), ReplaceCommand.defaultWeights(original));
+            // as replace does: Ra ≤ radius qualifies, the process term measures from the original's evaporation rate
+            BlendDesigner.Result r = replaceAround(original, defaults(limits, original));
             List<String> offered = new ArrayList<>();
             r.suggestions().forEach(s -> solvents(s).forEach(v -> offered.add(v.name())));
             List<String> found = e.getValue().stream().filter(offered::contains).toList();
@@ -165,18 +175,51 @@ class RankingChecksTest {
                     String out = r.pool().leftOut().entrySet().stream().filter(x -> x.getValue().contains(s.get().name())).map(Map.Entry::getKey)
                             .findFirst().orElse(null);
                     double red = sphere.red(s.get().hansen());
-                    why = out != null ? "left out: " + out : red > 0.8 ? String.format("outside the replaced solvent's sphere (RED %.2f > 0.8)", red)
-                            : "ranked below ten other ideas";
+                    double limit = ReplaceCommand.CENTRED_RED_LIMIT;
+                    why = out != null ? "left out: " + out : red > limit ? String.format("outside the replaced solvent's sphere (RED %.2f > %.1f)", red, limit)
+                            : "ranked below ten other ideas: " + String.join("; ", Desirability.explain(List.of(new BlendComponent(s.get(), 1.0)), red, limit,
+                            ReplaceCommand.defaultWeights(original), Double.NaN).why());
                 }
                 whyNot.add(name + ": " + why);
             }
             report.append(e.getKey()).append(" → found ").append(found).append("; not: ").append(whyNot).append('\n');
+            // a data reason (not in the library, no parameters, left out by a rule, outside the sphere) or the ranking terms that put
+            // it lower; dichloromethane is the known case of the second kind (2-MeTHF: hazard 7.5 against 4 for the leaders)
             boolean explained = whyNot.stream().noneMatch(w -> w.endsWith("ranked below ten other ideas"));
             assertTrue(!found.isEmpty() || explained, "replacing " + e.getKey() + ": no published replacement in the top 10 and no reason:\n" + report);
+            if (!e.getKey().equals("dichloromethane")) {
+                assertFalse(found.isEmpty(), "replacing " + e.getKey() + ": no published replacement in the top 10:\n" + report);
+            }
         }
-        // The dipolar aprotics are the published success stories: their own-sphere search must find a published answer.
-        assertTrue(report.toString().lines().filter(l -> l.startsWith("N")).allMatch(l -> !l.contains("found []")), report.toString());
+        // The dipolar aprotics are the published success stories: the first suggestion must be a published answer.
+        for (String aprotic : List.of("N,N-dimethylformamide", "N-methyl-2-pyrrolidone")) {
+            Solvent original = BundledLiquids.get(aprotic);
+            BlendDesigner.Result r = replaceAround(original, defaults(HazardLimit.from(original, HazardLimit.DEFAULT_KINDS), original));
+            List<String> first = solvents(r.suggestions().get(0)).stream().map(Solvent::name).toList();
+            assertTrue(PUBLISHED.get(aprotic).containsAll(first), aprotic + ": #1 is " + first + ", not a published replacement");
+        }
         System.out.println(report);
+    }
+
+    /**
+     * PMMA for a coating or adhesive: the lacquer solvents of the trade are acetone, MEK, ethyl and butyl acetate, MIBK,
+     * toluene and xylene (Polymer Handbook solvent lists and lacquer practice; from memory). The default top three must
+     * hold one of them, and every one of the three must evaporate (RER ≥ 0.2, at most a factor 1.5 below the general process window) — before the
+     * process term, a 226 °C Cyrene led and propylene glycol diacetate and DMSO would have, once recorded as not classified.
+     */
+    @Test
+    void pmmaStartsWithALacquerSolventAndNothingThatStaysInTheFilm() {
+        Material pmma = materials.stream().filter(m -> m.name().startsWith("poly(methyl methacrylate)")).findFirst().orElseThrow();
+        List<BlendSuggestion> top = forMaterial(pmma).suggestions().subList(0, 3);
+        List<String> lacquer = List.of("acetone", "methyl ethyl ketone", "ethyl acetate", "n-butyl acetate", "methyl isobutyl ketone", "toluene", "xylene");
+        assertTrue(top.stream().anyMatch(s -> solvents(s).stream().anyMatch(v -> lacquer.contains(v.name()))),
+                top.stream().map(s -> s.blend().blend().describe()).toList().toString());
+        for (BlendSuggestion s : top) {
+            for (Solvent v : solvents(s)) {
+                // at most a factor 1.5 below the window (anisole, RER 0.29, is a common PMMA casting solvent)
+                assertTrue(org.cohesa.core.blend.ProcessUse.GENERAL.of(v, null).points() < 0.55, v.name() + " stays in the film");
+            }
+        }
     }
 
     @Test
@@ -185,7 +228,7 @@ class RankingChecksTest {
             Solvent original = BundledLiquids.get(name);
             List<HazardLimit> limits = HazardLimit.from(original, HazardLimit.DEFAULT_KINDS);
             assertFalse(limits.isEmpty(), name + " is replaced for its health statements");
-            BlendDesigner.Result r = design(new SolubilitySphere(original.hansen(), ReplaceCommand.DEFAULT_RADIUS), defaults(limits, original));
+            BlendDesigner.Result r = replaceAround(original, defaults(limits, original));
             for (BlendSuggestion s : r.suggestions()) {
                 for (Solvent v : solvents(s)) {
                     for (HazardLimit h : limits) {
