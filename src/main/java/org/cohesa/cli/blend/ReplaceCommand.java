@@ -48,7 +48,7 @@ import picocli.CommandLine.Parameters;
 public final class ReplaceCommand extends CohesaSubcommand {
 
     /** Default radius around the replaced solvent, MPa^½ (see the class comment for why). */
-    public static final double DEFAULT_RADIUS = 4.0;
+    public static final double DEFAULT_RADIUS = Desirability.AROUND_ORIGINAL_RADIUS;
 
     /**
      * The qualifying RED on the sphere around the original: 1, i.e. Ra ≤ the radius. The 0.8 of a material's sphere is
@@ -56,7 +56,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
      * 0.8 to it as well shrank it to 3.2 MPa^½, where substitutes keep 85 % of the bundled materials the original
      * dissolves instead of the 80 % the radius was chosen for (docs/methods.md, ReplaceRadiusTest).
      */
-    public static final double CENTRED_RED_LIMIT = 1.0;
+    public static final double CENTRED_RED_LIMIT = Desirability.AROUND_ORIGINAL_RED_LIMIT;
 
     @Parameters(paramLabel = "NAME", description = "The solvent to replace.")
     String name;

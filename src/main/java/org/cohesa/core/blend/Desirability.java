@@ -121,6 +121,15 @@ public final class Desirability {
         }
     }
 
+    /** RED up to which a blend qualifies on a material's sphere: a margin of 0.2 for the sphere's uncertainty (docs/methods.md). */
+    public static final double MATERIAL_RED_LIMIT = 0.8;
+
+    /** Radius of the sphere around a replaced solvent, MPa^½ (docs/methods.md, "Replacing a solvent"). */
+    public static final double AROUND_ORIGINAL_RADIUS = 4.0;
+
+    /** RED limit on the sphere around a replaced solvent: Ra ≤ the radius (the radius already is the tolerance). */
+    public static final double AROUND_ORIGINAL_RED_LIMIT = 1.0;
+
     /** Default weights (the balanced preference). */
     public static final Weights DEFAULT = Preference.BALANCED.weights();
 

@@ -57,6 +57,8 @@ public record Evidence(String canonicalJson) {
         public static final String DRYING = "drying";
         public static final String SAFETY = "safety";
         public static final String CAUTIONS = "cautions";
+        /** Why the replacement ranks as it does: the desirability terms ({@link RankingEvidence}). */
+        public static final String RANKING = "ranking";
         public static final String DATA_SOURCES = "data_sources";
 
         private Sections() {

@@ -10,8 +10,9 @@ import org.cohesa.core.solvent.Blend;
 
 /**
  * Takes the whole evidence snapshot for a substitution from the workflows: liquids, target, Ra/RED
- * ({@link EvidenceBuilder}), the safety profile and cautions of both liquids ({@code org.cohesa.core.safety}) and,
- * with a target, both liquids' drying paths at 25 °C to 95 % evaporated ({@code org.cohesa.core.drying} defaults).
+ * ({@link EvidenceBuilder}), the safety profile and cautions of both liquids ({@code org.cohesa.core.safety}),
+ * with a target, both liquids' drying paths at 25 °C to 95 % evaporated ({@code org.cohesa.core.drying} defaults), and
+ * the ranking terms of the replacement ({@link RankingEvidence}: the `why` replace prints).
  * A workflow that cannot describe a liquid leaves a note in its section instead of failing the filing.
  */
 public final class EvidenceAssembler {
@@ -73,6 +74,11 @@ public final class EvidenceAssembler {
         } else {
             b.section(Evidence.Sections.DRYING, CanonicalJson.object()
                     .put("note", "No drying path: it is followed as RED to a target, and no target was given."));
+        }
+        try {
+            b.section(Evidence.Sections.RANKING, RankingEvidence.section(replaced, replacement, target));
+        } catch (IllegalArgumentException | IllegalStateException e) {
+            b.section(Evidence.Sections.RANKING, CanonicalJson.object().put("note", "no ranking terms: " + e.getMessage()));
         }
         return b.build();
     }

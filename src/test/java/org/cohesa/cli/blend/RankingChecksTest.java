@@ -222,6 +222,21 @@ class RankingChecksTest {
         }
     }
 
+    /** A record filed for the first substitute carries the same reasons replace printed for it (issue 11: the why in the evidence). */
+    @Test
+    void theFiledEvidenceCarriesTheWhyReplaceShowed() {
+        Solvent dmf = BundledLiquids.get("N,N-dimethylformamide");
+        BlendSuggestion first = replaceAround(dmf, defaults(HazardLimit.from(dmf, HazardLimit.DEFAULT_KINDS), dmf)).suggestions().get(0);
+        org.cohesa.core.records.Evidence e = org.cohesa.core.records.EvidenceAssembler.assemble(org.cohesa.core.solvent.Blend.pure(dmf),
+                new org.cohesa.core.solvent.Blend(first.blend().components()), null, Map.of(), "test");
+        com.fasterxml.jackson.databind.JsonNode ranking = e.section(org.cohesa.core.records.Evidence.Sections.RANKING).orElseThrow();
+        List<String> filed = new ArrayList<>();
+        ranking.get("why").forEach(n -> filed.add(n.asText()));
+        List<String> shown = first.why().stream().filter(w -> !w.equals("no prices entered")).toList();
+        assertEquals(shown, filed, ranking.toString());
+        assertTrue(ranking.get("qualifies").asBoolean(), ranking.toString());
+    }
+
     @Test
     void replaceNeverOffersACandidateWithAStatementTheOriginalIsReplacedFor() {
         for (String name : List.of("N-methyl-2-pyrrolidone", "N,N-dimethylformamide", "dichloromethane", "toluene", "chloroform", "1,4-dioxane")) {

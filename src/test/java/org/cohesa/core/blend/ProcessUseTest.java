@@ -10,6 +10,8 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVRecord;
 import org.cohesa.core.activity.BundledLiquids;
 import org.cohesa.core.drying.EvaporationRates;
 import org.cohesa.core.solvent.Solvent;
@@ -26,10 +28,8 @@ class ProcessUseTest {
         List<Published> out = new ArrayList<>();
         try (InputStream in = EvaporationRates.class.getResourceAsStream("/org/cohesa/core/drying/relative-evaporation-rates.csv");
                 BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8))) {
-            r.readLine();
-            for (String line = r.readLine(); line != null; line = r.readLine()) {
-                String[] f = line.split(",");
-                out.add(new Published(f[0], Double.parseDouble(f[1])));
+            for (CSVRecord rec : CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(r)) {
+                out.add(new Published(rec.get("name"), Double.parseDouble(rec.get("relative_rate"))));
             }
         }
         return out;
@@ -105,8 +105,8 @@ class ProcessUseTest {
 
     /**
      * The boiling-point fallback is a least-squares line of log₁₀ RER on the boiling point over every bundled liquid with a
-     * predicted rate; re-fitted here, it must give the constants in ProcessUse and its rms error (0.36 decades) stays below
-     * 0.4 decades.
+     * predicted rate; re-fitted here, it must give the constants in ProcessUse and its rms error (0.71 decades) stays below
+     * 0.75 decades (a factor of 5.6: a rough placing, used only where no curve exists).
      */
     @Test
     void theBoilingPointFallbackIsTheLeastSquaresLineOverTheLibrary() {
@@ -133,11 +133,11 @@ class ProcessUseTest {
         double intercept = my - slope * mx;
         double rms = Math.sqrt(pts.stream().mapToDouble(p -> Math.pow(p[1] - (intercept + slope * p[0]), 2)).sum() / n);
         String fit = String.format(Locale.ROOT, "n %d, log10 RER = %.3f - %.5f t_b, rms %.3f", n, intercept, -slope, rms);
-        assertTrue(n > 240, fit);
+        assertTrue(n > 270, fit);
         assertEquals(ProcessUse.BP_INTERCEPT, intercept, 0.05, fit);
         assertEquals(ProcessUse.BP_SLOPE, -slope, 0.0005, fit);
-        assertTrue(rms < 0.4, fit);
-        Solvent cpme = BundledLiquids.get("cyclopentyl methyl ether");
-        assertTrue(ProcessUse.rate(cpme).fromBoilingPoint(), "CPME has no vapour-pressure curve in the library");
+        assertTrue(rms < 0.75, fit);
+        Solvent dpma = BundledLiquids.get("dipropylene glycol methyl ether acetate");
+        assertTrue(ProcessUse.rate(dpma).fromBoilingPoint(), "DPMA has no vapour-pressure curve in the library");
     }
 }
