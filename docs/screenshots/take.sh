@@ -33,15 +33,29 @@ shot space-3d --screen=space --view=3d "$target" --select=toluene "--blend=aceto
 shot space-p-h --screen=space --view=p-h "$target" --select=toluene
 shot space-d-h --screen=space --view=d-h "$target" --select=toluene
 shot space-teas --screen=space --view=teas "$target" --select=toluene
-# the register, with two invented records filed from the command line first
+# the register: the shared register on a throwaway local PostgreSQL server (docs/tools/local-postgres.sh), three
+# invented records filed, reviewed and approved by three logins, shown to the third (four eyes holds against logins)
+pg_dir="$(mktemp -d "${TMPDIR:-/tmp}/cohesa-shots-pg.XXXXXX")"
+export COHESA_PG_PORT="${COHESA_PG_PORT:-54339}"
+docs/tools/local-postgres.sh start "$pg_dir" >/dev/null
+psql_bin="$(ls -d /usr/lib/postgresql/*/bin/psql 2>/dev/null | sort -V | tail -1)"
+"$psql_bin" -q -h 127.0.0.1 -p "$COHESA_PG_PORT" -U postgres -c "CREATE DATABASE site_register" \
+  -c "CREATE ROLE r_formulator LOGIN" -c "CREATE ROLE q_reviewer LOGIN" -c "CREATE ROLE m_manager LOGIN" >/dev/null
+reg() { echo "postgresql://$1@127.0.0.1:$COHESA_PG_PORT/site_register"; }
 cli() { COHESA_HOME="$home" java -jar target/cohesa.jar "$@" >/dev/null; }
-cli record add --process "Alkyd enamel thinner, line 2 (invented demo)" --site "Larchmere Coatings (fictional)" \
+cli record verify --register "$(reg postgres)" || true   # the owner's first connection sets the register up
+"$psql_bin" -q -h 127.0.0.1 -p "$COHESA_PG_PORT" -U postgres -d site_register \
+  -c "GRANT cohesa_register_writer TO r_formulator, q_reviewer, m_manager" >/dev/null
+cli record add --register "$(reg r_formulator)" --process "Alkyd enamel thinner, line 2 (invented demo)" --site "Larchmere Coatings (fictional)" \
   --replaced toluene --replacement "n-butyl acetate:0.6,ethyl acetate:0.4" --reason "regulatory: reprotoxic aromatic (H361d)" \
   --author "R. Formulator" --material "medium-oil alkyd"
-cli record review 1 --by "Q. Reviewer"
-cli record approve 1 --by "M. Manager" --comment "lab trials passed"
-cli record add --process "Extraction of OPL-114 (invented demo)" --site "Oakfield process lab (fictional)" \
+cli record review 1 --register "$(reg q_reviewer)" --by "Q. Reviewer" --comment "evidence complete"
+cli record approve 1 --register "$(reg m_manager)" --by "M. Manager" --comment "lab trials passed"
+cli record add --register "$(reg r_formulator)" --process "Extraction of OPL-114 (invented demo)" --site "Oakfield process lab (fictional)" \
   --replaced dichloromethane --replacement "2-methyltetrahydrofuran:1" --reason "safety: suspected carcinogen (H351)" \
   --author "P. Chemist" --target 17.8,7.5,7.0,7.0
-shot register --screen=register
+cli record review 2 --register "$(reg q_reviewer)" --by "Q. Reviewer"
+COHESA_REGISTER="$(reg m_manager)" shot register --screen=register
+COHESA_REGISTER="$(reg m_manager)" sized register --screen=register
+docs/tools/local-postgres.sh stop "$pg_dir"; rm -rf "$pg_dir"
 rm -rf "$home"

@@ -93,6 +93,16 @@ public final class RecordsView {
         table.setPlaceholder(new Label("No substitution records yet. File one with \"New record…\"."));
         TableTools.equip(table, this::exportCsv);
         table.getSelectionModel().selectedItemProperty().addListener((o, a, r) -> details.setText(r == null ? "" : describe(r)));
+        // a register opened shows its first record at once rather than an empty details pane
+        model.records().addListener((javafx.collections.ListChangeListener<SubstitutionRecord>) c -> {
+            if (table.getSelectionModel().isEmpty() && !table.getItems().isEmpty()) {
+                javafx.application.Platform.runLater(() -> {
+                    if (table.getSelectionModel().isEmpty() && !table.getItems().isEmpty()) {
+                        table.getSelectionModel().select(0);
+                    }
+                });
+            }
+        });
         details.setId("record-details");
         details.setEditable(false);
         details.setWrapText(true);
