@@ -138,6 +138,12 @@ class FitCommandTest {
         Run bad = run("fit", demo().toString(), "--prior-smiles", "C1CC(");
         assertEquals(2, bad.code());
         assertTrue(bad.err().startsWith("error: --prior-smiles"), bad.err());
+        // a material added by its structure brings that estimate, with the same spreads, as --prior
+        Run added = run("materials", "add", "--name", "DS-3 test", "--smiles", "CC(=O)Oc1ccccc1C(=O)O");
+        assertEquals(0, added.code(), added.err());
+        JsonNode viaMaterial = new ObjectMapper().readTree(run("fit", demo().toString(), "--json", "--prior", "DS-3 test").out()).get("prior");
+        assertEquals("structure estimate", viaMaterial.get("kind").asText(), viaMaterial.toString());
+        assertEquals(p.get("sd_dP").asDouble(), viaMaterial.get("sd_dP").asDouble(), 1e-9);
         Run lonely = run("fit", demo().toString(), "--prior-spread", "2");
         assertEquals(2, lonely.code());
         assertTrue(lonely.err().startsWith("error: --prior-spread"), lonely.err());

@@ -22,7 +22,19 @@ public final class MaterialFromStructure {
     public record Centre(double dD, double dP, double dH, double r0, String source, List<String> lines) {
     }
 
+    private static final String ESTIMATED_FROM = "estimated from the structure ";
+    private static final String ESTIMATED_BY = " (Mathieu 2018 group contribution)";
+
     private MaterialFromStructure() {
+    }
+
+    /** The SMILES of a material whose centre {@link #centre} estimated (its source says so), or null for any other source. */
+    public static String estimatedFrom(String source) {
+        if (source == null || !source.startsWith(ESTIMATED_FROM) || !source.endsWith(ESTIMATED_BY)) {
+            return null;
+        }
+        String smiles = source.substring(ESTIMATED_FROM.length(), source.length() - ESTIMATED_BY.length()).strip();
+        return smiles.isEmpty() || smiles.contains(" ") ? null : smiles;
     }
 
     public static Centre centre(String smiles, String dD, String dP, String dH, String r0) {
@@ -46,7 +58,7 @@ public final class MaterialFromStructure {
             d = round(e.dD().value());
             p = round(e.dP().value());
             h = round(e.dH().value());
-            source = "estimated from the structure " + e.structure().smiles() + " (Mathieu 2018 group contribution)";
+            source = ESTIMATED_FROM + e.structure().smiles() + ESTIMATED_BY;
             lines.add(SolventFromStructure.line("δD", e.dD()));
             lines.add(SolventFromStructure.line("δP", e.dP()));
             lines.add(SolventFromStructure.line("δH", e.dH()));

@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Locale;
 import org.cohesa.core.InvalidInputException;
 
+import org.cohesa.cli.structure.MaterialFromStructure;
 import org.cohesa.cli.structure.StructureEstimates;
 import org.cohesa.core.solvent.SolventLibrary;
 import org.cohesa.core.structure.MeasuredProperties;
@@ -163,14 +164,19 @@ public final class FitCommand extends CohesaSubcommand {
         if (priorSpread != null && !(priorSpread >= 0.5 && priorSpread <= 20)) {
             throw new InvalidInputException("--prior-spread", String.valueOf(priorSpread), "must lie between 0.5 and 20 MPa^½");
         }
+        String smiles = priorSmiles;
         if (prior != null) {
             Material related = ctx().materials().library().resolve("--prior", prior);
-            return CentrePrior.inRa(related.sphere().centre(), priorSpread == null ? CentrePrior.DEFAULT_SPREAD : priorSpread,
-                    "published sphere of " + related.name() + " (" + related.source() + ")");
+            smiles = related.userEntry() ? MaterialFromStructure.estimatedFrom(related.source()) : null;
+            if (smiles == null) {
+                return CentrePrior.inRa(related.sphere().centre(), priorSpread == null ? CentrePrior.DEFAULT_SPREAD : priorSpread,
+                        (related.userEntry() ? "your material " : "published sphere of ") + related.name() + " (" + related.source() + ")");
+            }
+            // a material added by its structure: its centre is that estimate, so it gets the estimate's spreads
         }
-        StructureEstimate e = StructureEstimates.estimate("--prior-smiles", priorSmiles, MeasuredProperties.NONE);
+        StructureEstimate e = StructureEstimates.estimate(field, smiles, MeasuredProperties.NONE);
         if (!e.hasHansen()) {
-            throw new InvalidInputException("--prior-smiles", priorSmiles, "the group method cannot estimate "
+            throw new InvalidInputException(field, value, "the group method cannot estimate "
                     + (e.dD() == null ? "δD" : e.dP() == null ? "δP" : "δH") + " for this structure, so it cannot serve as a prior; "
                     + "use --prior with a related material instead");
         }
