@@ -71,7 +71,8 @@ public final class FitCommand extends CohesaSubcommand {
     String method = FitMethod.LIKELIHOOD.key();
 
     @Option(names = "--prior", paramLabel = "MATERIAL", description = "Likelihood fit only: pull the centre towards the published sphere of a "
-            + "related library material (a Gaussian prior in Ra; the output says so).")
+            + "related library material (a Gaussian prior in Ra), or towards the estimate of one of your materials added by --smiles "
+            + "(as --prior-smiles); the output says so.")
     String prior;
 
     @Option(names = "--prior-smiles", paramLabel = "SMILES", description = "Likelihood fit only: pull the centre towards the centre estimated "
