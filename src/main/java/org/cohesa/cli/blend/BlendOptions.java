@@ -76,7 +76,7 @@ public final class BlendOptions {
     @Option(names = "--ich-unlisted", paramLabel = "keep|leave-out", description = "With --max-ich-class: keep or leave out solvents ICH Q3C does not list (they need a justification under Q3C; default ${DEFAULT-VALUE}).")
     String ichUnlisted = "leave-out";
 
-    @Option(names = "--exclude-reactive", paramLabel = "FLAGS", description = "Leave out reactive solvents: acid (carboxylic acids), amine (amines, pyridines), nitro (nitroalkanes), peroxide (peroxide formers), dicarbonyl (acetoacetates, malonates: active methylene), or all.")
+    @Option(names = "--exclude-reactive", paramLabel = "FLAGS", description = "Leave out reactive solvents: acid (carboxylic acids), amine (amines, pyridines), nitro (nitroalkanes), peroxide (peroxide formers), dicarbonyl (acetoacetates, malonates: active methylene), enone (mesityl oxide, isophorone: Michael acceptors), or all.")
     List<String> excludeReactive = new ArrayList<>();
 
     @Option(names = "--min-blend-flash-point", paramLabel = "C", description = "Least computed flash point of the blend itself, °C (Liaw et al. 2002); components may be lower.")

@@ -19,18 +19,23 @@ import org.cohesa.core.solvent.Solvent;
  * nucleophiles; nitroalkanes are energetic and form explosive salts with bases; peroxide formers (EUH019, the
  * library's flag) concentrate explosive peroxides on distillation; 1,3-dicarbonyl compounds (acetoacetates,
  * malonates, acetylacetone) carry an acidic active methylene group that forms enolates with bases and condenses with
- * amines, aldehydes and isocyanates (the chemistry acetoacetate crosslinkers are built on).
+ * amines, aldehydes and isocyanates (the chemistry acetoacetate crosslinkers are built on); α,β-unsaturated ketones
+ * and esters (mesityl oxide, isophorone) are Michael acceptors that add amines, thiols and enolates.
  */
 public enum ReactiveFlag {
     ACID("carboxylic acid"),
     AMINE("amine or pyridine base"),
     NITRO("nitroalkane"),
     PEROXIDE("peroxide former"),
-    ACTIVE_METHYLENE("1,3-dicarbonyl (active methylene)");
+    ACTIVE_METHYLENE("1,3-dicarbonyl (active methylene)"),
+    MICHAEL_ACCEPTOR("α,β-unsaturated carbonyl (Michael acceptor)");
 
     /** C(=O)–CH2/CH–C(=O): the acidic methylene between two carbonyls of a β-keto ester, malonate or 1,3-diketone. */
     private static final SmartsPattern DICARBONYL = SmartsPattern.create("[CX3](=O)[CX4;H1,H2][CX3](=O)");
     private static final Map<String, Boolean> DICARBONYL_SEEN = new ConcurrentHashMap<>();
+    /** C=C–C(=O): a carbon–carbon double bond conjugated with a ketone or ester carbonyl (aromatic rings are not matched). */
+    private static final SmartsPattern ENONE = SmartsPattern.create("[CX3]=[CX3][CX3]=O");
+    private static final Map<String, Boolean> ENONE_SEEN = new ConcurrentHashMap<>();
 
     private final String label;
 
@@ -54,14 +59,15 @@ public enum ReactiveFlag {
             case NITRO -> (s.smiles() != null && (s.smiles().contains("[N+](=O)[O-]") || s.smiles().contains("N(=O)=O")))
                     || s.name().toLowerCase(Locale.ROOT).startsWith("nitro");
             case PEROXIDE -> s.peroxideFormer();
-            case ACTIVE_METHYLENE -> s.smiles() != null && DICARBONYL_SEEN.computeIfAbsent(s.smiles(), ReactiveFlag::dicarbonyl);
+            case ACTIVE_METHYLENE -> s.smiles() != null && DICARBONYL_SEEN.computeIfAbsent(s.smiles(), x -> matches(DICARBONYL, x));
+            case MICHAEL_ACCEPTOR -> s.smiles() != null && ENONE_SEEN.computeIfAbsent(s.smiles(), x -> matches(ENONE, x));
         };
     }
 
-    private static boolean dicarbonyl(String smiles) {
+    private static boolean matches(SmartsPattern pattern, String smiles) {
         try {
             IAtomContainer mol = new SmilesParser(SilentChemObjectBuilder.getInstance()).parseSmiles(smiles);
-            return DICARBONYL.matches(mol);
+            return pattern.matches(mol);
         } catch (InvalidSmilesException e) {
             return false;
         }
@@ -78,7 +84,7 @@ public enum ReactiveFlag {
         return out;
     }
 
-    /** "acid", "amine", "nitro", "peroxide", "dicarbonyl" or "all". */
+    /** "acid", "amine", "nitro", "peroxide", "dicarbonyl", "enone" or "all". */
     public static List<ReactiveFlag> parse(String field, String text) {
         List<ReactiveFlag> out = new ArrayList<>();
         for (String p : text.split(",")) {
@@ -95,7 +101,8 @@ public enum ReactiveFlag {
                 case "nitro", "nitroalkane", "nitroalkanes" -> NITRO;
                 case "peroxide", "peroxides", "peroxide-former" -> PEROXIDE;
                 case "dicarbonyl", "active-methylene", "keto-ester" -> ACTIVE_METHYLENE;
-                default -> throw new InvalidInputException(field, p.strip(), "choose from acid, amine, nitro, peroxide, dicarbonyl, all");
+                case "enone", "michael-acceptor", "unsaturated-carbonyl" -> MICHAEL_ACCEPTOR;
+                default -> throw new InvalidInputException(field, p.strip(), "choose from acid, amine, nitro, peroxide, dicarbonyl, enone, all");
             };
             if (!out.contains(f)) {
                 out.add(f);

@@ -44,6 +44,20 @@ class ReactiveFlagTest {
     }
 
     @Test
+    void unsaturatedKetonesAreMichaelAcceptorsAndSaturatedOnesAreNot() {
+        // mesityl oxide and isophorone are α,β-unsaturated ketones: conjugate addition of amines and thiols (Michael
+        // addition; any organic chemistry text, common practice, no source); their saturated relatives and aromatic
+        // carbonyls are not flagged
+        for (String name : List.of("mesityl oxide", "isophorone")) {
+            assertTrue(ReactiveFlag.of(lib.resolve("name", name)).contains(ReactiveFlag.MICHAEL_ACCEPTOR), name);
+        }
+        for (String name : List.of("acetone", "cyclohexanone", "methyl isobutyl ketone", "methyl benzoate", "acetophenone", "Cyrene", "d-limonene")) {
+            assertFalse(ReactiveFlag.of(lib.resolve("name", name)).contains(ReactiveFlag.MICHAEL_ACCEPTOR), name);
+        }
+        assertEquals(List.of(ReactiveFlag.MICHAEL_ACCEPTOR), ReactiveFlag.parse("--exclude-reactive", "enone"));
+    }
+
+    @Test
     void aReactiveSolventCarriesThePenaltyAndSaysWhy() {
         Solvent eaa = lib.resolve("name", "ethyl acetoacetate");
         HazardPenalty p = HazardPenalty.of(eaa);
