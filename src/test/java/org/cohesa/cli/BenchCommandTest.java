@@ -32,6 +32,17 @@ class BenchCommandTest {
     }
 
     @Test
+    void fitBenchmarkTimesTheStructurePriorToo() throws Exception {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        // aspirin (PubChem CID 2244, SMILES from memory)
+        int code = CohesaCommand.run(new String[] {"--db", dir.resolve("t.db").toString(), "bench", "fit", "--runs", "2",
+                "--results", "30", "--prior-smiles", "CC(=O)Oc1ccccc1C(=O)O", "--json"}, new PrintWriter(out), new PrintWriter(err));
+        assertEquals(0, code, err.toString());
+        assertEquals("likelihood with structure prior", new ObjectMapper().readTree(out.toString()).get("method").asText());
+    }
+
+    @Test
     void badRunCountIsRefused() {
         StringWriter err = new StringWriter();
         int code = CohesaCommand.run(new String[] {"--db", dir.resolve("t.db").toString(), "bench", "fit", "--runs", "0"},

@@ -115,6 +115,8 @@ public final class BenchCommand implements Runnable {
         @Option(names = "--runs", description = "Timed runs (default ${DEFAULT-VALUE}).") int runs = 7;
         @Option(names = "--seed", description = "Seed of the invented data and of the fit (default ${DEFAULT-VALUE}).") long seed = 5;
         @Option(names = "--method", description = "Fit method: likelihood (default), classic or consensus.") String method = "likelihood";
+        @Option(names = "--prior-smiles", paramLabel = "SMILES", description = "Also time the likelihood fit with a centre prior estimated from this structure.")
+        String priorSmiles;
 
         @Override
         protected void execute() {
@@ -134,15 +136,30 @@ public final class BenchCommand implements Runnable {
                 throw new org.cohesa.core.InvalidInputException("--method", method, "must be one of " + org.cohesa.core.target.FitMethod.allowed());
             }
             List<TestResult> data = invented(results, seed);
-            FitOptions options = new FitOptions(seed, resamples, 12, 5).withMethod(fitMethod);
-            double[] t = time(1, runs, () -> SphereFitter.fit(data, List.of(), options));
+            FitOptions plain = new FitOptions(seed, resamples, 12, 5).withMethod(fitMethod);
+            String label = fitMethod.key();
+            FitOptions options = plain;
+            if (priorSmiles != null) {
+                if (fitMethod != org.cohesa.core.target.FitMethod.LIKELIHOOD) {
+                    throw new org.cohesa.core.InvalidInputException("--prior-smiles", priorSmiles, "a prior works with --method likelihood only");
+                }
+                var estimate = org.cohesa.cli.structure.StructureEstimates.estimate("--prior-smiles", priorSmiles,
+                        org.cohesa.core.structure.MeasuredProperties.NONE);
+                if (!estimate.hasHansen()) {
+                    throw new org.cohesa.core.InvalidInputException("--prior-smiles", priorSmiles, "the group method cannot estimate this structure's centre");
+                }
+                options = plain.withPrior(org.cohesa.core.target.CentrePrior.fromStructure(estimate));
+                label = fitMethod.key() + " with structure prior";
+            }
+            FitOptions timed = options;
+            double[] t = time(1, runs, () -> SphereFitter.fit(data, List.of(), timed));
             Timing timing = Timing.of(t);
             if (json()) {
-                Output.json(out(), new FitBench("fit", fitMethod.key(), results, resamples, timing));
+                Output.json(out(), new FitBench("fit", label, results, resamples, timing));
                 return;
             }
             out().printf(Locale.ROOT, "sphere fit (%s), %d results, %d bootstrap resamples, %d cores: median %.3f s (min %.3f, max %.3f) over %d runs%n",
-                    fitMethod.key(), results, resamples, timing.cores(), timing.medianS(), timing.minS(), timing.maxS(), runs);
+                    label, results, resamples, timing.cores(), timing.medianS(), timing.minS(), timing.maxS(), runs);
         }
 
         /**
