@@ -70,7 +70,7 @@ public final class MaterialsCommand extends CohesaSubcommand {
             } catch (IllegalArgumentException e) {
                 throw new InvalidInputException("--kind", kindText, "must be one of " + MaterialKind.allowed());
             }
-            org.cohesa.cli.structure.MaterialFromStructure.Centre c;
+            org.cohesa.store.StructureEntries.Centre c;
             if (smiles != null) {
                 c = org.cohesa.cli.structure.MaterialFromStructure.centre(smiles, dD, dP, dH, r0);
             } else {
@@ -79,7 +79,7 @@ public final class MaterialsCommand extends CohesaSubcommand {
                         throw new InvalidInputException(req[0], "(missing)", "is required (or give --smiles to estimate the centre from the structure)");
                     }
                 }
-                c = new org.cohesa.cli.structure.MaterialFromStructure.Centre(parameter("--dD", dD), parameter("--dP", dP), parameter("--dH", dH),
+                c = new org.cohesa.store.StructureEntries.Centre(parameter("--dD", dD), parameter("--dP", dP), parameter("--dH", dH),
                         radius(r0), null, java.util.List.of());
             }
             SolubilitySphere s = SolubilitySphere.of(c.dD(), c.dP(), c.dH(), c.r0());

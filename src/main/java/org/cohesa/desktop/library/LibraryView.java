@@ -215,7 +215,7 @@ public final class LibraryView {
     }
 
     private void addEntry() {
-        new SolventEditor(null).dialog().showAndWait().ifPresent(s -> model.add(s, () -> model.session().selectedSolventProperty()
+        new SolventEditor(null, model.session().jobs()).dialog().showAndWait().ifPresent(s -> model.add(s, () -> model.session().selectedSolventProperty()
                 .set(find(s.name()))));
     }
 
@@ -224,7 +224,7 @@ public final class LibraryView {
         if (old == null || !old.userEntry()) {
             return;
         }
-        new SolventEditor(old).dialog().showAndWait().ifPresent(s -> model.update(old.name(), s,
+        new SolventEditor(old, model.session().jobs()).dialog().showAndWait().ifPresent(s -> model.update(old.name(), s,
                 () -> model.session().selectedSolventProperty().set(find(s.name()))));
     }
 

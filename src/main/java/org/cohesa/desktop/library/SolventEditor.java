@@ -16,14 +16,24 @@ import javafx.scene.layout.ColumnConstraints;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
+import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.RowError;
 import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.structure.MeasuredProperties;
+import org.cohesa.desktop.common.ErrorText;
+import org.cohesa.desktop.common.Jobs;
+import org.cohesa.desktop.structure.StructurePane;
 import org.cohesa.store.SolventFields;
+import org.cohesa.store.StructureEntries;
 
 /**
  * The form for the user's own solvent entries. It validates with the same rules as a CSV import
  * ({@link SolventFields#fromRow}): every problem is listed under the form, the fields concerned are marked,
  * and the dialog stays open until the entry is valid. Editing keeps every column the form does not show.
+ *
+ * <p>With a SMILES the form estimates what is missing ({@link StructureEntries#fillSolventRow}, the same as
+ * {@code solvents add --smiles}): empty fields are filled and marked, values the user typed stay, and the UNIFAC
+ * groups, the structure and a note naming each route and its expected error are kept with the entry.
  */
 public final class SolventEditor {
 
@@ -41,10 +51,29 @@ public final class SolventEditor {
     private final Map<String, String> original;
     private final Label problems = new Label();
     private final Dialog<Solvent> dialog = new Dialog<>();
+    private final StructurePane structure;
+    private final Label filledHint = new Label();
+    /** Fields the last estimate filled, with the text it put there (re-estimating replaces them). */
+    private final Map<String, String> filledByEstimate = new LinkedHashMap<>();
+    /** Columns the form does not show that the last estimate set (smiles, UNIFAC groups, their sources). */
+    private final Map<String, String> structureColumns = new LinkedHashMap<>();
+    private String structureNote;
+    private String estimatedSmiles;
     private Solvent result;
+
+    static final StructureEntries.Fields STRUCTURE_FIELDS = new StructureEntries.Fields("SMILES", "δD/δP/δH",
+            "type the missing component(s) in the δD, δP and δH fields", "");
 
     /** @param existing the entry to edit, or null for a new one */
     public SolventEditor(Solvent existing) {
+        this(existing, null);
+    }
+
+    /**
+     * @param existing the entry to edit, or null for a new one
+     * @param jobs     the session's job runner; with it the form offers the estimate from a SMILES (null: no structure part)
+     */
+    public SolventEditor(Solvent existing, Jobs jobs) {
         original = existing == null ? new LinkedHashMap<>() : new LinkedHashMap<>(SolventFields.toRow(existing));
         dialog.setTitle(existing == null ? "New solvent entry" : "Edit " + existing.name());
         dialog.setHeaderText(existing == null ? "Your own solvent: kept in your database, never changed by updates."
@@ -80,7 +109,25 @@ public final class SolventEditor {
         problems.setMaxWidth(880);
         problems.setVisible(false);
         problems.setManaged(false);
-        VBox content = new VBox(8, grid, problems);
+        VBox content = new VBox(8);
+        if (jobs != null) {
+            structure = new StructurePane(jobs, "SMILES");
+            structure.smilesProperty().set(original.getOrDefault("smiles", ""));
+            structure.setMeasured(this::measured);
+            structure.setOnEstimated(r -> fillFromEstimate(r.estimate()));
+            Label intro = new Label("From a structure (optional): give a SMILES and the empty fields are estimated; values you type stay.");
+            intro.getStyleClass().add("hint");
+            filledHint.setId("editor-filled");
+            filledHint.getStyleClass().add("hint");
+            filledHint.setWrapText(true);
+            filledHint.setMaxWidth(880);
+            filledHint.setVisible(false);
+            filledHint.setManaged(false);
+            content.getChildren().addAll(intro, structure.node(), new javafx.scene.control.Separator());
+        } else {
+            structure = null;
+        }
+        content.getChildren().addAll(grid, filledHint, problems);
         dialog.getDialogPane().setContent(content);
         dialog.getDialogPane().setPrefWidth(920);
         dialog.getDialogPane().getButtonTypes().addAll(ButtonType.OK, ButtonType.CANCEL);
@@ -104,11 +151,135 @@ public final class SolventEditor {
         return fields.get(column);
     }
 
+    /** The structure part of the form, or null when the form was made without jobs. */
+    public StructurePane structure() {
+        return structure;
+    }
+
+    private MeasuredProperties measured() {
+        String text = fields.get("density").getText() == null ? "" : fields.get("density").getText().strip();
+        if (text.isEmpty()) {
+            return MeasuredProperties.NONE;
+        }
+        double rho;
+        try {
+            rho = Double.parseDouble(text);
+        } catch (NumberFormatException e) {
+            throw new InvalidInputException(labelOf("density"), text, "not a number (use a dot as decimal separator)");
+        }
+        try {
+            return new MeasuredProperties(rho, null, null, null);
+        } catch (InvalidInputException e) {
+            throw new InvalidInputException(labelOf("density"), text, e.reason());
+        }
+    }
+
+    /** Fills the empty fields (and those the previous estimate filled) from a fresh estimate. */
+    private void fillFromEstimate(org.cohesa.core.structure.StructureEstimate e) {
+        filledByEstimate.forEach((col, text) -> {
+            TextField tf = fields.get(col);
+            if (text.equals(tf.getText())) {
+                tf.setText("");
+            }
+            tf.getStyleClass().remove("field-estimated");
+        });
+        filledByEstimate.clear();
+        structureColumns.clear();
+        structureNote = null;
+        estimatedSmiles = null;
+        Map<String, String> row = new LinkedHashMap<>(original);
+        fields.forEach((col, tf) -> row.put(col, tf.getText() == null ? "" : tf.getText().strip()));
+        row.values().removeIf(String::isBlank);
+        row.remove("note");
+        String smiles = e.structure().smiles();
+        try {
+            StructureEntries.fillSolventRow(row, e, STRUCTURE_FIELDS, smiles);
+        } catch (InvalidInputException ex) {
+            structure.showProblem(ErrorText.of(ex));
+            showFilled(null);
+            return;
+        }
+        List<String> filled = new ArrayList<>();
+        row.forEach((col, value) -> {
+            TextField tf = fields.get(col);
+            if (col.equals("note")) {
+                structureNote = value;
+            } else if (tf == null) {
+                structureColumns.put(col, value);
+            } else if (tf.getText() == null || tf.getText().isBlank()) {
+                tf.setText(value);
+                tf.getStyleClass().add("field-estimated");
+                filledByEstimate.put(col, value);
+                filled.add(shortName(col));
+            }
+        });
+        estimatedSmiles = smiles;
+        showFilled("Filled from the structure (marked): " + (filled.isEmpty() ? "nothing, every field was given" : String.join(", ", filled))
+                + (structureColumns.containsKey("unifac_groups") ? "; UNIFAC groups " + structureColumns.get("unifac_groups") + " kept with the entry" : "")
+                + ". The note keeps each route and its expected error; type over any value you have measured.");
+    }
+
+    private static String shortName(String col) {
+        return switch (col) {
+            case "dD" -> "δD";
+            case "dP" -> "δP";
+            case "dH" -> "δH";
+            case "src_hsp" -> "their source";
+            default -> col.replace('_', ' ');
+        };
+    }
+
+    private void showFilled(String text) {
+        filledHint.setText(text == null ? "" : text);
+        filledHint.setVisible(text != null);
+        filledHint.setManaged(text != null);
+        if (dialog.getDialogPane().getScene() != null && dialog.getDialogPane().getScene().getWindow() != null) {
+            dialog.getDialogPane().getScene().getWindow().sizeToScene();
+        }
+    }
+
+    /** Adds the structure's columns to the row, or returns the line that says why they cannot be used. */
+    private String mergeStructure(Map<String, String> row) {
+        if (structure == null) {
+            return null;
+        }
+        String smiles = structure.smilesProperty().get() == null ? "" : structure.smilesProperty().get().strip();
+        if (smiles.isEmpty()) {
+            row.put("smiles", "");
+            return null;
+        }
+        if (!smiles.equals(estimatedSmiles)) {
+            if (smiles.equals(original.getOrDefault("smiles", ""))) {
+                return null; // the entry's stored structure, unchanged
+            }
+            return "SMILES '" + smiles + "': press Estimate so the entry is checked against this structure before it is saved";
+        }
+        row.putAll(structureColumns);
+        boolean hspEdited = List.of("dD", "dP", "dH").stream()
+                .anyMatch(c -> filledByEstimate.containsKey(c) && !filledByEstimate.get(c).equals(row.get(c).strip()));
+        if (hspEdited && StructureEntries.HSP_SOURCE.equals(row.get("src_hsp"))) {
+            row.put("src_hsp", "user");
+        }
+        if (structureNote != null) {
+            String note = row.get("note");
+            row.put("note", note == null || note.isBlank() ? structureNote : note.strip() + "; " + structureNote);
+        }
+        return null;
+    }
+
     /** Checks the form; on success the entry is ready as the dialog's result. */
     public boolean validate() {
         Map<String, String> row = new LinkedHashMap<>(original);
         fields.forEach((col, tf) -> row.put(col, tf.getText() == null ? "" : tf.getText()));
         List<RowError> errors = new ArrayList<>();
+        String structureProblem = mergeStructure(row);
+        if (structureProblem != null) {
+            structure.showProblem(structureProblem);
+            problems.setText("• " + structureProblem);
+            problems.setVisible(true);
+            problems.setManaged(true);
+            return false;
+        }
         Solvent s = SolventFields.fromRow(row, 0, true, errors);
         fields.values().forEach(tf -> tf.getStyleClass().remove("field-error"));
         if (s != null) {

@@ -29,6 +29,7 @@ import org.cohesa.desktop.common.ErrorText;
 import org.cohesa.desktop.common.Numbers;
 import org.cohesa.desktop.common.TableTools;
 import org.cohesa.desktop.common.TargetChoice;
+import org.cohesa.desktop.structure.StructureTargetForm;
 
 /**
  * The target screen: set the solubility sphere the other screens work against, and see the library's
@@ -86,10 +87,14 @@ public final class TargetView {
         javafx.scene.control.TabPane ways = new javafx.scene.control.TabPane(
                 new javafx.scene.control.Tab("Material", materialPicker()),
                 new javafx.scene.control.Tab("Fit your tests", fitPane()),
+                new javafx.scene.control.Tab("From structure", new StructureTargetForm(model.session()).node()),
                 new javafx.scene.control.Tab("Type in", typedPane));
         ways.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
         ways.setId("target-ways");
         ways.getTabs().get(1).setId("target-fit-tab");
+        ways.getTabs().get(2).setId("target-structure-tab");
+        // the drawing and the estimate table need room: the side widens while that tab is open
+        ways.getSelectionModel().selectedIndexProperty().addListener((o, a, i) -> side.setPrefWidth(i.intValue() == 2 ? 660 : 390));
         VBox.setVgrow(ways, Priority.ALWAYS);
         side.getChildren().addAll(current, ways);
         side.setPadding(new Insets(10));

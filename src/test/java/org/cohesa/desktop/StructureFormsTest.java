@@ -1,0 +1,291 @@
+package org.cohesa.desktop;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import javafx.scene.Node;
+import javafx.scene.Parent;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.TabPane;
+import javafx.scene.control.TextField;
+import javafx.scene.image.Image;
+import javafx.scene.image.ImageView;
+import javafx.stage.Stage;
+import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.structure.MeasuredProperties;
+import org.cohesa.core.structure.StructureEstimate;
+import org.cohesa.core.target.Material;
+import org.cohesa.core.target.MaterialKind;
+import org.cohesa.desktop.library.SolventEditor;
+import org.cohesa.desktop.structure.StructurePane;
+import org.cohesa.store.StructureEntries;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * The structure part of the desktop as a user meets it: a SMILES in the add-solvent form and on the target screen,
+ * the estimate with route, error and drawing, one-line refusals that store nothing. The estimates themselves are
+ * checked against the published tables in the core tests (HansenEstimateTest, UnifacGroupsTest); here the forms
+ * must store exactly what the command line stores for the same input ({@link StructureEntries}).
+ *
+ * <p>With {@code -Dcohesa.screenshots=DIR} (under Xvfb, {@code -Pxvfb}) it also writes the screenshots in DIR.
+ */
+@ExtendWith(ApplicationExtension.class)
+class StructureFormsTest {
+
+    /** Ethyl levulinate, a bio-based ester-ketone solvent (structure: PubChem CID 10883). */
+    private static final String ETHYL_LEVULINATE = "CCOC(=O)CCC(C)=O";
+    /** Ibuprofen (PubChem CID 3672): a drug substance with no sphere in the library. */
+    private static final String IBUPROFEN = "CC(C)Cc1ccc(cc1)C(C)C(=O)O";
+
+    private DesktopFixture fx;
+    private Stage stage;
+
+    @Start
+    void start(Stage stage) throws Exception {
+        this.stage = stage;
+        fx = new DesktopFixture(stage);
+    }
+
+    @Test
+    void theSolventFormEstimatesFromASmilesDrawsItAndStoresWhatTheCommandLineWould(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        SolventEditor ed = openEditor(robot);
+        robot.interact(() -> {
+            ed.field("name").setText("ethyl levulinate (my lot)");
+            ed.field("boiling_point_c").setText("206");
+            ed.structure().smilesProperty().set(ETHYL_LEVULINATE);
+            ed.structure().estimate();
+        });
+        fx.awaitJobs();
+        StructurePane.Result r = ed.structure().resultProperty().get();
+        assertNotNull(r, "the estimate is shown");
+        assertNotNull(r.drawing(), "the structure is drawn: " + r.drawingProblem());
+        assertTrue(inkPixels(r.drawing()) > 300, "the drawing has lines and labels, not a blank frame");
+
+        Map<String, String> expected = new LinkedHashMap<>(Map.of("name", "ethyl levulinate (my lot)"));
+        StructureEstimate e = StructureEntries.estimate("SMILES", ETHYL_LEVULINATE, MeasuredProperties.NONE);
+        StructureEntries.fillSolventRow(expected, e, new StructureEntries.Fields("SMILES", "δD/δP/δH", "", ""), ETHYL_LEVULINATE);
+        assertEquals(expected.get("dD"), ed.field("dD").getText());
+        assertEquals(expected.get("dP"), ed.field("dP").getText());
+        assertEquals(expected.get("dH"), ed.field("dH").getText());
+        assertEquals(expected.get("molar_volume"), ed.field("molar_volume").getText());
+        assertEquals("C7H12O3", ed.field("formula").getText());
+        assertTrue(ed.field("dD").getStyleClass().contains("field-estimated"), "an estimated field is marked");
+        assertFalse(ed.field("boiling_point_c").getStyleClass().contains("field-estimated"), "a typed value is not");
+        String shown = text(ed, "#structure-values");
+        assertTrue(shown.contains("group contribution (Mathieu 2018)"), "the route is named: " + shown);
+        assertTrue(shown.contains("± 0.7") && shown.contains("± 2.2") && shown.contains("± 1.5"), "the expected errors are shown: " + shown);
+        assertTrue(text(ed, "#structure-groups").contains("CH3"), text(ed, "#structure-groups"));
+
+        shoot(robot, ed.dialog().getDialogPane(), "structure-solvent-form");
+        boolean[] ok = new boolean[1];
+        robot.interact(() -> ok[0] = ed.validate());
+        assertTrue(ok[0]);
+        Solvent s = ed.result();
+        robot.interact(() -> {
+            ed.dialog().close();
+            fx.workbench.libraryModel().add(s, null);
+        });
+        fx.awaitJobs();
+        fx.awaitJobs();
+        Solvent stored = find("ethyl levulinate (my lot)");
+        assertNotNull(stored, "stored in the library");
+        assertEquals(ETHYL_LEVULINATE, stored.smiles());
+        assertEquals(expected.get("unifac_groups"), stored.unifac().format(), "UNIFAC groups from the structure are kept");
+        assertEquals(StructureEntries.HSP_SOURCE, stored.sources().get("hsp"));
+        assertEquals(206.0, stored.boilingPointC(), 1e-9);
+        assertTrue(stored.note().contains("expected error"), stored.note());
+    }
+
+    @Test
+    void aBadStructureGetsOneLineNamingTheFieldAndNothingIsStored(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        int before = fx.session.solvents().size();
+        SolventEditor ed = openEditor(robot);
+        for (String[] bad : new String[][] {{"C1CC", "not a valid SMILES"}, {"[Na+].[Cl-]", "several components"},
+            {"C[CH2]", "open-shell"}, {"CC[Sn](C)(C)C", "metal Sn"}}) {
+            robot.interact(() -> {
+                ed.structure().smilesProperty().set(bad[0]);
+                ed.structure().estimate();
+            });
+            fx.awaitJobs();
+            String line = text(ed, "#structure-problem");
+            assertTrue(line.startsWith("SMILES '" + bad[0] + "': ") && line.contains(bad[1]), line);
+            assertFalse(line.contains("\n"), "one line");
+            assertNull(ed.structure().resultProperty().get());
+        }
+        shoot(robot, ed.dialog().getDialogPane(), "structure-solvent-refused");
+        boolean[] ok = new boolean[1];
+        robot.interact(() -> {
+            ed.field("name").setText("should not be stored");
+            ok[0] = ed.validate();
+        });
+        assertFalse(ok[0], "a SMILES that was refused cannot be saved");
+        robot.interact(() -> ed.dialog().close());
+        assertEquals(before, fx.session.solvents().size());
+        assertNull(find("should not be stored"));
+    }
+
+    @Test
+    void aFamilyTheMethodHandlesBadlyIsFlaggedAndAPartialHansenEntryIsRefused(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        SolventEditor ed = openEditor(robot);
+        robot.interact(() -> {
+            ed.field("name").setText("my amide");
+            ed.field("dD").setText("17.4");
+            ed.structure().smilesProperty().set("CN(C)C(C)=O"); // N,N-dimethylacetamide
+            ed.structure().estimate();
+        });
+        fx.awaitJobs();
+        String cautions = text(ed, "#structure-cautions");
+        assertTrue(cautions.contains("amide structures are estimated much less well"), cautions);
+        assertTrue(text(ed, "#structure-problem").startsWith("δD/δP/δH 'CN(C)C(C)=O': give all three"), text(ed, "#structure-problem"));
+        assertEquals("", ed.field("dP").getText(), "nothing filled when one component was typed alone");
+        robot.interact(() -> ed.dialog().close());
+    }
+
+    @Test
+    void aChangedSmilesMustBeEstimatedAgainBeforeSaving(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        SolventEditor ed = openEditor(robot);
+        robot.interact(() -> {
+            ed.field("name").setText("stale entry");
+            ed.structure().smilesProperty().set("CCCCO");
+            ed.structure().estimate();
+        });
+        fx.awaitJobs();
+        StructureEstimate butanol = StructureEntries.estimate("SMILES", "CCCCO", MeasuredProperties.NONE);
+        assertEquals(String.format(java.util.Locale.ROOT, "%.1f", butanol.dH().value()), ed.field("dH").getText());
+        boolean[] ok = new boolean[1];
+        robot.interact(() -> {
+            ed.structure().smilesProperty().set("CCCCCCCCO");
+            ok[0] = ed.validate();
+        });
+        assertFalse(ok[0]);
+        assertTrue(text(ed, "#editor-problems").contains("SMILES 'CCCCCCCCO': press Estimate"), text(ed, "#editor-problems"));
+        robot.interact(() -> ed.structure().estimate());
+        fx.awaitJobs();
+        StructureEstimate octanol = StructureEntries.estimate("SMILES", "CCCCCCCCO", MeasuredProperties.NONE);
+        assertEquals(String.format(java.util.Locale.ROOT, "%.1f", octanol.dH().value()), ed.field("dH").getText(),
+                "the fields hold the new structure's estimate, not the old one's");
+        robot.interact(() -> ok[0] = ed.validate());
+        assertTrue(ok[0]);
+        assertEquals("CCCCCCCCO", ed.result().smiles());
+        robot.interact(() -> ed.dialog().close());
+    }
+
+    @Test
+    void aDrugSubstanceBecomesTheTargetFromItsStructureAndCanBeKept(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        robot.interact(() -> {
+            fx.workbench.show(Screen.TARGET);
+            robot.lookup("#target-ways").queryAs(TabPane.class).getSelectionModel().select(2);
+        });
+        Parent form = robot.lookup("#target-structure").queryAs(Parent.class);
+        TextField smiles = (TextField) form.lookup("#structure-smiles");
+        robot.interact(() -> {
+            ((TextField) form.lookup("#structure-target-name")).setText("ibuprofen (estimated)");
+            smiles.setText(IBUPROFEN);
+            ((Button) form.lookup("#structure-estimate")).fire();
+        });
+        fx.awaitJobs();
+        ImageView drawing = (ImageView) form.lookup("#structure-drawing");
+        assertNotNull(drawing.getImage());
+        assertTrue(((Label) form.lookup("#structure-cautions").lookup(".label")).getText().contains("acid"),
+                "ibuprofen is an acid, a family the method handles badly");
+        robot.interact(() -> ((Button) form.lookup("#structure-target-apply")).fire());
+        StructureEstimate e = StructureEntries.estimate("SMILES", IBUPROFEN, MeasuredProperties.NONE);
+        StructureEntries.Centre c = StructureEntries.materialCentre(e, new StructureEntries.Fields("SMILES", "", "", ""), IBUPROFEN,
+                null, null, null, null);
+        var target = fx.session.target();
+        assertEquals("ibuprofen (estimated)", target.name());
+        assertEquals(c.dD(), target.sphere().centre().dD(), 1e-9);
+        assertEquals(c.dP(), target.sphere().centre().dP(), 1e-9);
+        assertEquals(c.dH(), target.sphere().centre().dH(), 1e-9);
+        assertEquals(StructureEntries.DEFAULT_R0, target.sphere().r0(), 1e-9, "no radius given: the documented default");
+        assertTrue(((Label) form.lookup("#structure-target-outcome")).getText().contains("caution: R0 7.0 is a default"));
+        WaitForAsyncUtils.waitForFxEvents();
+        shoot(robot, stage.getScene().getRoot(), "structure-target");
+
+        robot.interact(() -> {
+            ((TextField) form.lookup("#structure-target-r0")).setText("-3");
+            ((Button) form.lookup("#structure-target-keep")).fire();
+        });
+        assertEquals("R0 '-3': must be a positive number up to 60 MPa½", ((Label) form.lookup("#structure-problem")).getText());
+        int materials = fx.session.materials().size();
+        robot.interact(() -> {
+            ((TextField) form.lookup("#structure-target-r0")).setText("6.5");
+            ((Button) form.lookup("#structure-target-keep")).fire();
+        });
+        fx.awaitJobs();
+        assertEquals(materials + 1, fx.session.materials().size());
+        Material m = fx.session.materials().stream().filter(x -> x.name().equals("ibuprofen (estimated)")).findFirst().orElseThrow();
+        assertTrue(m.userEntry());
+        assertEquals(MaterialKind.DRUG, m.kind());
+        assertEquals(6.5, m.sphere().r0(), 1e-9);
+        assertTrue(m.source().contains("estimated from the structure"), m.source());
+    }
+
+    private SolventEditor openEditor(FxRobot robot) {
+        SolventEditor[] ed = new SolventEditor[1];
+        robot.interact(() -> {
+            ed[0] = new SolventEditor(null, fx.session.jobs());
+            ed[0].dialog().initOwner(stage);
+            ed[0].dialog().show();
+        });
+        return ed[0];
+    }
+
+    /** The label's text, or the texts of every label inside a container joined by " | ". */
+    private static String text(SolventEditor ed, String id) {
+        Node n = ed.dialog().getDialogPane().lookup(id);
+        if (n instanceof Label l) {
+            return l.getText();
+        }
+        StringBuilder b = new StringBuilder();
+        for (Node c : n.lookupAll(".label")) {
+            if (c instanceof Label l && c != n) {
+                b.append(b.length() == 0 ? "" : " | ").append(l.getText());
+            }
+        }
+        return b.toString();
+    }
+
+    private static long inkPixels(Image img) {
+        long n = 0;
+        for (int y = 0; y < (int) img.getHeight(); y++) {
+            for (int x = 0; x < (int) img.getWidth(); x++) {
+                if ((img.getPixelReader().getArgb(x, y) & 0xFFFFFF) != 0xFFFFFF) {
+                    n++;
+                }
+            }
+        }
+        return n;
+    }
+
+    /** Writes a screenshot of {@code node}'s scene when -Dcohesa.screenshots=DIR is set. */
+    private static void shoot(FxRobot robot, Node node, String name) {
+        String dir = System.getProperty("cohesa.screenshots");
+        if (dir == null || dir.isBlank()) {
+            return;
+        }
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.interact(() -> Snapshots.savePng(node.getScene().snapshot(null), Path.of(dir, name + ".png")));
+    }
+
+    private Solvent find(String name) {
+        return fx.session.solvents().stream().filter(s -> s.name().equalsIgnoreCase(name)).findFirst().orElse(null);
+    }
+}
