@@ -185,7 +185,10 @@ public final class RecordRepository {
      * typed. Events stored before accounts were recorded compare by name only.
      */
     private void refuseSamePerson(StatusChange earlier, String by, String account, String what) {
-        String off = " (a site can switch the rule off: cohesa record rule four-eyes off --by NAME --reason TEXT)";
+        String off = register.accountIsAuthenticated()
+                ? " (the register's owner or a member of cohesa_register_admin can switch the rule off: cohesa record rule four-eyes off"
+                        + " --by NAME --reason TEXT)"
+                : " (a site can switch the rule off: cohesa record rule four-eyes off --by NAME --reason TEXT)";
         if (normalise(earlier.by()).equals(normalise(by))) {
             throw new InvalidInputException("--by", by, "four-eyes rule: " + earlier.by() + " " + what + off);
         }
