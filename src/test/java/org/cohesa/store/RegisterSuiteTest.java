@@ -310,6 +310,29 @@ class RegisterSuiteTest {
         assertEquals(ChainProblem.Kind.ALTERED, firstKind(verify(SEALED, null)));
     }
 
+    @Test
+    void aSharedRegisterWithoutAServerSecretIsSealedWithTheKeyFile() throws SQLException {
+        use("postgresql");
+        // the state of a register that already held key-file-sealed events when step 9 arrived (or of a server without
+        // pgcrypto): no secret row, so the server's seal triggers stand aside and the key file seals, as before step 9
+        try (Connection c = store.admin(); Statement st = c.createStatement()) {
+            st.execute("DELETE FROM cohesa_register_secret");
+        }
+        fileThree();
+        assertFalse(as("erin").sealedByServer());
+        RegisterKey key = RegisterKeyFile.load("--key", keyFile).orElseThrow(() -> new AssertionError("the first write made a key file"));
+        assertEquals(key.id(), as("erin").head().keyId(), "the head names the key file's key");
+        ChainReport r = verify(SEALED, null);
+        assertTrue(r.intact() && r.keyChecked() && r.sealedEvents() == 6, r.toString());
+        // a write with another key file is refused, so the register is never sealed with two keys
+        RecordRepository other = store.as("alice", dir.resolve("other.key"));
+        InvalidInputException wrong = assertThrows(InvalidInputException.class, () -> other.create(draft("x"), "A. Author"));
+        assertTrue(wrong.getMessage().contains("sealed with key " + key.id()), wrong.getMessage());
+        // the attacks are caught by the key file as on the local register
+        outside(c -> forgeAppend(c, 2, 3, "approved", "M. Manager", "{\"comment\":\"forged\"}"));
+        assertEquals(ChainProblem.Kind.FORGED, firstKind(verify(SEALED, null)));
+    }
+
     // ---------------------------------------------------------------- attacks with plain SQL (issue 17, Checks)
 
     /** Outside edits by the database's owner, guards removed first. */
