@@ -79,8 +79,20 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
 
     record Report(String benchmark, String spheres, long seed, @JsonProperty("common_liquids") List<String> commonLiquids, List<Row> rows,
                   @JsonProperty("next_tests") Curve nextTests, @JsonProperty("structure_prior") List<PriorRow> structurePrior,
-                  @JsonProperty("structure_prior_cases") List<String> structurePriorCases, @JsonProperty("seconds") double seconds) {
+                  @JsonProperty("structure_prior_cases") List<String> structurePriorCases,
+                  @JsonProperty("related_prior") List<PriorRow> relatedPrior, @JsonProperty("related_prior_cases") List<String> relatedPriorCases,
+                  @JsonProperty("seconds") double seconds) {
     }
+
+    /**
+     * Material → a related library material whose published sphere serves as its prior (default spread, 3 MPa^½ in
+     * Ra): grades of one family, as a formulator would pick them (common practice, no source).
+     */
+    static final List<List<String>> RELATED_PRIORS = List.of(
+            List.of("poly(methyl methacrylate)", "poly(ethyl methacrylate)"), List.of("poly(ethyl methacrylate)", "poly(methyl methacrylate)"),
+            List.of("cellulose acetate butyrate", "cellulose acetate"), List.of("cellulose acetate", "cellulose acetate butyrate"),
+            List.of("ethyl cellulose", "cellulose acetate butyrate"), List.of("polybutadiene", "styrene-butadiene rubber"),
+            List.of("styrene-butadiene rubber", "polybutadiene"), List.of("low-density polyethylene", "polypropylene"));
 
     /**
      * Structures of the bundled drug substances whose centres come from Alshehri et al. 2022 (PubChem isomeric SMILES
@@ -159,17 +171,13 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
             curve = new Curve(c.trials(), c.startSize(), s, r);
         }
         List<FitValidation.PriorCase> cases = drugCases(pool);
-        List<PriorRow> priorRows = new ArrayList<>();
-        for (int size : new int[] {15, 20, 30}) {
-            FitValidation.PriorFigures f = FitValidation.priorBenefit(cases, pool, size, trials, seed * 1000 + 500 + size);
-            double n = f.trials();
-            priorRows.add(new PriorRow(size, f.trials(), Output.round(f.plainCentreMedian(), 3), Output.round(f.priorCentreMedian(), 3),
-                    Output.round(f.plainR0Median(), 3), Output.round(f.priorR0Median(), 3), Output.round(f.priorGuessMedian(), 3),
-                    Output.round(f.plainCovered() / n, 3), Output.round(f.priorCovered() / n, 3)));
-        }
+        List<PriorRow> priorRows = priorRows(cases, pool, seed * 1000 + 500);
+        List<FitValidation.PriorCase> related = relatedCases(pool);
+        List<PriorRow> relatedRows = priorRows(related, pool, seed * 1000 + 700);
         double seconds = Output.round((System.nanoTime() - start) / 1e9, 1);
         Report report = new Report("fit-checks", spheres + " (" + truths.size() + " spheres)", seed, CommonTestLiquids.NAMES, rows, curve, priorRows,
-                cases.stream().map(FitValidation.PriorCase::name).toList(), seconds);
+                cases.stream().map(FitValidation.PriorCase::name).toList(), relatedRows,
+                related.stream().map(FitValidation.PriorCase::name).toList(), seconds);
         if (json()) {
             Output.json(out(), report);
             return;
@@ -207,7 +215,44 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
                     Output.fmt(x.priorR0(), 2), Output.fmt(x.guess(), 2), pct(x.plainCoverage()), pct(x.priorCoverage()));
         }
         p.print(out());
+        out().printf(Locale.ROOT, "%nrelated-material prior (%s; prior: the related material's published centre, spread %.0f MPa^½ in Ra):%n",
+                String.join(", ", report.relatedPriorCases()), CentrePrior.DEFAULT_SPREAD);
+        TextTable q = new TextTable("liquids", "trials", "centre, no prior", "centre, related prior", "R0, no prior", "R0, related prior",
+                "prior centre alone", "region cover, no prior", "region cover, with prior");
+        for (PriorRow x : relatedRows) {
+            q.row(x.liquids(), x.trials(), Output.fmt(x.plainCentre(), 2), Output.fmt(x.priorCentre(), 2), Output.fmt(x.plainR0(), 2),
+                    Output.fmt(x.priorR0(), 2), Output.fmt(x.guess(), 2), pct(x.plainCoverage()), pct(x.priorCoverage()));
+        }
+        q.print(out());
         out().printf(Locale.ROOT, "%.1f s on %d cores%n", seconds, Runtime.getRuntime().availableProcessors());
+    }
+
+    private List<PriorRow> priorRows(List<FitValidation.PriorCase> cases, List<NamedPoint> pool, long base) {
+        List<PriorRow> out = new ArrayList<>();
+        for (int size : new int[] {15, 20, 30}) {
+            FitValidation.PriorFigures f = FitValidation.priorBenefit(cases, pool, size, trials, base + size);
+            double n = f.trials();
+            out.add(new PriorRow(size, f.trials(), Output.round(f.plainCentreMedian(), 3), Output.round(f.priorCentreMedian(), 3),
+                    Output.round(f.plainR0Median(), 3), Output.round(f.priorR0Median(), 3), Output.round(f.priorGuessMedian(), 3),
+                    Output.round(f.plainCovered() / n, 3), Output.round(f.priorCovered() / n, 3)));
+        }
+        return out;
+    }
+
+    /** {@link #RELATED_PRIORS} as truths with priors, those with at least 6 common liquids inside and 6 outside. */
+    private List<FitValidation.PriorCase> relatedCases(List<NamedPoint> pool) {
+        List<FitValidation.PriorCase> out = new ArrayList<>();
+        for (List<String> pair : RELATED_PRIORS) {
+            Material m = ctx().materials().library().resolve("material", pair.get(0));
+            Material r = ctx().materials().library().resolve("related material", pair.get(1));
+            long in = pool.stream().filter(p -> m.sphere().contains(p.point())).count();
+            if (in < 6 || pool.size() - in < 6) {
+                continue;
+            }
+            out.add(new FitValidation.PriorCase(m.name() + " ← " + r.name(), m.sphere(),
+                    CentrePrior.inRa(r.sphere().centre(), CentrePrior.DEFAULT_SPREAD, "published sphere of " + r.name())));
+        }
+        return out;
     }
 
     /**
