@@ -218,6 +218,7 @@ class StructureFormsTest {
         assertTrue(((Label) form.lookup("#structure-target-outcome")).getText().contains("caution: R0 7.0 is a default"));
         WaitForAsyncUtils.waitForFxEvents();
         shoot(robot, stage.getScene().getRoot(), "structure-target");
+        shootNode(robot, form, "structure-target-form");
 
         robot.interact(() -> {
             ((TextField) form.lookup("#structure-target-r0")).setText("-3");
@@ -283,6 +284,16 @@ class StructureFormsTest {
         }
         WaitForAsyncUtils.waitForFxEvents();
         robot.interact(() -> Snapshots.savePng(node.getScene().snapshot(null), Path.of(dir, name + ".png")));
+    }
+
+    /** Writes a picture of {@code node} alone, at its own full size (e.g. a scrolled form), when -Dcohesa.screenshots=DIR is set. */
+    private static void shootNode(FxRobot robot, Node node, String name) {
+        String dir = System.getProperty("cohesa.screenshots");
+        if (dir == null || dir.isBlank()) {
+            return;
+        }
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.interact(() -> Snapshots.savePng(node.snapshot(null, null), Path.of(dir, name + ".png")));
     }
 
     private Solvent find(String name) {

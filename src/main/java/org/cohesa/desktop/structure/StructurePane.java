@@ -125,13 +125,16 @@ public final class StructurePane {
         groups.setWrapText(true);
         cautions.setId("structure-cautions");
         VBox estimate = new VBox(6, facts, values, groups, cautions);
-        estimate.setPrefWidth(440);
-        estimate.setMaxWidth(600);
         facts.setWrapText(true);
-        // drawing beside the values where there is room, above them in a narrow side panel
+        // drawing beside the values where there is room (the values take the rest of the width), above them in a
+        // narrow side panel (the values take the whole width)
         javafx.scene.layout.FlowPane body = new javafx.scene.layout.FlowPane(14, 8, frame, estimate);
         root = new VBox(8, input, problem, body);
         body.prefWrapLengthProperty().bind(root.widthProperty());
+        estimate.prefWidthProperty().bind(javafx.beans.binding.Bindings.createDoubleBinding(() -> {
+            double beside = root.getWidth() - (drawingWidth + 2) - 14 - 1;
+            return beside >= 400 ? beside : Math.max(300, root.getWidth() - 1);
+        }, root.widthProperty()));
         root.setId("structure-pane");
         root.setPadding(new Insets(4, 0, 4, 0));
     }
