@@ -90,6 +90,8 @@ class StructureFormsTest {
         assertTrue(text(ed, "#structure-groups").contains("CH3"), text(ed, "#structure-groups"));
 
         shoot(robot, ed.dialog().getDialogPane(), "structure-solvent-form");
+        robot.interact(() -> ed.field("dP").setText(ed.field("dP").getText()));
+        assertTrue(ed.field("dP").getStyleClass().contains("field-estimated"), "the estimate's own value keeps its outline");
         boolean[] ok = new boolean[1];
         robot.interact(() -> ok[0] = ed.validate());
         assertTrue(ok[0]);
@@ -183,6 +185,14 @@ class StructureFormsTest {
         robot.interact(() -> ok[0] = ed.validate());
         assertTrue(ok[0]);
         assertEquals("CCCCCCCCO", ed.result().smiles());
+        assertEquals(StructureEntries.HSP_SOURCE, ed.result().sources().get("hsp"));
+        robot.interact(() -> {
+            ed.field("dD").setText("16.0"); // a measured value typed over the estimate
+            ok[0] = ed.validate();
+        });
+        assertFalse(ed.field("dD").getStyleClass().contains("field-estimated"), "a typed-over value loses the estimate's outline");
+        assertTrue(ok[0]);
+        assertEquals("user", ed.result().sources().get("hsp"), "the Hansen values are no longer the estimate's alone");
         robot.interact(() -> ed.dialog().close());
     }
 

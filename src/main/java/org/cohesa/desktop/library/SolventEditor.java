@@ -96,6 +96,12 @@ public final class SolventEditor {
             Label l = new Label(FIELDS[i][1]);
             l.setLabelFor(tf);
             fields.put(col, tf);
+            // a value typed over an estimate is the user's: the estimate's outline goes
+            tf.textProperty().addListener((o, was, now) -> {
+                if (filledByEstimate.containsKey(col) && !filledByEstimate.get(col).equals(now)) {
+                    tf.getStyleClass().remove("field-estimated");
+                }
+            });
             // two columns of fields: identity and properties left, the rest right
             int half = (FIELDS.length + 1) / 2;
             int row = i < half ? i : i - half;
