@@ -49,13 +49,18 @@ class StructureFormsTest {
     /** Ibuprofen (PubChem CID 3672): a drug substance with no sphere in the library. */
     private static final String IBUPROFEN = "CC(C)Cc1ccc(cc1)C(C)C(=O)O";
 
+    /** One database for the class: the bundled table is imported once (each test uses names of its own). */
+    private static Path shared;
     private DesktopFixture fx;
     private Stage stage;
 
     @Start
     void start(Stage stage) throws Exception {
         this.stage = stage;
-        fx = new DesktopFixture(stage);
+        if (shared == null) {
+            shared = java.nio.file.Files.createTempDirectory("cohesa-structure-test");
+        }
+        fx = new DesktopFixture(stage, shared);
     }
 
     @Test
