@@ -319,6 +319,57 @@ class BundledDataCrossCheckTest {
     }
 
     @Test
+    void recalledGlycolEtherDensitiesAgreeWithMolarVolumeAdditivityOverCrcNeighbours() throws IOException {
+        // The densities of DPMA, ethylene glycol 2-ethylhexyl ether and diethylene glycol monohexyl ether are recalled
+        // from memory of supplier data sheets (memory-supplier-density, SOURCES.md): no stored copy with the number was
+        // reached. Each is checked against molar volumes Vm = M/rho of its neighbours in the CRC Handbook, 95th ed.
+        // (2014), "Physical Constants of Organic Compounds" (densities read from the reference table, molar masses from
+        // the Hill formula with IUPAC 2021 atomic weights), assuming additive increments of Vm (common practice, no
+        // source): DPMA = DPM + (2-methoxyethyl acetate − 2-methoxyethanol), the acetylation increment; DEGHE = DEGBE +
+        // (2-hexyloxyethanol − 2-butoxyethanol), two CH2; EEH = 2-hexyloxyethanol + the same two CH2, scaled by the
+        // branching ratio Vm(2-ethylhexanol)/Vm(1-octanol). Tolerance 2 % (the recalled values carry 2–3 digits).
+        Map<String, List<String>> phys = byCas("physical-constants-of-organic-compounds.csv");
+        java.util.function.BiFunction<String, String, Double> vm = (cas, formula) -> {
+            List<String> p = phys.get(cas);
+            assertTrue(has(p, 4), "CRC table has no density for " + cas);
+            return molarMass(formula) / (Double.parseDouble(p.get(4)) / 1000.0);
+        };
+        double butoxyethanol = vm.apply("111-76-2", "C6H14O2");
+        double hexyloxyethanol = vm.apply("112-25-4", "C8H18O2");
+        double twoCh2 = hexyloxyethanol - butoxyethanol;
+        double acetylation = vm.apply("110-49-6", "C5H10O3") - vm.apply("109-86-4", "C3H8O2");
+        double branching = vm.apply("104-76-7", "C8H18O") / vm.apply("111-87-5", "C8H18O");
+        Map<String, Double> predictedVm = Map.of(
+                "88917-22-0", vm.apply("34590-94-8", "C7H16O3") + acetylation,
+                "112-59-4", vm.apply("112-34-5", "C8H18O3") + twoCh2,
+                "1559-35-9", (hexyloxyethanol + twoCh2) * branching);
+        List<String> bad = new ArrayList<>();
+        for (Map.Entry<String, Double> e : predictedVm.entrySet()) {
+            Map<String, String> r = rows.stream().filter(x -> x.get("cas").equals(e.getKey())).findFirst().orElseThrow();
+            Double rho = num(r, "density");
+            if (rho == null) {
+                bad.add(r.get("name") + ": no density");
+                continue;
+            }
+            double predicted = num(r, "molar_mass") / e.getValue();
+            if (Math.abs(rho - predicted) / predicted > 0.02) {
+                bad.add(String.format(java.util.Locale.ROOT, "%s: density %.4f vs %.4f from molar-volume additivity", r.get("name"), rho,
+                        predicted));
+            }
+        }
+        assertTrue(bad.isEmpty(), String.join("\n", bad));
+    }
+
+    private static double molarMass(String formula) {
+        Map<String, Double> weights = Map.of("C", 12.011, "H", 1.008, "O", 15.999, "N", 14.007);
+        double m = 0;
+        for (Map.Entry<String, Integer> e : elements(formula).entrySet()) {
+            m += weights.get(e.getKey()) * e.getValue();
+        }
+        return m;
+    }
+
+    @Test
     void boilingPointsOfARelatedCrcEntryEqualThatEntry() throws IOException {
         // CRC Handbook, 95th ed. (2014), "Physical Constants of Organic Compounds", Tb of the entry the note names (key
         // crc-physical-constants-related, SOURCES.md): d-limonene 5989-27-5 450.75 K for dipentene, (±)-2-octanol
