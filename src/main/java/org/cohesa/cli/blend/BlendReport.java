@@ -31,7 +31,7 @@ final class BlendReport {
         }
     }
 
-    record Phase(boolean checked, boolean splits, String model, String detail) {
+    record Phase(boolean checked, boolean splits, String model, String detail, String basis) {
     }
 
     record Variant(List<Part> components, double red, @JsonProperty("ra") double ra) {
@@ -53,8 +53,8 @@ final class BlendReport {
 
     static Suggestion suggestion(int rank, BlendSuggestion s, Comparison comparison) {
         RankedBlend b = s.blend();
-        Phase phase = s.phase() == null ? new Phase(true, false, null, "a single liquid cannot split")
-                : new Phase(s.phase().checked(), s.phase().splits(), s.phase().model(), s.phase().detail());
+        Phase phase = s.phase() == null ? new Phase(true, false, null, "a single liquid cannot split", null)
+                : new Phase(s.phase().checked(), s.phase().splits(), s.phase().model(), s.phase().detail(), s.phase().basis());
         List<Variant> variants = s.variants().stream().map(v -> new Variant(Part.of(v.components()), Output.round(v.red(), 4), Output.round(v.ra(), 4))).toList();
         return new Suggestion(rank, Part.of(b.components()), Output.round(b.point().dD(), 3), Output.round(b.point().dP(), 3), Output.round(b.point().dH(), 3),
                 Output.round(b.ra(), 4), Output.round(b.red(), 4), b.withinLimit(), b.rankBy().word(),

@@ -68,7 +68,7 @@ public final class BlendView {
         if (!s.phase().checked()) {
             return "NOT CHECKED";
         }
-        return s.phase().splits() ? "TWO PHASES" : "one phase";
+        return (s.phase().splits() ? "TWO PHASES" : "one phase") + (s.phase().basis() == null ? "" : " (" + s.phase().basis().replace("measured with water, model elsewhere", "measured + model") + ")");
     }
 
     /** The search summary line: what was searched, what was left out. */

@@ -193,6 +193,10 @@ public final class WaterMiscibility {
 
     private static WaterJudgement multicomponent(List<Solvent> components, double[] volumeFractions, List<Solvent> present, int water,
                                                  double kelvin, WaterSolubilityTable data) {
+        WaterJudgement additive = additiveUptake(present, volumeFractions(components, volumeFractions, present), water, kelvin, data);
+        if (additive != null) {
+            return additive;
+        }
         List<String> unsure = new ArrayList<>();
         for (int i = 0; i < present.size(); i++) {
             if (i == water) {
@@ -230,6 +234,67 @@ public final class WaterMiscibility {
             }
         }
         return model(components, volumeFractions, kelvin, String.join("; ", unsure) + ": ");
+    }
+
+    private static double[] volumeFractions(List<Solvent> components, double[] volumeFractions, List<Solvent> present) {
+        double[] phi = new double[present.size()];
+        for (int i = 0, k = 0; i < components.size(); i++) {
+            if (volumeFractions[i] > 0) {
+                phi[k++] = volumeFractions[i];
+            }
+        }
+        return phi;
+    }
+
+    /**
+     * The additive-uptake rule for water with several solvents that are each only partly miscible with it (our own
+     * rule, docs/methods.md "Water miscibility"): the solvent-rich phase can hold at most Σ m_i·u_i/(1 − u_i) of
+     * water (u_i = water's mass-fraction solubility in solvent i) and the water-rich phase can dissolve the solvents
+     * only while Σ (m_i/m_w)/(s_i/(1 − s_i)) ≤ 1 (s_i = solvent i's solubility in water). More water than the first
+     * and more solvent than the second is two phases. It assumes no solvent helps another take up water, which is
+     * why it is used only when every non-water component is partly miscible by the data (a cosolvent that mixes
+     * with water in all proportions can carry any amount; then the model decides). Null when it does not apply or
+     * does not decide.
+     */
+    private static WaterJudgement additiveUptake(List<Solvent> present, double[] phi, int water, double kelvin, WaterSolubilityTable data) {
+        double mw = phi[water] * density(present.get(water));
+        double uptake = 0;
+        double dissolved = 0;
+        List<String> parts = new ArrayList<>();
+        for (int i = 0; i < present.size(); i++) {
+            if (i == water) {
+                continue;
+            }
+            Solvent s = present.get(i);
+            Optional<WaterSolubility> row = data.find(s);
+            if (row.isEmpty() || row.get().miscible() || row.get().lcstC() != null || row.get().ucstC() != null || !row.get().near(kelvin)) {
+                return null;
+            }
+            double m = phi[i] * density(s);
+            double u = row.get().waterInSolventWtPct() / 100;
+            double sw = row.get().solventInWaterWtPct() / 100;
+            uptake += m * u / (1 - u);
+            dissolved += (m / mw) / (sw / (1 - sw));
+            parts.add(s.name() + " " + num(row.get().waterInSolventWtPct()) + " mass % (" + row.get().source() + ", " + row.get().basis() + ")");
+        }
+        if (mw > uptake && dissolved > 1) {
+            double wWater = mw / (mw + sum(present, phi, water));
+            return new WaterJudgement(true, WaterJudgement.Basis.MEASURED, WaterJudgement.MEASURED_MODEL, String.format(Locale.ROOT,
+                    "two liquid phases at %.1f °C: the blend holds %.3g mass %% water, more than its solvents can take up added together "
+                            + "(water's solubility in %s) and more solvent than the water can dissolve", kelvin - 273.15, 100 * wWater,
+                    String.join(", ", parts)));
+        }
+        return null;
+    }
+
+    private static double sum(List<Solvent> present, double[] phi, int water) {
+        double m = 0;
+        for (int i = 0; i < present.size(); i++) {
+            if (i != water) {
+                m += phi[i] * density(present.get(i));
+            }
+        }
+        return m;
     }
 
     /** True when the data say the pair is one phase at every composition at {@code kelvin}. */

@@ -15,11 +15,18 @@ public interface PhaseCheck {
      * @param splits  true when the blend separates into two liquid phases
      * @param model   the model that decided, e.g. "UNIFAC (LLE, Magnussen 1981)", or null when not checked
      * @param detail  a sentence for the user
+     * @param basis   what judged it: "measured" (published mutual solubility with water), "measured with water,
+     *                model elsewhere", or "model" (the activity model alone); null when not checked
      */
-    record Verdict(boolean checked, boolean splits, String model, String detail) {
+    record Verdict(boolean checked, boolean splits, String model, String detail, String basis) {
+
+        /** A verdict of the activity model alone. */
+        public Verdict(boolean checked, boolean splits, String model, String detail) {
+            this(checked, splits, model, detail, checked ? "model" : null);
+        }
 
         public static Verdict notChecked(String why) {
-            return new Verdict(false, false, null, why);
+            return new Verdict(false, false, null, why, null);
         }
     }
 

@@ -12,12 +12,11 @@ import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.cohesa.core.InvalidInputException;
-import org.cohesa.core.activity.Miscibility;
-import org.cohesa.core.activity.MiscibilityResult;
 import org.cohesa.core.blend.BlendConstraints;
 import org.cohesa.core.blend.BlendDesigner;
 import org.cohesa.core.blend.BlendSuggestion;
 import org.cohesa.core.blend.CancellationToken;
+import org.cohesa.core.blend.MeasuredFirstPhaseCheck;
 import org.cohesa.core.blend.PhaseCheck;
 import org.cohesa.core.blend.RankBy;
 import org.cohesa.core.blend.ReactiveFlag;
@@ -284,17 +283,9 @@ public final class BlendModel {
         });
     }
 
-    /** The two-phase test: the shared activity-coefficient module's miscibility check. */
+    /** The two-phase test: published mutual solubilities with water first, the activity model elsewhere (as the command line). */
     static PhaseCheck miscibility() {
-        return (components, fractions, kelvin) -> {
-            MiscibilityResult r;
-            try {
-                r = Miscibility.check(components, fractions, kelvin);
-            } catch (IllegalArgumentException e) {
-                return PhaseCheck.Verdict.notChecked(e.getMessage());
-            }
-            return new PhaseCheck.Verdict(true, r.splits(), r.model(), r.detail());
-        };
+        return MeasuredFirstPhaseCheck.with(WaterMiscibilityCsv.bundled());
     }
 
     BlendConstraints constraints(SolventLibrary lib) {

@@ -328,7 +328,7 @@ public final class BlendView {
         if (v == null || !v.checked()) {
             return r.blend().size() == 1 ? "single liquid" : "not checked";
         }
-        return v.splits() ? "SPLITS" : "one phase";
+        return (v.splits() ? "SPLITS" : "one phase") + (v.basis() == null ? "" : " (" + v.basis().replace("measured with water, model elsewhere", "measured + model") + ")");
     }
 
     static String describe(BlendModel.Row r) {
@@ -339,7 +339,7 @@ public final class BlendView {
                 rb.point().dH(), rb.ra(), rb.red()));
         var v = r.suggestion().phase();
         if (v != null && v.detail() != null) {
-            b.append("Phases: ").append(v.detail()).append(v.model() == null ? "" : " (" + v.model() + ")").append('\n');
+            b.append("Phases: ").append(v.detail()).append(v.model() == null ? "" : " (" + v.model() + (v.basis() == null ? "" : "; judged by: " + v.basis()) + ")").append('\n');
         }
         for (String w : r.suggestion().warnings()) {
             b.append("Warning: ").append(w).append('\n');
