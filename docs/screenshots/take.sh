@@ -22,6 +22,11 @@ sized() {   # sized NAME ARGS...: the screen at the two sizes the app is judged 
 target="--target=18.5,9,8,8"   # an invented demo sphere
 # a blend the search itself proposes for the demo sphere (top 3-component candidate)
 proposed="--blend=dimethyl phthalate:0.67,decalin:0.13,propylene glycol:0.2"
+# an invented demo case (replace toluene): the first two candidates are chosen and checked
+sized case-candidates --case=toluene --screen=blends "$target" --search=3
+sized cases --screen=cases   # the case list: the demo case saved by the two runs above
+sized case-checks --case=toluene --screen=checks "$target" --search=3
+sized case-record --case=toluene --screen=record "$target" --search=3
 sized blends --screen=blends "$target" --search=3
 sized drying --screen=drying "$target" "$proposed"
 sized space-3d --screen=space --view=3d "$target" --select=toluene "$proposed"

@@ -3,6 +3,7 @@ package org.cohesa.desktop;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Locale;
 import javafx.animation.PauseTransition;
 import javafx.application.Application;
@@ -78,6 +79,14 @@ public final class CohesaApp extends Application {
 
     private void afterLoad(StartOptions opts, Scene scene) {
         Session session = workbench.session();
+        if (opts.caseReplacing() != null) {
+            try {
+                workbench.caseModel().start("Replace " + opts.caseReplacing() + " (invented demo case)", org.cohesa.core.cases.SubstitutionCase.Kind.REPLACE,
+                        opts.caseReplacing(), "demo process (invented)");
+            } catch (RuntimeException e) {
+                System.err.println("error: " + ErrorText.of(e));
+            }
+        }
         if (opts.target() != null) {
             session.targetProperty().set(new TargetChoice("typed-in sphere", opts.target(), "typed in"));
         }
@@ -94,7 +103,15 @@ public final class CohesaApp extends Application {
         if (opts.search() > 0) {
             workbench.blendModel().maxComponents.set(opts.search());
             try {
-                workbench.blendModel().search(() -> finish(opts, scene));
+                workbench.blendModel().search(() -> {
+                    var rows = workbench.blendModel().rows();
+                    if (opts.caseReplacing() != null && !rows.isEmpty()) {
+                        workbench.caseModel().choose(List.copyOf(rows.subList(0, Math.min(2, rows.size()))));
+                        workbench.caseModel().runChecks(() -> finish(opts, scene));
+                    } else {
+                        finish(opts, scene);
+                    }
+                });
             } catch (RuntimeException e) {
                 System.err.println("error: " + ErrorText.of(e));
                 finish(opts, scene);

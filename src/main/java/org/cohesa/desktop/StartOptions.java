@@ -17,9 +17,9 @@ import org.cohesa.core.hsp.SolubilitySphere;
  * {@code --size=WxH} (window size of a screenshot or frame measurement, default 1400x860).
  */
 public record StartOptions(Path screenshot, Screen screen, int view, SolubilitySphere target, String select, int measurePoints,
-                           String blend, int search, int width, int height) {
+                           String blend, int search, int width, int height, String caseReplacing) {
 
-    static final List<String> NAMES = List.of("screenshot", "screen", "view", "target", "select", "measure-frames", "blend", "search", "size");
+    static final List<String> NAMES = List.of("screenshot", "screen", "view", "target", "select", "measure-frames", "blend", "search", "size", "case");
     private static final List<String> VIEWS = List.of("3d", "p-h", "d-p", "d-h", "teas");
 
     /** True for an argument the desktop app understands (the launcher sends everything else to the command line). */
@@ -86,7 +86,18 @@ public record StartOptions(Path screenshot, Screen screen, int view, SolubilityS
         }
         int[] size = size(named.get("size"));
         return new StartOptions(shot == null ? null : Path.of(shot), screen, view, target, named.get("select"), points, named.get("blend"),
-                search(named.get("search")), size[0], size[1]);
+                search(named.get("search")), size[0], size[1], caseReplacing(named.get("case")));
+    }
+
+    /** {@code --case=LIQUID}: an invented demo case replacing LIQUID (for screenshots); with --search its first two candidates are chosen and checked. */
+    private static String caseReplacing(String text) {
+        if (text == null) {
+            return null;
+        }
+        if (text.isBlank()) {
+            throw new InvalidInputException("--case", text, "name the liquid the demo case replaces, e.g. --case=toluene");
+        }
+        return text.strip();
     }
 
     private static int[] size(String text) {

@@ -63,6 +63,7 @@ public final class Workbench {
     private final CaseModel caseModel;
     private final CaseStrip strip;
     private final BlendView blendView;
+    private final org.cohesa.desktop.cases.InsideOutPanel insideOut;
     private final LibraryModel libraryModel;
     private final LibraryView libraryView;
     private final TargetView targetView;
@@ -95,6 +96,8 @@ public final class Workbench {
                 session.jobs().complain(org.cohesa.desktop.common.ErrorText.of(ex));
             }
         });
+        insideOut = new org.cohesa.desktop.cases.InsideOutPanel(blendModel);
+        blendView.addPanel("Inside or out", insideOut.node(), "blend-inside-out-tab");
         addScreen(Screen.CASES, new CasesView(caseModel, () -> show(Screen.TARGET)).node());
         addScreen(Screen.TARGET, targetView.node());
         addScreen(Screen.BLENDS, blendView.node());
@@ -171,6 +174,10 @@ public final class Workbench {
 
     public CaseStrip caseStrip() {
         return strip;
+    }
+
+    public org.cohesa.desktop.cases.InsideOutPanel insideOut() {
+        return insideOut;
     }
 
     public BlendView blendView() {

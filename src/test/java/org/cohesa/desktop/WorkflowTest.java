@@ -50,6 +50,31 @@ class WorkflowTest {
         String report = robot.lookup("#fit-report").queryAs(TextArea.class).getText();
         assertTrue(report.startsWith("Fitted sphere: δD"), report);
         assertTrue(report.contains("Good liquids inside:"), report);
+        // the findings as rows: misfits and next tests; a next test goes into the test table with one click
+        @SuppressWarnings("unchecked")
+        javafx.scene.control.TableView<Object> findings = robot.lookup("#fit-findings").queryAs(javafx.scene.control.TableView.class);
+        var fit = fx.workbench.targetView();
+        assertFalse(findings.getItems().isEmpty(), "the fit lists its misfits and next tests");
+        int next = -1;
+        for (int i = 0; i < findings.getItems().size(); i++) {
+            if (findings.getItems().get(i).toString().contains("next test")) {
+                next = i;
+                break;
+            }
+        }
+        org.junit.jupiter.api.Assertions.assertTrue(next >= 0, "a next test is suggested: " + findings.getItems());
+        int row = next;
+        robot.interact(() -> {
+            findings.getSelectionModel().select(row);
+            robot.lookup("#fit-add-test").queryAs(Button.class).fire();
+        });
+        String table = robot.lookup("#fit-csv").queryAs(TextArea.class).getText();
+        assertTrue(table.length() > csv.length() && table.strip().endsWith(","), "the next test's liquid is added with an empty score");
+        assertEquals(fit, fx.workbench.targetView());
+        // the tested liquids are kept with the fitted sphere for the parameter panel
+        assertEquals(fx.session.target().sphere(), fx.session.testedLiquidsProperty().get().sphere());
+        assertTrue(fx.session.testedLiquidsProperty().get().tests().size() >= 10);
+        robot.interact(() -> robot.lookup("#fit-csv").queryAs(TextArea.class).setText(csv));
 
         // the fit is saved as the user's own material and appears in the material list
         robot.interact(() -> robot.lookup("#fit-save").queryAs(Button.class).fire());

@@ -127,6 +127,9 @@ public final class BlendView {
         Runnable showDefaults = () -> defaults.setText(model.leftOutBySafety().isEmpty() ? ""
                 : "Left out by the safety defaults:\n" + model.leftOutBySafety().stream().map(x -> "• " + x).collect(Collectors.joining("\n")));
         model.leftOutBySafety().addListener((javafx.collections.ListChangeListener<String>) ch -> showDefaults.run());
+        defaults.setMaxHeight(74); // four lines; the whole list is the tooltip
+        Runnable tip = () -> defaults.setTooltip(model.leftOutBySafety().isEmpty() ? null : new javafx.scene.control.Tooltip(defaults.getText()));
+        model.leftOutBySafety().addListener((javafx.collections.ListChangeListener<String>) ch -> tip.run());
         defaults.visibleProperty().bind(javafx.beans.binding.Bindings.isNotEmpty(model.leftOutBySafety()));
         defaults.managedProperty().bind(defaults.visibleProperty());
         Button choose = new Button("C_hoose for checks");
@@ -173,6 +176,13 @@ public final class BlendView {
         GridPane g = new GridPane();
         g.setHgap(8);
         g.setVgap(6);
+        // the labels keep their words whole; the fields take what is left
+        javafx.scene.layout.ColumnConstraints labels = new javafx.scene.layout.ColumnConstraints();
+        labels.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        javafx.scene.layout.ColumnConstraints fields = new javafx.scene.layout.ColumnConstraints();
+        fields.setHgrow(javafx.scene.layout.Priority.ALWAYS);
+        fields.setMinWidth(90);
+        g.getColumnConstraints().addAll(labels, fields);
         int row = 0;
         Spinner<Integer> k = Spinners.integer(1, 4, model.maxComponents);
         k.setId("blend-max-components");
@@ -193,6 +203,7 @@ public final class BlendView {
             }
         });
         rank.valueProperty().bindBidirectional(model.rankBy);
+        rank.setMaxWidth(Double.MAX_VALUE);
         ComboBox<String> ich = new ComboBox<>();
         ich.getItems().setAll("any", "2 or 3 (no class 1)", "3 only");
         ich.valueProperty().bindBidirectional(model.maxIchClass);
@@ -270,7 +281,7 @@ public final class BlendView {
     private static TextField field(javafx.beans.property.StringProperty p, String id) {
         TextField tf = new TextField();
         tf.setId(id);
-        tf.setPrefColumnCount(10);
+        tf.setPrefColumnCount(8);
         tf.textProperty().bindBidirectional(p);
         return tf;
     }

@@ -293,6 +293,16 @@ public final class CaseModel {
         });
     }
 
+    /** "acetone:0.3,ethanol:0.7" → "acetone 30 % + ethanol 70 %" (the notation itself when the library cannot read it). */
+    public String percentText(String blend) {
+        try {
+            Blend b = parse(new SolventLibrary(List.copyOf(session.solvents())), blend);
+            return String.join(" + ", b.components().stream().map(c -> c.solvent().name() + " " + Math.round(c.fraction() * 100) + " %").toList());
+        } catch (RuntimeException e) {
+            return blend;
+        }
+    }
+
     static Blend parse(SolventLibrary library, String text) {
         return text.contains(":") ? library.resolveBlend("candidate", text) : Blend.pure(library.resolve("candidate", text));
     }

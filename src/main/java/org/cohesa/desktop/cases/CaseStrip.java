@@ -27,6 +27,8 @@ public final class CaseStrip {
     public record Reference(String label, String id, Runnable open) {
     }
 
+    private static final double STEP_HEIGHT = 58;
+
     private final CaseModel model;
     private final HBox root = new HBox(6);
     private final Label caseLabel = new Label();
@@ -38,7 +40,9 @@ public final class CaseStrip {
         this.model = model;
         root.setId("case-strip");
         root.getStyleClass().add("case-strip");
-        root.setAlignment(Pos.CENTER_LEFT);
+        root.setAlignment(Pos.TOP_LEFT);
+        root.setMinHeight(Region.USE_PREF_SIZE);
+        root.setMaxHeight(Region.USE_PREF_SIZE);
         root.setPadding(new Insets(6, 10, 6, 10));
         Button cases = new Button("Cases");
         cases.setId("strip-cases");
@@ -47,7 +51,9 @@ public final class CaseStrip {
         caseLabel.getStyleClass().add("strip-case");
         caseLabel.setWrapText(true);
         caseLabel.setMaxWidth(230);
+        caseLabel.setPrefWidth(230);
         caseLabel.setMinWidth(120);
+        caseLabel.setMaxHeight(34);
         VBox head = new VBox(2, caseLabel, cases);
         root.getChildren().add(head);
         int i = 1;
@@ -57,6 +63,7 @@ public final class CaseStrip {
             Label text = new Label();
             text.getStyleClass().add("step-text");
             text.setWrapText(true);
+            text.setMaxHeight(32); // two lines; the full line is the tooltip
             text.setId("step-text-" + s.name().toLowerCase(java.util.Locale.ROOT));
             VBox box = new VBox(1, title, text);
             Button b = new Button();
@@ -66,7 +73,10 @@ public final class CaseStrip {
             b.setMaxWidth(Double.MAX_VALUE);
             b.setMinWidth(110);
             b.setPrefWidth(190);
-            b.setAlignment(Pos.CENTER_LEFT);
+            b.setMinHeight(STEP_HEIGHT);
+            b.setPrefHeight(STEP_HEIGHT);
+            b.setMaxHeight(STEP_HEIGHT);
+            b.setAlignment(Pos.TOP_LEFT);
             HBox.setHgrow(b, Priority.ALWAYS);
             b.setOnAction(e -> goStep.accept(s));
             steps.put(s, b);
@@ -76,6 +86,7 @@ public final class CaseStrip {
         Region gap = new Region();
         gap.setMinWidth(8);
         VBox refs = new VBox(2);
+        refs.setMinWidth(Region.USE_PREF_SIZE);
         Label refTitle = new Label("Reference");
         refTitle.getStyleClass().add("hint");
         refs.getChildren().add(refTitle);
@@ -84,6 +95,7 @@ public final class CaseStrip {
             Button b = new Button(r.label());
             b.setId(r.id());
             b.getStyleClass().add("reference-link");
+            b.setMinWidth(Region.USE_PREF_SIZE);
             b.setOnAction(e -> r.open().run());
             refRow.getChildren().add(b);
         }
@@ -111,6 +123,8 @@ public final class CaseStrip {
     private void refresh() {
         SubstitutionCase c = model.current();
         caseLabel.setText(c == null ? "No case open" : c.title() + (c.replaced().isEmpty() ? "" : " · replaces " + c.replaced()));
+        caseLabel.setTooltip(c == null ? null : new javafx.scene.control.Tooltip(c.kind().words() + ": " + caseLabel.getText()
+                + (c.process().isEmpty() ? "" : "\nprocess: " + c.process())));
         List<CaseProgress.State> states = c == null ? List.of() : CaseProgress.of(c);
         for (CaseStep s : CaseStep.values()) {
             Button b = steps.get(s);
@@ -120,6 +134,7 @@ public final class CaseStrip {
             } else {
                 CaseProgress.State st = states.get(s.ordinal());
                 stepText.get(s).setText((st.done() ? "✓ " : "○ ") + st.text());
+                b.setTooltip(new javafx.scene.control.Tooltip(s.title() + ": " + s.question() + "\n" + (st.done() ? "done: " : "missing: ") + st.text()));
                 b.getStyleClass().add(st.done() ? "step-done" : "step-missing");
             }
             if (s == showing) {

@@ -112,6 +112,7 @@ public final class CasesView {
         table.getColumns().add(Columns.text("Material", s -> s.material() == null ? "not chosen yet" : s.material(), 150));
         table.getColumns().add(Columns.text("Last saved", s -> LocalTimes.of(s.updated().toString()), 150));
         table.getSelectionModel().setSelectionMode(SelectionMode.SINGLE);
+        table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         table.setPlaceholder(new Label("No saved case yet: start one on the left."));
         TableTools.equip(table, () -> { });
         Button open = new Button("_Open");

@@ -42,7 +42,7 @@ public final class ChecksView {
             protected void updateItem(ChosenCandidate c, boolean empty) {
                 super.updateItem(c, empty);
                 setText(null);
-                setGraphic(empty || c == null ? null : cell(c, l.getWidth()));
+                setGraphic(empty || c == null ? null : cell(c, l.widthProperty()));
             }
         });
         list.setPlaceholder(new Label("No candidate chosen yet: on the Candidates step select cards and press “Choose for checks”."));
@@ -77,6 +77,7 @@ public final class ChecksView {
         Label hint = new Label("Each candidate gets three checks: its safety profile, its drying path against the material, "
                 + "and whether it stays one liquid, alone and with water.");
         hint.setWrapText(true);
+        hint.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
         hint.getStyleClass().add("hint");
         VBox left = new VBox(8, head, hint, new HBox(8, run, drying, remove), list);
         VBox.setVgrow(list, Priority.ALWAYS);
@@ -99,32 +100,37 @@ public final class ChecksView {
 
     private void refresh() {
         String selected = list.getSelectionModel().getSelectedItem() == null ? null : list.getSelectionModel().getSelectedItem().blend();
-        chosen.setAll(model.chosen());
+        if (!chosen.equals(model.chosen())) {
+            chosen.setAll(model.chosen());
+        }
         int keep = 0;
         for (int i = 0; i < chosen.size(); i++) {
             if (chosen.get(i).blend().equals(selected)) {
                 keep = i;
             }
         }
-        if (!chosen.isEmpty()) {
+        if (!chosen.isEmpty() && list.getSelectionModel().getSelectedIndex() != keep) {
             list.getSelectionModel().clearAndSelect(keep);
         }
         showDetail();
     }
 
-    private Node cell(ChosenCandidate c, double width) {
+    private Node cell(ChosenCandidate c, javafx.beans.value.ObservableDoubleValue width) {
         Label name = new Label(percent(c.blend()) + "   RED " + Numbers.two(c.red()));
-        name.getStyleClass().add("card-component");
-        name.setWrapText(true);
-        name.setMaxWidth(Math.max(200, width - 30));
+        name.getStyleClass().add("checks-name");
         VBox box = new VBox(2, name, check("Safety", c.safety()), check("Drying", c.drying()), check("Phases", c.miscibility()));
+        for (Node n : box.getChildren()) {
+            Label l = (Label) n;
+            l.setWrapText(true);
+            l.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+            l.maxWidthProperty().bind(javafx.beans.binding.Bindings.max(160, javafx.beans.binding.Bindings.subtract(width, 36)));
+            l.prefWidthProperty().bind(l.maxWidthProperty());
+        }
         return box;
     }
 
     private static Label check(String what, String result) {
         Label l = new Label((result == null ? "○ " + what + ": not checked yet" : "✓ " + what + ": " + result));
-        l.setWrapText(true);
-        l.setMaxWidth(420);
         l.getStyleClass().add(result == null ? "check-missing" : "check-done");
         return l;
     }
@@ -179,11 +185,6 @@ public final class ChecksView {
 
     /** "acetone:0.3,ethanol:0.7" → "acetone 30 % + ethanol 70 %" (the notation itself when the library cannot read it). */
     private String percent(String blend) {
-        try {
-            Blend b = CaseModel.parse(new SolventLibrary(java.util.List.copyOf(model.session().solvents())), blend);
-            return String.join(" + ", b.components().stream().map(c -> c.solvent().name() + " " + Math.round(c.fraction() * 100) + " %").toList());
-        } catch (RuntimeException e) {
-            return blend;
-        }
+        return model.percentText(blend);
     }
 }

@@ -45,6 +45,17 @@ public final class RecordStepView {
         replaced.setId("record-step-replaced");
         replacement.setId("record-step-replacement");
         replacement.setMaxWidth(Double.MAX_VALUE);
+        replacement.setConverter(new javafx.util.StringConverter<>() {
+            @Override
+            public String toString(String blend) {
+                return blend == null ? "" : model.percentText(blend);
+            }
+
+            @Override
+            public String fromString(String text) {
+                return text;
+            }
+        });
         process.setId("record-step-process");
         site.setId("record-step-site");
         reason.setId("record-step-reason");

@@ -96,8 +96,9 @@ public final class SafetyPanel {
         return l;
     }
 
-    private static final String[] HEADS = {"Liquid", "Volume", "Flash point", "GHS flammable / UN packing", "Exposure limit (TWA)",
-        "ICH Q3C class", "Guide rank"};
+    private static final String[] HEADS = {"Liquid", "Volume", "Flash point", "GHS category · UN packing group", "Exposure limit (TWA)",
+        "ICH Q3C class", "Guide rank (CHEM21)"};
+    private static final double[] MIN_WIDTH = {120, 74, 86, 104, 108, 150, 122};
 
     private static GridPane table(SafetyProfile p) {
         GridPane g = new GridPane();
@@ -109,7 +110,7 @@ public final class SafetyPanel {
             g.add(cell(HEADS[i], "safety-head"), i, 0);
             ColumnConstraints cc = new ColumnConstraints();
             cc.setHgrow(i == 0 ? Priority.ALWAYS : Priority.SOMETIMES);
-            cc.setMinWidth(i == 0 ? 150 : 80);
+            cc.setMinWidth(MIN_WIDTH[i]);
             g.getColumnConstraints().add(cc);
         }
         int row = 1;
@@ -138,12 +139,31 @@ public final class SafetyPanel {
         String[] blend = {p.isPure() ? "the liquid" : "the blend", "100 %", flash,
             (p.ghs().category() == null ? (fp.status() == SafetyProfile.FlashPointStatus.UNKNOWN ? "unknown" : "not classified")
                     : "category " + p.ghs().category()) + (p.packingGroup() == null ? "" : " · PG " + p.packingGroup()),
-            String.format(Locale.ROOT, "index %.2g%s", p.exposure().index(), p.exposure().complete() ? "" : " (incomplete)"),
-            CandidateFacts.worstIch(p.blend()).replace("ICH Q3C ", ""), p.guideRank() == null ? "unknown" : p.guideRank().label()};
+            exposureIndex(p.exposure()), ich(worst(p.ich())), p.guideRank() == null ? "unknown" : p.guideRank().label()};
         for (int i = 0; i < blend.length; i++) {
             g.add(cell(blend[i], "safety-total"), i, row);
         }
         return g;
+    }
+
+    /** The mixture exposure index (saturated vapour ÷ limit, summed); a component without a limit makes it a lower bound. */
+    private static String exposureIndex(VapourExposure.Result r) {
+        if (r.complete()) {
+            return String.format(Locale.ROOT, "index %.2g", r.index());
+        }
+        return r.index() > 0 ? String.format(Locale.ROOT, "index ≥ %.2g (a component has no limit)", r.index()) : "unknown (no limit known)";
+    }
+
+    /** The component with the strictest ICH Q3C class; an unlisted one only when none is listed. */
+    private static SafetyProfile.IchLine worst(List<SafetyProfile.IchLine> lines) {
+        SafetyProfile.IchLine w = null;
+        for (SafetyProfile.IchLine l : lines) {
+            if (w == null || w.entry() == null && l.entry() != null
+                    || l.entry() != null && w.entry() != null && l.entry().solventClass() < w.entry().solventClass()) {
+                w = l;
+            }
+        }
+        return w;
     }
 
     private static String exposure(VapourExposure.Component ex) {

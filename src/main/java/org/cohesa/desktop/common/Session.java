@@ -31,6 +31,14 @@ public final class Session {
     private final ObjectProperty<Blend> selectedBlend = new SimpleObjectProperty<>();
     private final ObjectProperty<List<HansenParameters>> dryingPath = new SimpleObjectProperty<>(List.of());
     private final StringProperty replacing = new SimpleStringProperty("");
+    private final ObjectProperty<FittedTests> testedLiquids = new SimpleObjectProperty<>();
+
+    /** The test results of a sphere fit and the sphere fitted to them. */
+    public record FittedTests(org.cohesa.core.hsp.SolubilitySphere sphere, List<org.cohesa.core.target.TestResult> tests) {
+        public FittedTests {
+            tests = List.copyOf(tests);
+        }
+    }
 
     public Session(Path databaseFile) {
         this.databaseFile = databaseFile;
@@ -77,6 +85,11 @@ public final class Session {
     /** The liquid the case replaces (a solvent name or NAME:FRACTION,…), empty when the case only seeks a liquid. */
     public StringProperty replacingProperty() {
         return replacing;
+    }
+
+    /** The test results of the last sphere fit (the parameter panel marks them by result); empty before a fit. */
+    public ObjectProperty<FittedTests> testedLiquidsProperty() {
+        return testedLiquids;
     }
 
     /** The selected blend's parameters along its drying path (empty when none was computed). */

@@ -85,6 +85,9 @@ public final class FitModel {
         }
     }
 
+    private record Outcome(FitResult fit, List<TestResult> tests) {
+    }
+
     public void fit(Runnable then) {
         SolventLibrary library = new SolventLibrary(List.copyOf(session.solvents()));
         String text = csv.get() == null ? "" : csv.get();
@@ -93,8 +96,10 @@ public final class FitModel {
             List<TestResult> results = TestSeriesCsv.read("test results", new StringReader(text), library);
             List<NamedPoint> candidates = library.searchable().stream().map(s -> new NamedPoint(s.name(), s.hansen())).toList();
             p.update(0.2, "Fitting " + results.size() + " test results (with bootstrap confidence)…");
-            return SphereFitter.fit(results, candidates, FitOptions.defaults(FitOptions.DEFAULT_SEED));
-        }, r -> {
+            return new Outcome(SphereFitter.fit(results, candidates, FitOptions.defaults(FitOptions.DEFAULT_SEED)), results);
+        }, outcome -> {
+            FitResult r = outcome.fit();
+            session.testedLiquidsProperty().set(new Session.FittedTests(r.sphere(), outcome.tests()));
             result.set(r);
             report.set(describe(r));
             TargetChoice fitted = new TargetChoice(label, r.sphere(), "fit of " + r.results() + " test results");

@@ -143,9 +143,66 @@ public final class TargetView {
         report.visibleProperty().bind(fitModel.reportProperty().isNotEmpty());
         report.managedProperty().bind(report.visibleProperty());
         report.setPrefRowCount(12);
-        right.setBottom(report);
+        report.setPrefColumnCount(46);
+        right.setBottom(findings(report));
         root.setLeft(side);
         root.setCenter(right);
+    }
+
+    /** One row of the fit's findings: a misfit or a suggested next test. */
+    record Finding(String kind, String liquid, Double score, double red, String note) {
+    }
+
+    /**
+     * The fit's findings as rows to act on, beside the summary: misfits (results on the wrong side of the surface) and
+     * the next tests that would tighten the fit most; "Add to my tests" puts a next test's liquid into the test table.
+     */
+    private Node findings(javafx.scene.control.TextArea report) {
+        javafx.scene.control.TableView<Finding> t = new javafx.scene.control.TableView<>();
+        t.setId("fit-findings");
+        t.getColumns().addAll(List.of(
+                Columns.text("Finding", Finding::kind, 90),
+                Columns.text("Liquid", Finding::liquid, 190),
+                Columns.number("Score", Finding::score, 60, 2),
+                Columns.number("RED", Finding::red, 60, 2),
+                Columns.text("Why", Finding::note, 320)));
+        t.setPlaceholder(new Label("After a fit: misfits and the next tests to run, one row each."));
+        t.setPrefHeight(200);
+        TableTools.equip(t, () -> { });
+        fitModel.resultProperty().addListener((o, a, r) -> {
+            java.util.List<Finding> rows = new java.util.ArrayList<>();
+            if (r != null) {
+                for (var m : r.quality().misfits()) {
+                    rows.add(new Finding("misfit", m.name(), m.score(), m.red(), m.score() >= org.cohesa.core.target.TestResult.GOOD_THRESHOLD
+                            ? "dissolved, but outside the sphere: retest, or check its parameters" : "did not dissolve, but inside the sphere: retest, or check its parameters"));
+                }
+                for (var n : r.nextTests()) {
+                    rows.add(new Finding("next test", n.name(), null, n.red(), n.reason()));
+                }
+            }
+            t.getItems().setAll(rows);
+        });
+        Button add = new Button("Add to my tests");
+        add.setId("fit-add-test");
+        add.disableProperty().bind(javafx.beans.binding.Bindings.createBooleanBinding(() -> t.getSelectionModel().getSelectedItem() == null
+                || !"next test".equals(t.getSelectionModel().getSelectedItem().kind()), t.getSelectionModel().selectedItemProperty()));
+        add.setOnAction(e -> {
+            Finding f = t.getSelectionModel().getSelectedItem();
+            String csv = fitModel.csvProperty().get() == null ? "" : fitModel.csvProperty().get();
+            String name = f.liquid().contains(",") ? "\"" + f.liquid() + "\"" : f.liquid(); // RFC 4180: names with commas are quoted
+            fitModel.csvProperty().set(csv + (csv.isEmpty() || csv.endsWith("\n") ? "" : "\n") + name + ",");
+            model.session().jobs().say("Added " + f.liquid() + " to the test table: type its score after the comma, then fit again.");
+        });
+        Label title = new Label("Findings of the fit");
+        title.getStyleClass().add("section-title");
+        VBox table = new VBox(6, new HBox(10, title, add), t);
+        VBox.setVgrow(t, Priority.ALWAYS);
+        HBox box = new HBox(8, report, table);
+        HBox.setHgrow(table, Priority.ALWAYS);
+        box.setPadding(new Insets(6));
+        box.visibleProperty().bind(fitModel.reportProperty().isNotEmpty());
+        box.managedProperty().bind(box.visibleProperty());
+        return box;
     }
 
     private Node materialPicker() {
