@@ -170,6 +170,19 @@ ISOMER_RANGE = {
 }
 
 
+# CRC boiling points rejected on published evidence: the manual.csv value (with its source key) is used instead and the
+# note says why. N,N-diisopropylethylamine 7087-68-5: the CRC row (name "N-Ethyl-N-isopropyl-2-propanamine", the right
+# CAS; its density 742.25 kg/m³ and n_D 1.41382 are DIPEA's) gives Tb 387.15 K = 114 °C, but GESTIS (via the German
+# Wikipedia infobox) gives 127 °C, and the published Antoine equation quoted there reaches 101.325 kPa at 126.5 °C (at
+# 114 °C it gives 67 kPa). Not a mix-up with triethylamine (121-44-8, Tb 89.8 °C) or diisopropylamine (108-18-9, 84 °C).
+CRC_TB_REJECTED = {
+    "7087-68-5": "boiling point: CRC physical-constants value 114 °C (387.15 K) not used: GESTIS (German Wikipedia infobox, "
+                 "stored copy) gives 127 °C and the published Antoine equation quoted there (log10 P/Torr = 7.66956 − "
+                 "1663.8374/(t/°C + 220.897)) gives 101.325 kPa at 126.5 °C but only 67 kPa at 114 °C; the CRC row is this "
+                 "compound's (name, CAS, density 0.7422, n_D 1.4138 agree), its Tb looks like a transcription error",
+}
+
+
 def related_boiling_point(cas, phys):
     """(Tb in K, note) for a solvent that the CRC table lists under another CAS only: the same liquid under another
     entry (vapour.TB_PROXIES, vapour.PROXIES: enantiomers, racemates) or, for an isomer mixture, the isomer whose
@@ -449,7 +462,11 @@ def main(argv):
 
         # boiling and melting point (°C)
         tb = num(phys[cas][3]) if cas in phys else None
-        if tb is not None:
+        if cas in CRC_TB_REJECTED:
+            tb = float(m["boiling_point_c"]) + 273.15
+            r["src_boiling_point"] = m["src_boiling_point"]
+            notes.append(CRC_TB_REJECTED[cas])
+        elif tb is not None:
             r["src_boiling_point"] = "crc-physical-constants"
         elif cas in hvap and num(hvap[cas][3]) is not None:
             tb = num(hvap[cas][3])

@@ -1,5 +1,6 @@
 package org.cohesa.store;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -358,6 +359,28 @@ class BundledDataCrossCheckTest {
             }
         }
         assertTrue(bad.isEmpty(), String.join("\n", bad));
+    }
+
+    @Test
+    void dipeaBoilingPointFollowsGestisAndThePublishedAntoineNotTheCrcRow() throws IOException {
+        // N,N-diisopropylethylamine, CAS 7087-68-5. CRC Handbook 95th ed., "Physical Constants of Organic Compounds":
+        // the row "N-Ethyl-N-isopropyl-2-propanamine" (this CAS; rho 742.25 kg/m3, n_D 1.41382, Tb 387.15 K = 114 °C).
+        // German Wikipedia "Diisopropylethylamin" (stored copy, dewiki-infobox): n_D 1.4138 (20 °C), Tb 127 °C and
+        // vapour pressure 16 hPa at 20 °C (both from GESTIS), Antoine log10(P/Torr) = 7.66956 − 1663.8374/(t/°C + 220.897).
+        List<String> crc = byCas("physical-constants-of-organic-compounds.csv").get("7087-68-5");
+        assertTrue(crc != null && crc.get(1).contains("isopropyl"), "CRC row of 7087-68-5: " + crc);
+        assertEquals(1.4138, Double.parseDouble(crc.get(5)), 0.0001, "the CRC row's n_D is DIPEA's (infobox 1.4138)");
+        Map<String, String> dipea = rows.stream().filter(x -> x.get("cas").equals("7087-68-5")).findFirst().orElseThrow();
+        assertEquals(Double.parseDouble(crc.get(4)) / 1000, num(dipea, "density"), 0.0001, "density stays the CRC row's");
+        java.util.function.DoubleUnaryOperator antoineKPa = t -> Math.pow(10, 7.66956 - 1663.8374 / (t + 220.897)) * 0.133322;
+        assertEquals(127.0, num(dipea, "boiling_point_c"), 0.05, "GESTIS boiling point");
+        assertEquals("dewiki-infobox", dipea.get("src_boiling_point"));
+        assertEquals(101.325, antoineKPa.applyAsDouble(num(dipea, "boiling_point_c")), 0.02 * 101.325,
+                "the published Antoine equation confirms 127 °C");
+        double crcTb = Double.parseDouble(crc.get(3)) - 273.15;
+        assertTrue(antoineKPa.applyAsDouble(crcTb) < 0.7 * 101.325, "the Antoine equation contradicts the CRC Tb " + crcTb);
+        // the stored curve runs through the GESTIS point, 1600 Pa at 20 °C
+        assertEquals(1600, correlation(dipea).pressurePa(293.15), 16, "stored curve at 20 °C");
     }
 
     private static double molarMass(String formula) {
