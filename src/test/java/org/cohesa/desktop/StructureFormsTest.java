@@ -114,6 +114,17 @@ class StructureFormsTest {
         assertEquals(StructureEntries.HSP_SOURCE, stored.sources().get("hsp"));
         assertEquals(206.0, stored.boilingPointC(), 1e-9);
         assertTrue(stored.note().contains("expected error"), stored.note());
+
+        SolventEditor edit = openEditor(robot, stored);
+        fx.awaitJobs();
+        assertNotNull(edit.structure().resultProperty().get(), "editing an entry with a structure shows it at once");
+        assertNotNull(edit.structure().resultProperty().get().drawing());
+        assertEquals(Double.parseDouble(expected.get("dD")), Double.parseDouble(edit.field("dD").getText()), 1e-9,
+                "showing the stored structure changes no field");
+        assertFalse(edit.field("dD").getStyleClass().contains("field-estimated"));
+        robot.interact(() -> ok[0] = edit.validate());
+        assertTrue(ok[0], "an unchanged stored structure needs no new estimate");
+        robot.interact(() -> edit.dialog().close());
     }
 
     @Test
@@ -255,9 +266,13 @@ class StructureFormsTest {
     }
 
     private SolventEditor openEditor(FxRobot robot) {
+        return openEditor(robot, null);
+    }
+
+    private SolventEditor openEditor(FxRobot robot, Solvent existing) {
         SolventEditor[] ed = new SolventEditor[1];
         robot.interact(() -> {
-            ed[0] = new SolventEditor(null, fx.session.jobs());
+            ed[0] = new SolventEditor(existing, fx.session.jobs());
             ed[0].dialog().initOwner(stage);
             ed[0].dialog().show();
         });

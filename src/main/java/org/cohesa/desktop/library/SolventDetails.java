@@ -22,6 +22,7 @@ final class SolventDetails {
         }
         line(b, "CAS", s.cas());
         line(b, "Formula", s.formula());
+        line(b, "SMILES", s.smiles());
         line(b, "Family", s.family() == null ? null : s.family().replace('_', ' '));
         b.append('\n');
         if (s.hasHansen()) {
@@ -47,6 +48,8 @@ final class SolventDetails {
                     .append(": TWA ").append(orDash(s.exposure().twaPpm())).append(" ppm, STEL ").append(orDash(s.exposure().stelPpm()))
                     .append(" ppm").append(s.exposure().skin() ? ", skin notation" : "").append('\n');
         }
+        line(b, "UNIFAC groups", s.unifac().isEmpty() ? null
+                : org.cohesa.store.StructureEntries.groupNames(s.unifac().counts()));
         line(b, "H-statements", s.hazardStatements().isEmpty() ? null : String.join(" ", s.hazardStatements()));
         line(b, "ICH Q3C class", s.ichClass() == null ? "not listed" : s.ichClass().toString());
         if (s.peroxideFormer()) {

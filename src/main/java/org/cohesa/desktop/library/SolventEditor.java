@@ -59,6 +59,8 @@ public final class SolventEditor {
     private final Map<String, String> structureColumns = new LinkedHashMap<>();
     private String structureNote;
     private String estimatedSmiles;
+    /** True while the estimate that shows a stored entry's structure runs: it draws and lists, it fills nothing. */
+    private boolean showingStored;
     private Solvent result;
 
     static final StructureEntries.Fields STRUCTURE_FIELDS = new StructureEntries.Fields("SMILES", "δD/δP/δH",
@@ -120,7 +122,13 @@ public final class SolventEditor {
             structure = new StructurePane(jobs, "SMILES");
             structure.smilesProperty().set(original.getOrDefault("smiles", ""));
             structure.setMeasured(this::measured);
-            structure.setOnEstimated(r -> fillFromEstimate(r.estimate()));
+            structure.setOnEstimated(r -> {
+                if (showingStored) {
+                    showingStored = false;
+                } else {
+                    fillFromEstimate(r.estimate());
+                }
+            });
             Label intro = new Label("From a structure (optional): give a SMILES and the empty fields are estimated; values you type stay.");
             intro.getStyleClass().add("hint");
             filledHint.setId("editor-filled");
@@ -134,6 +142,10 @@ public final class SolventEditor {
             structure = null;
         }
         content.getChildren().addAll(grid, filledHint, problems);
+        if (structure != null && !original.getOrDefault("smiles", "").isBlank()) {
+            showingStored = true;
+            structure.estimate();
+        }
         dialog.getDialogPane().setContent(content);
         dialog.getDialogPane().setPrefWidth(920);
         dialog.getDialogPane().getButtonTypes().addAll(ButtonType.OK, ButtonType.CANCEL);
