@@ -8,14 +8,14 @@ home=$(mktemp -d)
 shot() {   # shot NAME ARGS...
   local name=$1; shift
   COHESA_HOME="$home" xvfb-run -a -s "-screen 0 1400x900x24" \
-    java -Dprism.forceGPU=true -jar target/cohesa.jar --screenshot="$out/$name.png" "$@" 2>/dev/null
+    java -jar target/cohesa.jar --screenshot="$out/$name.png" "$@" 2>/dev/null
   echo "$out/$name.png"
 }
 sized() {   # sized NAME ARGS...: the screen at the two sizes the app is judged at
   local name=$1; shift
   for size in 1280x800 1920x1080; do
     COHESA_HOME="$home" xvfb-run -a -s "-screen 0 1940x1100x24" \
-      java -Dprism.forceGPU=true -jar target/cohesa.jar --size=$size --screenshot="$out/$name-$size.png" "$@" 2>/dev/null
+      java -jar target/cohesa.jar --size=$size --screenshot="$out/$name-$size.png" "$@" 2>/dev/null
     echo "$out/$name-$size.png"
   done
 }

@@ -7,10 +7,8 @@ import java.util.List;
 import java.util.Locale;
 import javafx.animation.PauseTransition;
 import javafx.application.Application;
-import javafx.application.ConditionalFeature;
 import javafx.application.Platform;
 import javafx.scene.Scene;
-import javafx.scene.SceneAntialiasing;
 import javafx.stage.Stage;
 import javafx.util.Duration;
 import org.cohesa.desktop.common.ErrorText;
@@ -46,10 +44,7 @@ public final class CohesaApp extends Application {
         settings = Settings.load(settingsFile);
         Session session = new Session(db);
         Thread.setDefaultUncaughtExceptionHandler((t, e) -> session.jobs().complain(ErrorText.of(e)));
-        // multisampling smooths the 3D edges but costs a software renderer (Mesa llvmpipe) six times the frame
-        // time (docs/performance.md): off by default, -Dcohesa.msaa=true turns it on for a real GPU
-        boolean msaa = "true".equalsIgnoreCase(System.getProperty("cohesa.msaa"));
-        workbench = new Workbench(session, msaa ? SceneAntialiasing.BALANCED : SceneAntialiasing.DISABLED);
+        workbench = new Workbench(session);
         boolean scripted = opts.screenshot() != null || opts.measurePoints() > 0;
         double w = scripted ? opts.width() : settings.windowWidth;
         double h = scripted ? opts.height() : settings.windowHeight;
@@ -144,19 +139,35 @@ public final class CohesaApp extends Application {
         workbench.show(Screen.SPACE);
         workbench.spaceView().showView(0);
         PauseTransition settle = new PauseTransition(Duration.seconds(1.5));
-        settle.setOnFinished(e -> workbench.spaceView().view3d().measureFrames(10, ms -> {
+        long[] cpuAtStart = new long[1];
+        settle.setOnFinished(e -> workbench.spaceView().view3d().measureFrames(10, () -> cpuAtStart[0] = processCpuNanos(), ms -> {
+            // CPU time the whole process spent per frame (all threads, rendering included): unlike the interval it
+            // hardly depends on what else the machine runs, so it compares runs taken under different loads
+            double cpuPerFrame = (processCpuNanos() - cpuAtStart[0]) / 1e6 / Math.max(1, ms.length);
             double[] sorted = ms.clone();
             Arrays.sort(sorted);
             double median = sorted.length == 0 ? Double.NaN : sorted[sorted.length / 2];
             double p95 = sorted.length == 0 ? Double.NaN : sorted[(int) Math.floor(sorted.length * 0.95)];
             double max = sorted.length == 0 ? Double.NaN : sorted[sorted.length - 1];
             System.out.println("intervals_ms=" + Arrays.toString(Arrays.stream(ms).map(Math::round).toArray()));
-            System.out.printf(Locale.ROOT, "points=%d frames=%d median_ms=%.1f p95_ms=%.1f max_ms=%.1f median_fps=%.1f scene3d=%s%n",
-                    workbench.spaceView().view3d().pointCount(), ms.length, median, p95, max, 1000 / median,
-                    Platform.isSupported(ConditionalFeature.SCENE3D));
+            javafx.scene.canvas.Canvas canvas = workbench.spaceView().view3d().canvas();
+            // the load average beside the figures: on a shared machine they mean little without it
+            System.out.printf(Locale.ROOT,
+                    "points=%d frames=%d median_ms=%.1f p95_ms=%.1f max_ms=%.1f median_fps=%.1f cpu_ms_per_frame=%.1f view=%.0fx%.0f load1=%.2f%n",
+                    workbench.spaceView().view3d().pointCount(), ms.length, median, p95, max, 1000 / median, cpuPerFrame,
+                    canvas.getWidth(), canvas.getHeight(),
+                    java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
             Platform.exit();
         }));
         settle.play();
+    }
+
+    /** CPU time of this process so far (ns), or 0 where the platform does not say. */
+    private static long processCpuNanos() {
+        if (java.lang.management.ManagementFactory.getOperatingSystemMXBean() instanceof com.sun.management.OperatingSystemMXBean os) {
+            return Math.max(0, os.getProcessCpuTime());
+        }
+        return 0;
     }
 
     private void saveSettings() {

@@ -7,7 +7,6 @@ import javafx.geometry.Insets;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.Parent;
-import javafx.scene.SceneAntialiasing;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.Menu;
@@ -75,7 +74,7 @@ public final class Workbench {
     private final Label startText = new Label();
     private final VBox startOverlay;
 
-    public Workbench(Session session, SceneAntialiasing antialiasing) {
+    public Workbench(Session session) {
         this.session = session;
         startOverlay = startOverlay();
         root.setId("workbench");
@@ -83,7 +82,7 @@ public final class Workbench {
         libraryView = new LibraryView(libraryModel);
         targetView = new TargetView(new TargetModel(session));
         spaceModel = new SpaceModel(session);
-        spaceView = new SpaceView(spaceModel, antialiasing);
+        spaceView = new SpaceView(spaceModel);
         dryingModel = new DryingModel(session);
         blendModel = new BlendModel(session);
         recordsModel = new RecordsModel(session);

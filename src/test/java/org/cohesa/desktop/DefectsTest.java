@@ -213,7 +213,7 @@ class DefectsTest {
         // read the notice in the same FX turn as load(): the build's completion is delivered on the FX thread, so on a
         // fast machine it could otherwise remove the notice before the test looks
         robot.interact(() -> {
-            w[0] = new Workbench(s, javafx.scene.SceneAntialiasing.DISABLED);
+            w[0] = new Workbench(s);
             w[0].load(null);
             covered[0] = w[0].starting();
             headline[0] = ((Label) w[0].root().lookup("#start-overlay").lookupAll(".headline").iterator().next()).getText();

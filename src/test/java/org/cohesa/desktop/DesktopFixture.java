@@ -4,7 +4,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
 import javafx.scene.Scene;
-import javafx.scene.SceneAntialiasing;
 import javafx.stage.Stage;
 import org.cohesa.desktop.common.Session;
 import org.testfx.util.WaitForAsyncUtils;
@@ -31,7 +30,7 @@ final class DesktopFixture {
     DesktopFixture(Stage stage, Path folder) throws Exception {
         this.folder = folder;
         session = new Session(folder.resolve("cohesa.db"));
-        workbench = new Workbench(session, SceneAntialiasing.DISABLED);
+        workbench = new Workbench(session);
         Scene scene = new Scene(workbench.root(), 1280, 800);
         scene.getStylesheets().add(CohesaApp.class.getResource("cohesa.css").toExternalForm());
         stage.setScene(scene);

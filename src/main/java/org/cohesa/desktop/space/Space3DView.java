@@ -1,37 +1,34 @@
 package org.cohesa.desktop.space;
 
+import java.nio.IntBuffer;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
+import java.util.Map;
 import java.util.function.Consumer;
 import javafx.animation.AnimationTimer;
+import javafx.application.Platform;
 import javafx.geometry.Point2D;
 import javafx.geometry.Point3D;
-import javafx.scene.AmbientLight;
-import javafx.scene.Group;
-import javafx.scene.Node;
-import javafx.scene.PerspectiveCamera;
-import javafx.scene.PointLight;
-import javafx.scene.SceneAntialiasing;
-import javafx.scene.SubScene;
+import javafx.geometry.VPos;
+import javafx.scene.canvas.Canvas;
+import javafx.scene.canvas.GraphicsContext;
 import javafx.scene.control.Label;
+import javafx.scene.image.ImageView;
+import javafx.scene.image.PixelBuffer;
+import javafx.scene.image.PixelFormat;
+import javafx.scene.image.WritableImage;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.MouseButton;
 import javafx.scene.input.MouseEvent;
-import javafx.scene.input.PickResult;
 import javafx.scene.input.ScrollEvent;
 import javafx.scene.layout.Pane;
-import javafx.scene.layout.StackPane;
 import javafx.scene.paint.Color;
-import javafx.scene.paint.PhongMaterial;
-import javafx.scene.shape.Box;
-import javafx.scene.shape.CullFace;
-import javafx.scene.shape.DrawMode;
-import javafx.scene.shape.MeshView;
-import javafx.scene.shape.Sphere;
-import javafx.scene.transform.Rotate;
-import javafx.scene.transform.Translate;
+import javafx.scene.text.Font;
+import javafx.scene.text.Text;
+import javafx.scene.text.TextAlignment;
+import org.cohesa.core.geometry.OrbitProjection;
 import org.cohesa.core.hsp.HansenParameters;
 import org.cohesa.core.hsp.SolubilitySphere;
 import org.cohesa.core.solvent.Blend;
@@ -40,253 +37,279 @@ import org.cohesa.core.solvent.Solvent;
 import org.cohesa.desktop.common.Numbers;
 import org.cohesa.desktop.common.Palette;
 import org.cohesa.desktop.common.Session;
+import org.cohesa.desktop.common.TargetChoice;
 
 /**
- * The interactive 3D view of Hansen space: solvents as coloured points, the target sphere translucent, the
- * selected solvent ringed, the selected blend with lines to its components and its drying path.
+ * The 3D view of Hansen space, drawn by our own projection onto a 2D canvas: the points turned about the target
+ * ({@link OrbitProjection}), sorted by depth and painted back to front, the target as a wire cage, the selected
+ * solvent ringed, the selected blend with lines to its components and its drying path.
  *
- * <p>World coordinates: x = δD (or 2δD when doubled), y = −δH (up on screen), z = δP, one world unit per
- * MPa^½. Drag rotates, the wheel zooms, a right/middle or shift drag pans, arrow keys rotate, +/− zoom, R resets.
- * Axis and tick labels are 2D labels laid over the 3D scene at the projected 3D anchor points, so they stay
- * upright and legible from every angle.
+ * <p>Why a canvas and not a JavaFX 3D sub-scene: on a machine without a GPU the sub-scene is filled by a software
+ * rasteriser pixel by pixel, every frame, which held 1,000 points at about 21 fps on an idle 2-core machine; a
+ * canvas draws a few thousand small discs and lines, and nothing else (docs/performance.md has both measurements).
+ *
+ * <p>World coordinates, relative to the pivot: x = δD (or 2δD when doubled) to the right, y = δH up, z = −δP (δP
+ * runs away from the viewer at the front view), one unit per MPa^½. Drag rotates, the wheel zooms about the target, a
+ * right/middle or shift drag pans, arrow keys rotate, +/− zoom, R resets.
  */
 public final class Space3DView {
 
-    static final double POINT_RADIUS = 0.38;
-    private static final double DEFAULT_RX = -22;
-    private static final double DEFAULT_RY = -32;
+    static final double DEFAULT_YAW = 38;
+    static final double DEFAULT_PITCH = 22;
+    /** Pixels kept free around the fitted content: room for the tick labels and axis titles. */
+    static final double MARGIN = 48;
+    private static final int WARM_UP_FRAMES = 5;
+    private static final Font TICK_FONT = Font.font("System", 12);
+    private static final Font TITLE_FONT = Font.font("System", javafx.scene.text.FontWeight.BOLD, 13);
+    private static final Font MARK_FONT = Font.font("System", javafx.scene.text.FontWeight.BOLD, 12);
 
     private final SpaceModel model;
     private final Session session;
-    private final StackPane container = new StackPane();
-    private final Group world = new Group();
-    private final Group axes = new Group();
-    private final Group pointGroup = new Group();
-    private final Group blendGroup = new Group();
-    private final Group pathGroup = new Group();
-    private final Sphere targetSphere = new Sphere(1, 20);
-    private final Sphere targetCentre = new Sphere(0.3, 12);
-    private final Sphere selectedMarker = new Sphere(POINT_RADIUS * 2.2, 16);
-    private final Pane overlay = new Pane();
+    private final Pane container = new Pane();
+    /** The picture: points and lines rasterised by {@link PixelRaster}, shown as one image. */
+    private final ImageView picture = new ImageView();
+    /** Over the picture: the labels (text only, a few dozen draw calls), and the mouse. */
+    private final Canvas canvas = new Canvas();
     private final Label hover = new Label();
-    private final Rotate rx = new Rotate(DEFAULT_RX, Rotate.X_AXIS);
-    private final Rotate ry = new Rotate(DEFAULT_RY, Rotate.Y_AXIS);
-    private final Translate pan = new Translate();
-    private final Translate centre = new Translate();
-    private final PerspectiveCamera camera = new PerspectiveCamera(true);
-    private final SubScene subScene;
-    private final List<Label> labels = new ArrayList<>();
-    private final List<Point3D> labelAnchors = new ArrayList<>();
-    private final List<PhongMaterial> categoryMaterials = new ArrayList<>();
-    private static final int WARM_UP_FRAMES = 5;
-    private double defaultDistance = 140;
-    private double defaultPanX;
-    private double defaultPanY;
-    /** The plotted box's corners relative to the pivot, in world units (for fitting the camera). */
-    private final List<Point3D> corners = new ArrayList<>();
+    private PixelRaster raster = new PixelRaster(1, 1);
+    private PixelBuffer<IntBuffer> pixelBuffer;
+
+    private double yaw = DEFAULT_YAW;
+    private double pitch = DEFAULT_PITCH;
+    /** Multiplies the fitted scale; 1 = fitted. */
+    private double zoom = 1;
+    /** Pixels the user has panned the picture by. */
+    private double shiftX;
+    private double shiftY;
+    private OrbitProjection.Fit fit = new OrbitProjection.Fit(10, 300, 250);
+    private double eye = 100;
+    private boolean scheduled;
+
+    // the scene, rebuilt when the model changes; coordinates relative to the pivot
+    private double[] pivot = {0, 0, 0};
+    private List<PlotPoint> points = List.of();
+    private Color[] pointColour = new Color[0];
+    private double[] pointXyz = new double[0];
+    /** Lines sorted with the points by depth: the axes, the floor grid, the target cage. */
+    private double[] segXyz = new double[0];
+    private SegmentKind[] segKind = new SegmentKind[0];
+    private final List<Anchor> anchors = new ArrayList<>();
+    private double targetRadius;
+
+    // the last frame
+    private double[] pu = new double[0];
+    private double[] pv = new double[0];
+    private double[] pw = new double[0];
+    private double[] sx = new double[0];
+    private double[] sy = new double[0];
+    private double[] sr = new double[0];
+    private long[] order = new long[0];
+    private final List<PlacedLabel> shown = new ArrayList<>();
+    private final Map<String, Double> textWidths = new HashMap<>();
+
     private double pressX;
     private double pressY;
     private boolean dragged;
 
-    public Space3DView(SpaceModel model, SceneAntialiasing antialiasing) {
+    private enum SegmentKind { AXIS, GRID, CAGE }
+
+    /** A label's text and its 3D anchor (relative to the pivot). */
+    private record Anchor(String text, String kind, double x, double y, double z) {
+    }
+
+    /**
+     * A label as drawn in the last frame: kind "title" (axis title), "tick" (tick value) or "mark" (the target, the
+     * selected solvent, the selected blend and its components); x, y, width, height in canvas pixels.
+     */
+    public record PlacedLabel(String text, String kind, double x, double y, double width, double height) {
+        boolean overlaps(double ox, double oy, double ow, double oh) {
+            return x < ox + ow && ox < x + width && y < oy + oh && oy < y + height;
+        }
+
+        boolean overlaps(PlacedLabel o) {
+            return overlaps(o.x, o.y, o.width, o.height);
+        }
+
+        /** True when a disc (a drawn point) touches the label's box. */
+        boolean touchesDisc(double cx, double cy, double r) {
+            double nx = Math.max(x, Math.min(cx, x + width));
+            double ny = Math.max(y, Math.min(cy, y + height));
+            return (nx - cx) * (nx - cx) + (ny - cy) * (ny - cy) < r * r;
+        }
+    }
+
+    public Space3DView(SpaceModel model) {
         this.model = model;
         this.session = model.session();
-        Group root = new Group();
-        world.getTransforms().addAll(pan, rx, ry, centre);
-        targetSphere.setId("target-sphere");
-        targetCentre.setId("target-centre");
-        selectedMarker.setId("selected-point");
-        axes.setId("axes");
-        pointGroup.setId("points");
-        blendGroup.setId("blend");
-        pathGroup.setId("drying-path");
-        // the target is an opaque wire cage, not a translucent surface: a point inside keeps its own hue (no blending
-        // with a glass colour), and a software renderer draws a few hundred lines far faster than a filled, blended sphere
-        PhongMaterial cage = new PhongMaterial(Palette.TARGET);
-        cage.setSpecularColor(Color.TRANSPARENT);
-        targetSphere.setMaterial(cage);
-        targetSphere.setDrawMode(DrawMode.LINE);
-        targetSphere.setCullFace(CullFace.NONE);
-        targetCentre.setMaterial(new PhongMaterial(Palette.TARGET));
-        PhongMaterial ring = new PhongMaterial(Palette.SELECTION);
-        selectedMarker.setMaterial(ring);
-        selectedMarker.setDrawMode(DrawMode.LINE);
-        selectedMarker.setVisible(false);
-        // the translucent sphere is added last: JavaFX blends in scene-graph order, so everything behind it
-        // must already be drawn
-        world.getChildren().addAll(axes, pointGroup, selectedMarker, blendGroup, pathGroup, targetCentre, targetSphere);
-        // one ambient light only: each point is a few pixels wide, so shading adds nothing a reader can see, while every
-        // extra light costs a software renderer per-pixel work (docs/performance.md); colours stay their palette hue
-        AmbientLight ambient = new AmbientLight(Color.WHITE);
-        root.getChildren().addAll(world, ambient);
-        camera.setFieldOfView(32);
-        camera.setNearClip(0.5);
-        camera.setFarClip(5000);
-        camera.setTranslateZ(-defaultDistance);
-        subScene = new SubScene(root, 600, 500, true, antialiasing);
-        subScene.setId("space3d");
-        subScene.setCamera(camera);
-        subScene.setFill(Palette.INK);
-        subScene.setFocusTraversable(true);
-        subScene.widthProperty().bind(container.widthProperty());
-        subScene.heightProperty().bind(container.heightProperty());
-        overlay.setMouseTransparent(true);
-        overlay.setId("space3d-labels");
+        container.setId("space3d-pane");
+        canvas.setId("space3d");
+        canvas.setFocusTraversable(true);
+        canvas.widthProperty().bind(container.widthProperty());
+        canvas.heightProperty().bind(container.heightProperty());
         hover.setId("space3d-hover");
         hover.getStyleClass().add("plot-hover");
         hover.setVisible(false);
         hover.setManaged(false);
-        container.getChildren().addAll(subScene, overlay);
+        hover.setMouseTransparent(true);
+        picture.setMouseTransparent(true);
+        picture.setId("space3d-picture");
+        container.getChildren().addAll(picture, canvas, hover);
         container.setMinSize(200, 200);
         container.setPrefSize(900, 640);
         container.setStyle("-fx-background-color: " + Palette.css(Palette.INK) + ";");
         installInteraction();
         model.pointsProperty().addListener((o, a, b) -> rebuild());
-        subScene.widthProperty().addListener((o, a, b) -> refit());
-        subScene.heightProperty().addListener((o, a, b) -> refit());
         model.doubledDdProperty().addListener((o, a, b) -> rebuild());
-        session.selectedSolventProperty().addListener((o, a, b) -> placeSelection());
-        session.selectedBlendProperty().addListener((o, a, b) -> drawBlend());
-        session.dryingPathProperty().addListener((o, a, b) -> drawPath());
-        for (javafx.beans.Observable obs : Arrays.asList(rx.angleProperty(), ry.angleProperty(), pan.xProperty(), pan.yProperty(),
-                camera.translateZProperty(), subScene.widthProperty(), subScene.heightProperty())) {
-            obs.addListener(x -> layoutLabels());
-        }
+        canvas.widthProperty().addListener((o, a, b) -> refit());
+        canvas.heightProperty().addListener((o, a, b) -> refit());
+        session.selectedSolventProperty().addListener((o, a, b) -> requestDraw());
+        session.selectedBlendProperty().addListener((o, a, b) -> requestDraw());
+        session.dryingPathProperty().addListener((o, a, b) -> requestDraw());
         rebuild();
     }
 
-    /** The node to put in a layout: the 3D scene with its label overlay. */
-    public StackPane node() {
+    /** The node to put in a layout. */
+    public Pane node() {
         return container;
     }
 
-    public SubScene subScene() {
-        return subScene;
+    public Canvas canvas() {
+        return canvas;
     }
 
-    /** World position of a parameter point (x = δD or 2δD, y = −δH, z = δP). */
-    public Point3D world(HansenParameters h) {
+    /** World position of a parameter point, not yet relative to the pivot: {k·δD, δH, −δP}. */
+    double[] world(HansenParameters h) {
         double k = model.doubledDdProperty().get() ? 2 : 1;
-        return new Point3D(k * h.dD(), -h.dH(), h.dP());
+        return new double[] {k * h.dD(), h.dH(), -h.dP()};
     }
 
-    /** Where a library solvent's point is drawn, in the 3D sub-scene's coordinates; null when it is not drawn. */
-    public Point3D scenePositionOf(String solventName) {
-        for (Node n : pointGroup.getChildren()) {
-            @SuppressWarnings("unchecked")
-            List<PlotPoint> pts = (List<PlotPoint>) n.getUserData();
-            for (PlotPoint p : pts) {
-                if (p.name().equalsIgnoreCase(solventName)) {
-                    return world.localToScene(world(p.hansen()));
-                }
+    private double[] relative(HansenParameters h) {
+        double[] p = world(h);
+        return new double[] {p[0] - pivot[0], p[1] - pivot[1], p[2] - pivot[2]};
+    }
+
+    /** Number of points drawn. */
+    public int pointCount() {
+        return points.size();
+    }
+
+    /**
+     * Where a library solvent sits after the view's turn, relative to the pivot (camera space, before the perspective
+     * division): rotation keeps distances, so the distance between two of these is their distance in the plot.
+     */
+    public Point3D turnedPositionOf(String solventName) {
+        for (PlotPoint p : points) {
+            if (p.name().equalsIgnoreCase(solventName)) {
+                double[] r = relative(p.hansen());
+                double[] t = projection().turn(r[0], r[1], r[2]);
+                return new Point3D(t[0], t[1], t[2]);
             }
         }
         return null;
     }
 
-    /** Number of points drawn (all colour groups). */
-    public int pointCount() {
-        int n = 0;
-        for (Node node : pointGroup.getChildren()) {
-            n += ((List<?>) node.getUserData()).size();
+    /** Where a library solvent's point is drawn on the canvas (pixels); null when it is not drawn. */
+    public Point2D screenPositionOf(String solventName) {
+        for (PlotPoint p : points) {
+            if (p.name().equalsIgnoreCase(solventName)) {
+                return toScreen(relative(p.hansen()));
+            }
         }
-        return n;
+        return null;
     }
 
-    /**
-     * The camera distance at which the plotted box, seen at the starting angle, fills the frame with an 8 % margin:
-     * each corner, turned as the view turns it, must project inside the frame (perspective: |x| / (d + z) ≤ tan of
-     * half the field of view, the horizontal one widened by the frame's aspect ratio).
-     */
-    private double fitDistance() {
-        double w = Math.max(1, subScene.getWidth());
-        double h = Math.max(1, subScene.getHeight());
-        double tv = Math.tan(Math.toRadians(camera.getFieldOfView() / 2)) * 0.86; // room for the axis titles
-        double th = tv * w / h;
-        Rotate sx = new Rotate(DEFAULT_RX, Rotate.X_AXIS);
-        Rotate sy = new Rotate(DEFAULT_RY, Rotate.Y_AXIS);
-        List<Point3D> turned = new ArrayList<>();
-        double minX = Double.MAX_VALUE;
-        double maxX = -Double.MAX_VALUE;
-        double minY = Double.MAX_VALUE;
-        double maxY = -Double.MAX_VALUE;
-        for (Point3D c : corners) {
-            Point3D q = sx.transform(sy.transform(c));
-            turned.add(q);
-            minX = Math.min(minX, q.getX());
-            maxX = Math.max(maxX, q.getX());
-            minY = Math.min(minY, q.getY());
-            maxY = Math.max(maxY, q.getY());
-        }
-        // the box is centred by a camera-space shift; the pivot (the target) stays the point rotation and zoom keep fixed
-        defaultPanX = turned.isEmpty() ? 0 : -(minX + maxX) / 2;
-        defaultPanY = turned.isEmpty() ? 0 : -(minY + maxY) / 2;
-        double d = 20;
-        for (Point3D q : turned) {
-            d = Math.max(d, Math.max(Math.abs(q.getX() + defaultPanX) / th, Math.abs(q.getY() + defaultPanY) / tv) - q.getZ());
-        }
-        return Math.min(2000, d);
+    /** Where the pivot (the target's centre, or the middle of the box without a target) is drawn (pixels). */
+    public Point2D pivotScreenPosition() {
+        return toScreen(new double[] {0, 0, 0});
     }
 
-    /** Refits the camera when the frame changes size, unless the user has zoomed. */
-    private void refit() {
-        boolean atDefault = Math.abs(camera.getTranslateZ() + defaultDistance) < 1e-6;
-        defaultDistance = fitDistance();
-        if (atDefault) {
-            resetView();
-        }
+    /** The target's outline radius on the canvas (pixels); 0 without a target. */
+    public double targetScreenRadius() {
+        return targetRadius <= 0 ? 0 : silhouetteRadius();
     }
 
-    /** Back to the starting angle, zoom and position. */
+    /** The labels drawn in the last frame (for tests: no tick label may overlap another label or a point). */
+    public List<PlacedLabel> visibleLabels() {
+        drawIfScheduled();
+        return List.copyOf(shown);
+    }
+
+    /** Screen discs of the points in the last frame: {x, y, r} each (for tests). */
+    public List<double[]> drawnDiscs() {
+        drawIfScheduled();
+        List<double[]> out = new ArrayList<>();
+        for (int i = 0; i < points.size(); i++) {
+            out.add(new double[] {sx[i], sy[i], sr[i]});
+        }
+        return out;
+    }
+
+    /** The hover text for the point under a canvas position, or null (what the tooltip would show). */
+    public String hoverTextAt(double x, double y) {
+        PlotPoint p = pointAt(x, y);
+        return p == null ? null : describe(p);
+    }
+
+    private OrbitProjection projection() {
+        return new OrbitProjection(yaw, pitch, eye);
+    }
+
+    private Point2D toScreen(double[] rel) {
+        OrbitProjection o = projection();
+        double[] t = o.turn(rel[0], rel[1], rel[2]);
+        double f = o.perspective(t[2]);
+        double s = fit.scale() * zoom;
+        return new Point2D(fit.offsetX() + shiftX + s * t[0] * f, fit.offsetY() + shiftY - s * t[1] * f);
+    }
+
+    /** Back to the starting angle, fitted to the frame. */
     public void resetView() {
-        rx.setAngle(DEFAULT_RX);
-        ry.setAngle(DEFAULT_RY);
-        pan.setX(defaultPanX);
-        pan.setY(defaultPanY);
-        camera.setTranslateZ(-defaultDistance);
+        yaw = DEFAULT_YAW;
+        pitch = DEFAULT_PITCH;
+        zoom = 1;
+        shiftX = 0;
+        shiftY = 0;
+        fit = fitFrame();
+        requestDraw();
     }
 
     public void rotateBy(double dxDegrees, double dyDegrees) {
-        ry.setAngle(ry.getAngle() + dxDegrees);
-        rx.setAngle(Math.max(-89, Math.min(89, rx.getAngle() - dyDegrees)));
+        yaw = (yaw + dxDegrees) % 360;
+        pitch = Math.max(-89, Math.min(89, pitch + dyDegrees));
+        requestDraw();
     }
 
-    /**
-     * Zooms about the target: the camera moves along its axis and the camera-space shift scales with the distance,
-     * so the target (the pivot) keeps its place on the screen while everything else grows or shrinks around it.
-     */
+    /** Zooms about the target: its place on the screen stays while everything else grows or shrinks around it. */
     public void zoomBy(double factor) {
-        double before = -camera.getTranslateZ();
-        double d = Math.max(20, Math.min(2000, before * factor));
-        double k = d / before;
-        pan.setX(pan.getX() * k);
-        pan.setY(pan.getY() * k);
-        camera.setTranslateZ(-d);
+        zoom = Math.max(0.2, Math.min(12, zoom * factor));
+        requestDraw();
     }
 
     /**
-     * Rotates the view steadily for {@code seconds} and reports the intervals between rendered frames
-     * (ms) to {@code done}: how interactive the view stays with the current number of points.
+     * Rotates the view steadily for {@code seconds} and reports the intervals between rendered frames (ms) to
+     * {@code done}: how interactive the view stays with the current number of points. {@code onStart} runs when the
+     * warm-up frames are over and timing begins.
      */
-    public void measureFrames(double seconds, Consumer<double[]> done) {
+    public void measureFrames(double seconds, Runnable onStart, Consumer<double[]> done) {
         List<Double> intervals = new ArrayList<>();
         AnimationTimer timer = new AnimationTimer() {
             private long start = -1;
             private long last = -1;
-
             private int frames;
 
             @Override
             public void handle(long now) {
-                // the first frames upload meshes and compile shaders: they are not what the user feels while rotating
+                // the first frames lay out and cache glyphs: they are not what the user feels while rotating
                 frames++;
                 if (frames == WARM_UP_FRAMES) {
                     start = now;
+                    onStart.run();
                 } else if (frames > WARM_UP_FRAMES) {
                     intervals.add((now - last) / 1e6);
                 }
                 last = now;
                 rotateBy(0.75, 0.1 * Math.sin(frames / 60.0));
+                drawNow();
                 if (start > 0 && now - start > seconds * 1e9) {
                     stop();
                     done.accept(intervals.stream().mapToDouble(Double::doubleValue).toArray());
@@ -297,50 +320,50 @@ public final class Space3DView {
     }
 
     private void installInteraction() {
-        subScene.addEventHandler(MouseEvent.MOUSE_PRESSED, e -> {
-            pressX = e.getSceneX();
-            pressY = e.getSceneY();
+        canvas.addEventHandler(MouseEvent.MOUSE_PRESSED, e -> {
+            pressX = e.getX();
+            pressY = e.getY();
             dragged = false;
-            subScene.requestFocus();
+            canvas.requestFocus();
         });
-        subScene.addEventHandler(MouseEvent.MOUSE_DRAGGED, e -> {
-            double dx = e.getSceneX() - pressX;
-            double dy = e.getSceneY() - pressY;
+        canvas.addEventHandler(MouseEvent.MOUSE_DRAGGED, e -> {
+            double dx = e.getX() - pressX;
+            double dy = e.getY() - pressY;
             if (Math.abs(dx) + Math.abs(dy) > 2) {
                 dragged = true;
             }
-            pressX = e.getSceneX();
-            pressY = e.getSceneY();
+            pressX = e.getX();
+            pressY = e.getY();
             if (e.getButton() == MouseButton.PRIMARY && !e.isShiftDown()) {
                 rotateBy(dx * 0.4, dy * 0.4);
             } else {
-                double perPixel = -camera.getTranslateZ() / Math.max(200, subScene.getHeight()) * 0.6;
-                pan.setX(pan.getX() + dx * perPixel);
-                pan.setY(pan.getY() + dy * perPixel);
+                shiftX += dx;
+                shiftY += dy;
+                requestDraw();
             }
             hover.setVisible(false);
         });
-        subScene.addEventHandler(ScrollEvent.SCROLL, e -> zoomBy(Math.exp(-e.getDeltaY() / 300)));
-        subScene.addEventHandler(MouseEvent.MOUSE_MOVED, e -> showHover(e.getPickResult(), e.getSceneX(), e.getSceneY()));
-        subScene.addEventHandler(MouseEvent.MOUSE_EXITED, e -> hover.setVisible(false));
-        subScene.addEventHandler(MouseEvent.MOUSE_CLICKED, e -> {
+        canvas.addEventHandler(ScrollEvent.SCROLL, e -> zoomBy(Math.exp(e.getDeltaY() / 300)));
+        canvas.addEventHandler(MouseEvent.MOUSE_MOVED, e -> showHover(e.getX(), e.getY()));
+        canvas.addEventHandler(MouseEvent.MOUSE_EXITED, e -> hover.setVisible(false));
+        canvas.addEventHandler(MouseEvent.MOUSE_CLICKED, e -> {
             if (dragged || e.getButton() != MouseButton.PRIMARY) {
                 return;
             }
-            PlotPoint p = pointAt(e.getPickResult());
+            PlotPoint p = pointAt(e.getX(), e.getY());
             if (p != null && p.solvent() != null) {
                 session.selectedSolventProperty().set(p.solvent());
             }
         });
-        subScene.setOnKeyPressed(e -> {
+        canvas.setOnKeyPressed(e -> {
             KeyCode k = e.getCode();
             switch (k) {
                 case LEFT -> rotateBy(-5, 0);
                 case RIGHT -> rotateBy(5, 0);
                 case UP -> rotateBy(0, -5);
                 case DOWN -> rotateBy(0, 5);
-                case PLUS, ADD, EQUALS -> zoomBy(0.85);
-                case MINUS, SUBTRACT -> zoomBy(1 / 0.85);
+                case PLUS, ADD, EQUALS -> zoomBy(1 / 0.85);
+                case MINUS, SUBTRACT -> zoomBy(0.85);
                 case R, HOME -> resetView();
                 default -> {
                     return;
@@ -350,27 +373,31 @@ public final class Space3DView {
         });
     }
 
-    private PlotPoint pointAt(PickResult pr) {
-        if (pr == null || !(pr.getIntersectedNode() instanceof MeshView mv) || !(mv.getUserData() instanceof List<?> pts)) {
-            return null;
+    /** The front-most point whose disc (plus 3 px) covers the position, or null. */
+    private PlotPoint pointAt(double x, double y) {
+        drawIfScheduled();
+        int best = -1;
+        for (int i = 0; i < points.size() && i < sx.length; i++) {
+            double r = sr[i] + 3;
+            double d = (sx[i] - x) * (sx[i] - x) + (sy[i] - y) * (sy[i] - y);
+            if (d <= r * r && (best < 0 || pw[i] > pw[best])) {
+                best = i;
+            }
         }
-        int face = pr.getIntersectedFace();
-        int i = face / PointMesh.FACES_PER_POINT;
-        return face >= 0 && i < pts.size() ? (PlotPoint) pts.get(i) : null;
+        return best < 0 ? null : points.get(best);
     }
 
-    private void showHover(PickResult pr, double sceneX, double sceneY) {
-        PlotPoint p = pointAt(pr);
+    private void showHover(double x, double y) {
+        PlotPoint p = pointAt(x, y);
         if (p == null) {
             hover.setVisible(false);
             return;
         }
         hover.setText(describe(p));
-        Point2D at = overlay.sceneToLocal(sceneX, sceneY);
         hover.autosize();
-        double x = Math.min(at.getX() + 14, overlay.getWidth() - hover.getWidth() - 4);
-        double y = Math.min(at.getY() + 14, overlay.getHeight() - hover.getHeight() - 4);
-        hover.relocate(Math.max(0, x), Math.max(0, y));
+        double hx = Math.min(x + 14, container.getWidth() - hover.getWidth() - 4);
+        double hy = Math.min(y + 14, container.getHeight() - hover.getHeight() - 4);
+        hover.relocate(Math.max(0, hx), Math.max(0, hy));
         hover.setVisible(true);
     }
 
@@ -384,247 +411,453 @@ public final class Space3DView {
         return text;
     }
 
+    // ---- the scene -------------------------------------------------------------------------------------------
+
     private void rebuild() {
         AxisRanges r = model.rangesProperty().get();
         double k = model.doubledDdProperty().get() ? 2 : 1;
         double x0 = k * r.dMin();
         double x1 = k * r.dMax();
-        double cx = (x0 + x1) / 2;
-        double cy = -(r.hMin() + r.hMax()) / 2;
-        double cz = (r.pMin() + r.pMax()) / 2;
         SolubilitySphere t = model.targetSphere();
-        if (t != null) {
-            // rotation and zoom turn about the target: it stays in the middle of the frame at every angle and zoom
-            Point3D tc = world(t.centre());
-            cx = tc.getX();
-            cy = tc.getY();
-            cz = tc.getZ();
+        // rotation and zoom turn about the target, so it keeps its place at every angle and zoom
+        pivot = t != null ? world(t.centre()) : new double[] {(x0 + x1) / 2, (r.hMin() + r.hMax()) / 2, -(r.pMin() + r.pMax()) / 2};
+        points = model.points();
+        List<Colouring.Category> cats = model.colouringProperty().get().categories();
+        int n = points.size();
+        pointColour = new Color[n];
+        pointXyz = new double[3 * n];
+        for (int i = 0; i < n; i++) {
+            PlotPoint p = points.get(i);
+            pointColour[i] = cats.get(Math.min(p.category(), cats.size() - 1)).colour();
+            double[] q = relative(p.hansen());
+            System.arraycopy(q, 0, pointXyz, 3 * i, 3);
         }
-        centre.setX(-cx);
-        centre.setY(-cy);
-        centre.setZ(-cz);
-        corners.clear();
-        for (double x : new double[] {x0, x1}) {
-            for (double y : new double[] {-r.hMin(), -r.hMax()}) {
-                for (double z : new double[] {r.pMin(), r.pMax()}) {
-                    corners.add(new Point3D(x - cx, y - cy, z - cz));
+        buildLines(r, k, t);
+        // a mild perspective: the eye three times as far from the pivot as the farthest corner of the box
+        double far = 1;
+        for (double[] c : boxCorners(r, k)) {
+            far = Math.max(far, Math.sqrt(c[0] * c[0] + c[1] * c[1] + c[2] * c[2]));
+        }
+        eye = 3 * far;
+        zoom = 1;
+        shiftX = 0;
+        shiftY = 0;
+        fit = fitFrame();
+        requestDraw();
+    }
+
+    private List<double[]> boxCorners(AxisRanges r, double k) {
+        List<double[]> out = new ArrayList<>();
+        for (double d : new double[] {r.dMin(), r.dMax()}) {
+            for (double h : new double[] {r.hMin(), r.hMax()}) {
+                for (double p : new double[] {r.pMin(), r.pMax()}) {
+                    out.add(new double[] {k * d - pivot[0], h - pivot[1], -p - pivot[2]});
                 }
             }
         }
-        double oldDefault = defaultDistance;
-        defaultDistance = fitDistance();
-        if (Math.abs(camera.getTranslateZ() + oldDefault) < 1e-6) {
-            resetView();
-        }
-        buildAxes(r, k);
-        buildPoints();
-        placeTarget();
-        placeSelection();
-        drawBlend();
-        drawPath();
-        layoutLabels();
+        return out;
     }
 
-    private void buildAxes(AxisRanges r, double k) {
-        axes.getChildren().clear();
-        overlay.getChildren().clear();
-        labels.clear();
-        labelAnchors.clear();
-        PhongMaterial axisMat = new PhongMaterial(Palette.AXIS);
-        PhongMaterial gridMat = new PhongMaterial(Palette.GRID.brighter());
+    private void buildLines(AxisRanges r, double k, SolubilitySphere t) {
+        List<double[]> segs = new ArrayList<>();
+        List<SegmentKind> kinds = new ArrayList<>();
+        anchors.clear();
         double x0 = k * r.dMin();
         double x1 = k * r.dMax();
-        Point3D o = new Point3D(x0, -r.hMin(), r.pMin());
-        axes.getChildren().add(Segments.between(o, new Point3D(x1, -r.hMin(), r.pMin()), 0.09, axisMat));
-        axes.getChildren().add(Segments.between(o, new Point3D(x0, -r.hMax(), r.pMin()), 0.09, axisMat));
-        axes.getChildren().add(Segments.between(o, new Point3D(x0, -r.hMin(), r.pMax()), 0.09, axisMat));
-        // δD ticks: every 2 MPa^½ of δD (4 of 2δD), with a floor grid line across δP
+        // the three axes from the corner at (δD min, δP 0, δH 0)
+        line(segs, kinds, SegmentKind.AXIS, x0, r.hMin(), r.pMin(), x1, r.hMin(), r.pMin());
+        line(segs, kinds, SegmentKind.AXIS, x0, r.hMin(), r.pMin(), x0, r.hMax(), r.pMin());
+        line(segs, kinds, SegmentKind.AXIS, x0, r.hMin(), r.pMin(), x0, r.hMin(), r.pMax());
+        // the floor grid (δH = 0) and the ticks
         for (double d = r.dMin(); d <= r.dMax() + 1e-9; d += AxisRanges.D_STEP) {
-            double x = k * d;
             if (d > r.dMin()) {
-                axes.getChildren().add(Segments.between(new Point3D(x, 0, r.pMin()), new Point3D(x, 0, r.pMax()), 0.03, gridMat));
+                line(segs, kinds, SegmentKind.GRID, k * d, r.hMin(), r.pMin(), k * d, r.hMin(), r.pMax());
             }
-            label(Numbers.plain(k * d), new Point3D(x, 0, r.pMin() - 2.2), "tick");
+            anchor(Numbers.plain(k * d), "tick", k * d, r.hMin(), r.pMin() - 2.4);
         }
         double pStep = r.phStep(r.pMax() - r.pMin());
-        for (double p = r.pMin(); p <= r.pMax() + 1e-9; p += pStep) {
-            if (p > r.pMin()) {
-                axes.getChildren().add(Segments.between(new Point3D(x0, 0, p), new Point3D(x1, 0, p), 0.03, gridMat));
-            }
-            if (p > r.pMin()) {
-                label(Numbers.plain(p), new Point3D(x0 - 2.2, 0, p), "tick");
-            }
+        for (double p = r.pMin() + pStep; p <= r.pMax() + 1e-9; p += pStep) {
+            line(segs, kinds, SegmentKind.GRID, x0, r.hMin(), p, x1, r.hMin(), p);
+            anchor(Numbers.plain(p), "tick", x0 - 2.6, r.hMin(), p);
         }
         double hStep = r.phStep(r.hMax() - r.hMin());
-        for (double h = r.hMin(); h <= r.hMax() + 1e-9; h += hStep) {
-            if (h > r.hMin()) {
-                axes.getChildren().add(Segments.between(new Point3D(x0, -h, r.pMin()), new Point3D(x0 + 1.2, -h, r.pMin()), 0.06, axisMat));
-                axes.getChildren().add(Segments.between(new Point3D(x0, -h, r.pMin()), new Point3D(x0, -h, r.pMin() + 1.2), 0.06, axisMat));
+        for (double h = r.hMin() + hStep; h <= r.hMax() + 1e-9; h += hStep) {
+            line(segs, kinds, SegmentKind.AXIS, x0, h, r.pMin(), x0 + 1.2, h, r.pMin());
+            line(segs, kinds, SegmentKind.AXIS, x0, h, r.pMin(), x0, h, r.pMin() + 1.2);
+            anchor(Numbers.plain(h), "tick", x0 - 2, h, r.pMin() - 2);
+        }
+        anchor((k == 2 ? "2δD" : "δD") + " (MPa½)", "title", x1 + 6, r.hMin(), r.pMin() - 3);
+        anchor("δP (MPa½)", "title", x0 - 3, r.hMin(), r.pMax() + 5);
+        anchor("δH (MPa½)", "title", x0, r.hMax() + 4, r.pMin());
+        targetRadius = 0;
+        if (t != null) {
+            // a wire cage of latitude and longitude lines; Ra² = 4ΔδD² + ΔδP² + ΔδH², so the sphere spans ±R0/2 in δD:
+            // ±R0 on a 2δD axis (round) and ±R0/2 on a δD axis (an ellipsoid)
+            targetRadius = t.r0();
+            double[] c = world(t.centre());
+            double rx = t.r0() * k / 2;
+            double rr = t.r0();
+            int around = 40;
+            for (int lat = -60; lat <= 60; lat += 30) {
+                double y = rr * Math.sin(Math.toRadians(lat));
+                double ring = Math.cos(Math.toRadians(lat));
+                for (int j = 0; j < around; j++) {
+                    double a0 = 2 * Math.PI * j / around;
+                    double a1 = 2 * Math.PI * (j + 1) / around;
+                    cage(segs, kinds, c, rx * ring * Math.cos(a0), y, rr * ring * Math.sin(a0), rx * ring * Math.cos(a1), y, rr * ring * Math.sin(a1));
+                }
             }
-            if (h > r.hMin()) {
-                label(Numbers.plain(h), new Point3D(x0 - 1.8, -h, r.pMin() - 1.8), "tick");
+            for (int lon = 0; lon < 180; lon += 30) {
+                double cl = Math.cos(Math.toRadians(lon));
+                double sl = Math.sin(Math.toRadians(lon));
+                for (int j = 0; j < around; j++) {
+                    double a0 = 2 * Math.PI * j / around;
+                    double a1 = 2 * Math.PI * (j + 1) / around;
+                    cage(segs, kinds, c, rx * Math.cos(a0) * cl, rr * Math.sin(a0), rr * Math.cos(a0) * sl,
+                            rx * Math.cos(a1) * cl, rr * Math.sin(a1), rr * Math.cos(a1) * sl);
+                }
             }
         }
-        label((k == 2 ? "2δD" : "δD") + " (MPa½)", new Point3D(x1 + 9, 0, r.pMin() - 3), "axis-title");
-        label("δP (MPa½)", new Point3D(x0 - 3, 0, r.pMax() + 7), "axis-title");
-        label("δH (MPa½)", new Point3D(x0, -r.hMax() - 4, r.pMin()), "axis-title");
-        overlay.getChildren().add(hover);
+        segXyz = new double[segs.size() * 6];
+        for (int i = 0; i < segs.size(); i++) {
+            System.arraycopy(segs.get(i), 0, segXyz, 6 * i, 6);
+        }
+        segKind = kinds.toArray(new SegmentKind[0]);
     }
 
-    private void label(String text, Point3D anchor, String style) {
-        Label l = new Label(text);
-        l.getStyleClass().addAll("plot-label", "plot-" + style);
-        l.setManaged(false);
-        labels.add(l);
-        labelAnchors.add(anchor);
-        overlay.getChildren().add(l);
+    /** A line between two points given as (k·δD, δH, δP). */
+    private void line(List<double[]> segs, List<SegmentKind> kinds, SegmentKind kind, double xa, double ha, double pa, double xb, double hb,
+            double pb) {
+        segs.add(new double[] {xa - pivot[0], ha - pivot[1], -pa - pivot[2], xb - pivot[0], hb - pivot[1], -pb - pivot[2]});
+        kinds.add(kind);
     }
 
-    /** Places every label at the screen position of its 3D anchor (centred on it). */
+    /** A cage line from offsets (world axes) about the sphere's centre c (world). */
+    private void cage(List<double[]> segs, List<SegmentKind> kinds, double[] c, double ax, double ay, double az, double bx, double by, double bz) {
+        segs.add(new double[] {c[0] + ax - pivot[0], c[1] + ay - pivot[1], c[2] + az - pivot[2], c[0] + bx - pivot[0], c[1] + by - pivot[1],
+            c[2] + bz - pivot[2]});
+        kinds.add(SegmentKind.CAGE);
+    }
+
+    private void anchor(String text, String kind, double x, double h, double p) {
+        anchors.add(new Anchor(text, kind, x - pivot[0], h - pivot[1], -p - pivot[2]));
+    }
+
     /**
-     * Places every label over its projected anchor, then hides the tick labels that would overlap a label already
-     * placed: axis titles first, then the ticks in axis order, so at a steep angle every other tick goes, never a title.
+     * The scale and offset that fit the box, the points, the target and the axis titles into the frame at the current
+     * angle, with {@link #MARGIN} pixels free on each side.
      */
-    private void layoutLabels() {
-        List<javafx.geometry.Bounds> placed = new ArrayList<>();
-        List<Integer> order = new ArrayList<>();
-        for (int i = 0; i < labels.size(); i++) {
-            if (labels.get(i).getStyleClass().contains("plot-axis-title")) {
-                order.add(0, i);
-            } else {
-                order.add(i);
-            }
-        }
-        for (int i : order) {
-            Label l = labels.get(i);
-            Point3D s = world.localToScene(labelAnchors.get(i), true);
-            Point2D local = overlay.sceneToLocal(s.getX(), s.getY());
-            l.autosize();
-            if (local == null) {
-                continue;
-            }
-            l.relocate(local.getX() - l.getWidth() / 2, local.getY() - l.getHeight() / 2);
-            javafx.geometry.Bounds b = new javafx.geometry.BoundingBox(l.getLayoutX() - 2, l.getLayoutY(), l.getWidth() + 4, l.getHeight());
-            boolean clash = placed.stream().anyMatch(b::intersects);
-            boolean title = l.getStyleClass().contains("plot-axis-title");
-            l.setVisible(title || !clash);
-            if (l.isVisible()) {
-                placed.add(b);
-            }
-        }
-    }
-
-    /** The labels drawn over the 3D view now (for tests: none may overlap another). */
-    public List<Label> visibleLabels() {
-        return labels.stream().filter(Label::isVisible).toList();
-    }
-
-    private void buildPoints() {
-        pointGroup.getChildren().clear();
-        List<Colouring.Category> cats = model.colouringProperty().get().categories();
-        categoryMaterials.clear();
-        List<List<PlotPoint>> byCat = new ArrayList<>();
-        for (Colouring.Category c : cats) {
-            byCat.add(new ArrayList<>());
-            PhongMaterial m = new PhongMaterial(c.colour());
-            m.setSpecularColor(Color.gray(0.35));
-            m.setSpecularPower(24);
-            categoryMaterials.add(m);
-        }
-        for (PlotPoint p : model.points()) {
-            byCat.get(Math.min(p.category(), cats.size() - 1)).add(p);
-        }
-        for (int c = 0; c < cats.size(); c++) {
-            List<PlotPoint> pts = byCat.get(c);
-            if (pts.isEmpty()) {
-                continue;
-            }
-            List<Point3D> centres = pts.stream().map(p -> world(p.hansen())).toList();
-            MeshView mv = new MeshView(PointMesh.of(centres, POINT_RADIUS));
-            mv.setMaterial(categoryMaterials.get(c));
-            mv.setCullFace(CullFace.NONE);
-            mv.setUserData(List.copyOf(pts));
-            mv.setId("points-" + cats.get(c).label().split("[ ,(]")[0].toLowerCase(Locale.ROOT) + "-" + c);
-            mv.getStyleClass().add("point-cloud");
-            pointGroup.getChildren().add(mv);
-        }
-    }
-
-    private void placeTarget() {
-        SolubilitySphere t = model.targetSphere();
-        targetSphere.setVisible(t != null);
-        targetCentre.setVisible(t != null);
-        if (t == null) {
-            return;
-        }
-        Point3D c = world(t.centre());
+    private OrbitProjection.Fit fitFrame() {
+        OrbitProjection o = projection();
+        double[] b = {Double.MAX_VALUE, -Double.MAX_VALUE, Double.MAX_VALUE, -Double.MAX_VALUE};
+        AxisRanges r = model.rangesProperty().get();
         double k = model.doubledDdProperty().get() ? 2 : 1;
-        targetSphere.setRadius(t.r0());
-        // Ra² = 4ΔδD² + ΔδP² + ΔδH²: the sphere spans ±R0/2 in δD, so ±R0 on a 2δD axis and ±R0/2 on a δD axis
-        targetSphere.setScaleX(k / 2);
-        for (Node n : List.of(targetSphere, targetCentre)) {
-            n.setTranslateX(c.getX());
-            n.setTranslateY(c.getY());
-            n.setTranslateZ(c.getZ());
+        for (double[] c : boxCorners(r, k)) {
+            grow(b, o, c[0], c[1], c[2]);
         }
-    }
-
-    private void placeSelection() {
-        Solvent s = session.selectedSolventProperty().get();
-        if (s == null || !s.hasHansen()) {
-            selectedMarker.setVisible(false);
-            return;
+        for (int i = 0; i < points.size(); i++) {
+            grow(b, o, pointXyz[3 * i], pointXyz[3 * i + 1], pointXyz[3 * i + 2]);
         }
-        Point3D p = world(s.hansen());
-        selectedMarker.setTranslateX(p.getX());
-        selectedMarker.setTranslateY(p.getY());
-        selectedMarker.setTranslateZ(p.getZ());
-        selectedMarker.setVisible(true);
-    }
-
-    private void drawBlend() {
-        blendGroup.getChildren().clear();
-        Blend b = session.selectedBlendProperty().get();
-        if (b == null || !b.hasHansen()) {
-            return;
+        for (int i = 0; i < segKind.length; i++) {
+            grow(b, o, segXyz[6 * i], segXyz[6 * i + 1], segXyz[6 * i + 2]);
         }
-        Point3D m = world(b.hansen());
-        PhongMaterial mat = new PhongMaterial(Palette.BLEND);
-        Box marker = new Box(1.1, 1.1, 1.1);
-        marker.setId("blend-point");
-        marker.setMaterial(mat);
-        marker.getTransforms().addAll(new Translate(m.getX(), m.getY(), m.getZ()), new Rotate(45, Rotate.Z_AXIS), new Rotate(35, Rotate.X_AXIS));
-        blendGroup.getChildren().add(marker);
-        Group links = new Group();
-        links.setId("blend-links");
-        PhongMaterial linkMat = new PhongMaterial(Palette.BLEND.deriveColor(0, 1, 0.85, 1));
-        for (BlendComponent c : b.components()) {
-            links.getChildren().add(Segments.between(m, world(c.solvent().hansen()), 0.07, linkMat));
-        }
-        blendGroup.getChildren().add(links);
-    }
-
-    private void drawPath() {
-        pathGroup.getChildren().clear();
-        List<HansenParameters> path = session.dryingPathProperty().get();
-        if (path == null || path.size() < 2) {
-            return;
-        }
-        PhongMaterial mat = new PhongMaterial(Palette.SELECTION);
-        Point3D prev = world(path.get(0));
-        for (int i = 1; i < path.size(); i++) {
-            Point3D next = world(path.get(i));
-            if (next.distance(prev) > 1e-6) {
-                pathGroup.getChildren().add(Segments.between(prev, next, 0.11, mat));
-                prev = next;
+        for (Anchor a : anchors) {
+            if (a.kind().equals("title")) {
+                grow(b, o, a.x(), a.y(), a.z());
             }
         }
-        Sphere end = new Sphere(0.35, 12);
-        end.setId("drying-path-end");
-        end.setMaterial(mat);
-        end.setTranslateX(prev.getX());
-        end.setTranslateY(prev.getY());
-        end.setTranslateZ(prev.getZ());
-        pathGroup.getChildren().add(end);
+        double w = Math.max(1, canvas.getWidth());
+        double h = Math.max(1, canvas.getHeight());
+        double margin = Math.min(MARGIN, Math.min(w, h) / 6);
+        return OrbitProjection.fit(b[0], b[1], b[2], b[3], w, h, margin);
+    }
+
+    private static void grow(double[] b, OrbitProjection o, double x, double y, double z) {
+        double[] t = o.turn(x, y, z);
+        double f = o.perspective(t[2]);
+        b[0] = Math.min(b[0], t[0] * f);
+        b[1] = Math.max(b[1], t[0] * f);
+        b[2] = Math.min(b[2], t[1] * f);
+        b[3] = Math.max(b[3], t[1] * f);
+    }
+
+    /** Refits to a new frame size, keeping the user's zoom and pan. */
+    private void refit() {
+        fit = fitFrame();
+        requestDraw();
+    }
+
+    private double silhouetteRadius() {
+        // a sphere of radius r at the pivot's depth, seen from distance e, outlines a circle of radius r·e/√(e² − r²)
+        double r = targetRadius;
+        return fit.scale() * zoom * r * eye / Math.sqrt(Math.max(1e-9, eye * eye - r * r));
+    }
+
+    // ---- drawing -------------------------------------------------------------------------------------------
+
+    private void requestDraw() {
+        if (!scheduled) {
+            scheduled = true;
+            Platform.runLater(this::drawIfScheduled);
+        }
+    }
+
+    private void drawIfScheduled() {
+        if (scheduled) {
+            drawNow();
+        }
+    }
+
+    /** Draws one frame: everything projected, sorted far to near, rasterised; the marks over it, the labels on top. */
+    void drawNow() {
+        scheduled = false;
+        int w = (int) Math.max(1, Math.round(canvas.getWidth()));
+        int h = (int) Math.max(1, Math.round(canvas.getHeight()));
+        if (raster.width != w || raster.height != h || pixelBuffer == null) {
+            raster = new PixelRaster(w, h);
+            pixelBuffer = new PixelBuffer<>(w, h, IntBuffer.wrap(raster.pixels), PixelFormat.getIntArgbPreInstance());
+            picture.setImage(new WritableImage(pixelBuffer));
+        }
+        PixelRaster px = raster;
+        px.clear(PixelRaster.rgb(Palette.INK));
+        int n = points.size();
+        int m = segKind.length;
+        ensureCapacity(n, m);
+        OrbitProjection o = projection();
+        double s = fit.scale() * zoom;
+        double ox = fit.offsetX() + shiftX;
+        double oy = fit.offsetY() + shiftY;
+        o.projectAll(pointXyz, n, pu, pv, pw);
+        for (int i = 0; i < n; i++) {
+            sx[i] = ox + s * pu[i];
+            sy[i] = oy - s * pv[i];
+            double f = o.perspective(pw[i]);
+            sr[i] = Math.max(2.5, Math.min(9, 4.2 * f * Math.sqrt(zoom)));
+        }
+        o.projectAll(segXyz, 2 * m, su, sv, sw);
+        // painter's order: points and lines by camera depth (the segment's middle), far first; the target's outline at
+        // the pivot's depth. Key = depth in 1/1000 units, shifted, with the index in the low 20 bits.
+        int total = n + m + (targetRadius > 0 ? 1 : 0);
+        for (int i = 0; i < n; i++) {
+            order[i] = (Math.round(pw[i] * 1000) << 20) | i;
+        }
+        for (int j = 0; j < m; j++) {
+            double depth = (sw[2 * j] + sw[2 * j + 1]) / 2;
+            order[n + j] = (Math.round(depth * 1000) << 20) | (n + j);
+        }
+        if (targetRadius > 0) {
+            order[n + m] = n + m;
+        }
+        Arrays.sort(order, 0, total);
+        int ink = PixelRaster.rgb(Palette.INK);
+        int axis = PixelRaster.rgb(Palette.AXIS);
+        int grid = PixelRaster.rgb(Palette.GRID.brighter());
+        int cageNear = PixelRaster.rgb(Palette.TARGET);
+        // the cage's far half in a darker shade of the same hue: opaque lines, so nothing behind or inside changes colour
+        int cageFar = PixelRaster.rgb(Palette.TARGET.deriveColor(0, 1, 0.5, 1));
+        int[] colours = new int[pointColour.length];
+        for (int i = 0; i < colours.length; i++) {
+            colours[i] = PixelRaster.rgb(pointColour[i]);
+        }
+        for (int q = 0; q < total; q++) {
+            int id = (int) (order[q] & 0xFFFFF);
+            if (id < n) {
+                px.disc(sx[id], sy[id], sr[id], colours[id], ink, 0.9);
+            } else if (id < n + m) {
+                int j = id - n;
+                double xa = ox + s * su[2 * j];
+                double ya = oy - s * sv[2 * j];
+                double xb = ox + s * su[2 * j + 1];
+                double yb = oy - s * sv[2 * j + 1];
+                switch (segKind[j]) {
+                    case AXIS -> px.line(xa, ya, xb, yb, 1.4, axis, 0, 0);
+                    case GRID -> px.line(xa, ya, xb, yb, 0.8, grid, 0, 0);
+                    default -> {
+                        boolean near = (sw[2 * j] + sw[2 * j + 1]) / 2 >= 0;
+                        px.line(xa, ya, xb, yb, near ? 1.1 : 0.8, near ? cageNear : cageFar, 0, 0);
+                    }
+                }
+            } else {
+                px.ring(ox, oy, silhouetteRadius(), 1.6, cageNear);
+            }
+        }
+        GraphicsContext g = canvas.getGraphicsContext2D();
+        g.clearRect(0, 0, canvas.getWidth(), canvas.getHeight());
+        shown.clear();
+        drawMarks(px, g);
+        pixelBuffer.updateBuffer(b -> null);
+        drawLabels(g, o, s, ox, oy);
+    }
+
+    private double[] su = new double[0];
+    private double[] sv = new double[0];
+    private double[] sw = new double[0];
+
+    private void ensureCapacity(int n, int m) {
+        if (pu.length < n) {
+            pu = new double[n];
+            pv = new double[n];
+            pw = new double[n];
+            sx = new double[n];
+            sy = new double[n];
+            sr = new double[n];
+        }
+        if (su.length < 2 * m) {
+            su = new double[2 * m];
+            sv = new double[2 * m];
+            sw = new double[2 * m];
+        }
+        if (order.length < n + m + 1) {
+            order = new long[n + m + 1];
+        }
+    }
+
+    /** The target's centre and name, the selected solvent ringed and named, the blend with its components named. */
+    private void drawMarks(PixelRaster px, GraphicsContext g) {
+        int ink = PixelRaster.rgb(Palette.INK);
+        int blend = PixelRaster.rgb(Palette.BLEND);
+        int white = PixelRaster.rgb(Palette.SELECTION);
+        TargetChoice target = session.target();
+        if (targetRadius > 0) {
+            Point2D c = pivotScreenPosition();
+            px.disc(c.getX(), c.getY(), 3.5, PixelRaster.rgb(Palette.TARGET), ink, 0.9);
+            String name = target == null || target.name() == null ? "target" : target.name();
+            markLabel(g, name + " · R0 " + Numbers.one(targetRadius), c.getX(), c.getY() - silhouetteRadius(), Palette.TARGET, true);
+        }
+        Blend b = session.selectedBlendProperty().get();
+        if (b != null && b.hasHansen()) {
+            Point2D m = toScreen(relative(b.hansen()));
+            for (BlendComponent c : b.components()) {
+                if (c.solvent().hasHansen()) {
+                    Point2D p = toScreen(relative(c.solvent().hansen()));
+                    px.line(m.getX(), m.getY(), p.getX(), p.getY(), 1.4, blend, 6, 4);
+                }
+            }
+            List<HansenParameters> path = session.dryingPathProperty().get();
+            if (path != null && path.size() > 1) {
+                Point2D prev = toScreen(relative(path.get(0)));
+                for (int i = 1; i < path.size(); i++) {
+                    Point2D next = toScreen(relative(path.get(i)));
+                    px.line(prev.getX(), prev.getY(), next.getX(), next.getY(), 2, white, 0, 0);
+                    prev = next;
+                }
+                px.disc(prev.getX(), prev.getY(), 3.5, white, ink, 0.9);
+            }
+            px.diamond(m.getX(), m.getY(), 8, blend, ink);
+            markLabel(g, "selected blend", m.getX(), m.getY(), Palette.BLEND, false);
+            for (BlendComponent c : b.components()) {
+                if (c.solvent().hasHansen()) {
+                    Point2D p = toScreen(relative(c.solvent().hansen()));
+                    px.ring(p.getX(), p.getY(), 7, 1.6, blend);
+                    markLabel(g, c.solvent().name() + " " + Numbers.percent(c.fraction()), p.getX(), p.getY(), Palette.BLEND, false);
+                }
+            }
+        }
+        Solvent sel = session.selectedSolventProperty().get();
+        if (sel != null && sel.hasHansen()) {
+            Point2D p = toScreen(relative(sel.hansen()));
+            px.ring(p.getX(), p.getY(), 9, 2, white);
+            markLabel(g, sel.name(), p.getX(), p.getY(), Palette.SELECTION, false);
+        }
+    }
+
+    /**
+     * Names a mark beside it: the first of eight places around the mark that covers no label already placed and no
+     * point, else the first that covers no label, else to the right. Drawn with a dark rim so it reads over the points.
+     */
+    private void markLabel(GraphicsContext g, String text, double x, double y, Color colour, boolean above) {
+        double tw = textWidth(text, MARK_FONT);
+        double th = 16;
+        double gap = 11;
+        double[][] places = above
+                ? new double[][] {{-tw / 2, -th - 4}, {gap, -th}, {-tw - gap, -th}, {-tw / 2, 4}}
+                : new double[][] {{gap, -th / 2}, {gap, -th - 2}, {gap, 2}, {-tw - gap, -th / 2}, {-tw - gap, -th - 2}, {-tw - gap, 2},
+                    {-tw / 2, -th - gap}, {-tw / 2, gap}};
+        PlacedLabel chosen = null;
+        PlacedLabel noLabelClash = null;
+        for (double[] pl : places) {
+            PlacedLabel c = new PlacedLabel(text, "mark", x + pl[0], y + pl[1], tw, th);
+            if (shown.stream().anyMatch(c::overlaps) || outside(c)) {
+                continue;
+            }
+            if (noLabelClash == null) {
+                noLabelClash = c;
+            }
+            if (!coversPoint(c)) {
+                chosen = c;
+                break;
+            }
+        }
+        if (chosen == null) {
+            chosen = noLabelClash != null ? noLabelClash : new PlacedLabel(text, "mark", x + places[0][0], y + places[0][1], tw, th);
+        }
+        shown.add(chosen);
+        g.setFont(MARK_FONT);
+        g.setTextAlign(TextAlignment.LEFT);
+        g.setTextBaseline(VPos.CENTER);
+        g.setStroke(Palette.INK);
+        g.setLineWidth(3.5);
+        g.strokeText(text, chosen.x(), chosen.y() + th / 2);
+        g.setFill(colour);
+        g.fillText(text, chosen.x(), chosen.y() + th / 2);
+    }
+
+    private boolean outside(PlacedLabel c) {
+        return c.x() < 2 || c.y() < 2 || c.x() + c.width() > canvas.getWidth() - 2 || c.y() + c.height() > canvas.getHeight() - 2;
+    }
+
+    private boolean coversPoint(PlacedLabel c) {
+        for (int i = 0; i < points.size(); i++) {
+            if (c.touchesDisc(sx[i], sy[i], sr[i] + 1)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The axis titles at their anchors (always shown), then the tick values: a tick value that would cover a label
+     * already placed, a point or the target's outline is left out for this angle.
+     */
+    private void drawLabels(GraphicsContext g, OrbitProjection o, double s, double ox, double oy) {
+        Point2D piv = pivotScreenPosition();
+        double cageR = targetRadius > 0 ? silhouetteRadius() : 0;
+        for (String kind : new String[] {"title", "tick"}) {
+            boolean title = kind.equals("title");
+            Font font = title ? TITLE_FONT : TICK_FONT;
+            g.setFont(font);
+            g.setFill(title ? Palette.TEXT : Palette.AXIS);
+            g.setTextAlign(TextAlignment.CENTER);
+            g.setTextBaseline(VPos.CENTER);
+            for (Anchor a : anchors) {
+                if (!a.kind().equals(kind)) {
+                    continue;
+                }
+                double[] t = o.turn(a.x(), a.y(), a.z());
+                double f = o.perspective(t[2]);
+                double x = ox + s * t[0] * f;
+                double y = oy - s * t[1] * f;
+                double tw = textWidth(a.text(), font) + 4;
+                double th = title ? 17 : 15;
+                PlacedLabel l = new PlacedLabel(a.text(), kind, x - tw / 2, y - th / 2, tw, th);
+                if (!title) {
+                    boolean clash = shown.stream().anyMatch(l::overlaps) || coversPoint(l)
+                            || (cageR > 0 && l.touchesDisc(piv.getX(), piv.getY(), cageR + 2));
+                    if (clash) {
+                        continue;
+                    }
+                }
+                shown.add(l);
+                g.fillText(a.text(), x, y);
+            }
+        }
+    }
+
+    private double textWidth(String text, Font font) {
+        return textWidths.computeIfAbsent(font.getSize() + "|" + font.getStyle() + "|" + text, key -> {
+            Text t = new Text(text);
+            t.setFont(font);
+            return t.getLayoutBounds().getWidth();
+        });
     }
 }

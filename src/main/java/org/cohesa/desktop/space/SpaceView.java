@@ -4,7 +4,6 @@ import java.nio.file.Path;
 import javafx.geometry.Insets;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
-import javafx.scene.SceneAntialiasing;
 import javafx.scene.control.Button;
 import javafx.scene.control.CheckBox;
 import javafx.scene.control.ComboBox;
@@ -34,10 +33,10 @@ public final class SpaceView {
     private final TabPane views = new TabPane();
     private final FlowPane legend = new FlowPane(16, 6);
 
-    public SpaceView(SpaceModel model, SceneAntialiasing antialiasing) {
+    public SpaceView(SpaceModel model) {
         this.model = model;
         root.setId("space-screen");
-        view3d = new Space3DView(model, antialiasing);
+        view3d = new Space3DView(model);
         ProjectionPlot ph = new ProjectionPlot(model, ProjectionPlot.Plane.P_H);
         ProjectionPlot dp = new ProjectionPlot(model, ProjectionPlot.Plane.D_P);
         ProjectionPlot dh = new ProjectionPlot(model, ProjectionPlot.Plane.D_H);
@@ -108,7 +107,10 @@ public final class SpaceView {
             l.getStyleClass().add("legend-entry");
             legend.getChildren().add(l);
         }
-        Label target = new Label("target sphere", new Circle(6, Palette.TARGET.deriveColor(0, 1, 1, 0.5)));
+        Circle ring = new Circle(6, javafx.scene.paint.Color.TRANSPARENT);
+        ring.setStroke(Palette.TARGET);
+        ring.setStrokeWidth(1.6);
+        Label target = new Label("target (sphere outline)", ring);
         target.getStyleClass().add("legend-entry");
         legend.getChildren().add(target);
     }
