@@ -196,6 +196,18 @@ class LibraryCurationTest {
     }
 
     @Test
+    void nEthylPyrrolidoneTakesTheInfoboxBoilingPointAndDensity() {
+        // German Wikipedia, "1-Ethyl-2-pyrrolidon" (stored copy; its reference 1, GESTIS, not read): Siedepunkt 212.5 °C,
+        // Dichte 0.9974 g/cm3. No reference table holds NEP; without a boiling point it had no vapour-pressure estimate.
+        Map<String, String> nep = solvent("2687-91-4");
+        assertEquals("212.5", nep.get("boiling_point_c"));
+        assertEquals("0.9974", nep.get("density"));
+        assertEquals("dewiki-infobox", nep.get("src_boiling_point"));
+        assertEquals("dewiki-infobox", nep.get("src_density"));
+        assertTrue(sources.contains("1-Ethyl-2-pyrrolidon"), "SOURCES.md names the article");
+    }
+
+    @Test
     void familiesAreMultiValuedWhereSeveralApply() {
         // Common practice, no source: a chloroaromatic is both aromatic and chlorinated (the family list names every
         // family that applies, primary family first), an aromatic nitrile both nitrile and aromatic, etc.
