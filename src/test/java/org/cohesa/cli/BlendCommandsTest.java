@@ -118,6 +118,28 @@ class BlendCommandsTest {
     }
 
     @Test
+    void anAcidicDrugGetsNoAmineAndSaysWhy() {
+        // Salicylic acid (pKa 2.97, CRC Handbook, dissociation constants; from memory) forms a salt with an amine solvent
+        // (common practice, no source): a salt, not a solution. Its structure (solvent-db/material-structures.csv) marks it acidic.
+        CliTestSupport.Result r = run("blend", "--material", "salicylic acid", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        JsonNode blends = r.json().get("blends");
+        assertTrue(blends.size() > 0, r.out());
+        for (JsonNode b : blends) {
+            assertTrue(b.get("why").toString().contains("solute acidic: no amine"), b.toString());
+            for (JsonNode c : b.get("components")) {
+                String n = c.get("name").asText();
+                assertFalse(n.contains("amine") || n.equals("piperidine") || n.equals("pyrrolidine") || n.equals("morpholine")
+                        || n.equals("pyridine") || n.contains("picoline") || n.contains("amino"), "an amine for an acid: " + b);
+            }
+        }
+        CliTestSupport.Result table = run("blend", "--material", "salicylic acid", "--top", "3");
+        assertTrue(table.out().contains("the material is acidic by its structure") && table.out().contains("--allow-salt-formers"), table.out());
+        CliTestSupport.Result allowed = run("blend", "--material", "salicylic acid", "--allow-salt-formers", "--json");
+        assertFalse(allowed.json().get("blends").get(0).get("why").toString().contains("solute acidic"), allowed.out());
+    }
+
+    @Test
     void defaultBlendSearchLeavesOutCmrAndClassOneAndSaysWhatAndWhy() {
         CliTestSupport.Result r = run("blend", "--material", "PMMA", "--json");
         assertEquals(0, r.exitCode(), r.err());

@@ -59,7 +59,7 @@ public final class BlendCommand extends CohesaSubcommand {
         // the solvents' parameters at the process temperature (the material's sphere stays as measured)
         LibraryAtTemperature atTemperature = LibraryAtTemperature.of(ctx().library(), options.kelvin());
         SolventLibrary lib = atTemperature.library();
-        BlendConstraints c = options.constraints(lib, null);
+        BlendConstraints c = options.forSolute(options.constraints(lib, null), material);
         options.checkPricesExist(lib);
         if (c.fixed().size() >= k) {
             throw new org.cohesa.core.InvalidInputException("--max-components", String.valueOf(k),

@@ -76,6 +76,9 @@ public final class BlendOptions {
     @Option(names = "--ich-unlisted", paramLabel = "keep|leave-out", description = "With --max-ich-class: keep or leave out solvents ICH Q3C does not list (they need a justification under Q3C; default ${DEFAULT-VALUE}).")
     String ichUnlisted = "leave-out";
 
+    @Option(names = "--allow-salt-formers", description = "Keep amine solvents for an acidic material and acid solvents for a basic one (by default they are left out: they form salts with it).")
+    boolean allowSaltFormers;
+
     @Option(names = "--exclude-reactive", paramLabel = "FLAGS", description = "Leave out reactive solvents: acid (carboxylic acids), amine (amines, pyridines), nitro (nitroalkanes), peroxide (peroxide formers), dicarbonyl (acetoacetates, malonates: active methylene), enone (mesityl oxide, isophorone: Michael acceptors), or all.")
     List<String> excludeReactive = new ArrayList<>();
 
@@ -199,6 +202,14 @@ public final class BlendOptions {
         if (rankBy() == RankBy.COST) {
             throw new InvalidInputException("--rank-by", rankBy, why);
         }
+    }
+
+    /** The constraints with the solvents that form a salt with the material left out (unless --allow-salt-formers). */
+    BlendConstraints forSolute(BlendConstraints c, org.cohesa.core.target.Material material) {
+        if (material == null || allowSaltFormers) {
+            return c;
+        }
+        return c.with(c.more().withSolute(org.cohesa.store.MaterialStructures.characterOf(material)));
     }
 
     /** The preference word shown in the output. */

@@ -121,6 +121,10 @@ public final class BlendView {
                     ? "immiscible — two liquid phases at 1:1 by volume" : "miscible — one liquid phase at every water content from 2 to 98 % by volume")
                     + ", judged from published mutual solubilities (solvent-db/water-miscibility.csv) where they exist and the UNIFAC LLE model elsewhere; each suggestion's why says which");
         }
+        for (org.cohesa.core.blend.SoluteCharacter sc : c.more().solute()) {
+            out.add("the material is " + sc.word() + " by its structure: " + sc.clash().label() + " solvents left out, " + sc.why()
+                    + " (--allow-salt-formers keeps them)");
+        }
         if (!c.more().excludeReactive().isEmpty()) {
             out.add("reactive solvents left out: " + c.more().excludeReactive().stream().map(ReactiveFlag::label).collect(Collectors.joining(", ")));
         }

@@ -121,7 +121,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
         }
         int k = options.maxComponents();
         Reasons why = reasons(original);
-        BlendConstraints c = applyReasons(options.constraints(lib, original), why);
+        BlendConstraints c = options.forSolute(applyReasons(options.constraints(lib, original), why), mat);
         options.checkPricesExist(lib);
         if (c.fixed().size() >= k) {
             throw new InvalidInputException("--max-components", String.valueOf(k), "must exceed the number of fixed components (" + c.fixed().size() + ")");
@@ -283,7 +283,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
             return new BlendConstraints(c.include(), c.exclude(), c.families(), c.excludeFamilies(), c.fixed(), c.minFraction(), c.maxFraction(),
                     c.fractionRanges(), bpMin, bpMax, minFlash, ich, c.noCmr(), c.maxCost(),
                     new BlendConstraints.More(m.noIchClass1(), m.ichUnlistedAllowed(), limits, m.excludeReactive(), m.minBlendFlashPointC(),
-                            m.blendBoilingMinC(), m.blendBoilingMaxC(), m.withWater()));
+                            m.blendBoilingMinC(), m.blendBoilingMaxC(), m.withWater(), m.solute()));
         } catch (IllegalArgumentException e) {
             throw new InvalidInputException("--because", String.join(",", w.words()), e.getMessage());
         }

@@ -55,11 +55,27 @@ public record BlendConstraints(
      * @param blendBoilingMinC     lowest computed initial boiling point (bubble point) of the blend, °C
      * @param blendBoilingMaxC     highest computed initial boiling point (bubble point) of the blend, °C
      * @param withWater            how the blend must behave with water (null: no demand)
+     * @param solute               the material's acid–base character ({@link SoluteCharacter}): solvents that form a
+     *                             salt with it are left out (empty: not known, or the user allowed them)
      */
     public record More(boolean noIchClass1, boolean ichUnlistedAllowed, List<HazardLimit> healthLimits, Set<ReactiveFlag> excludeReactive,
-            Double minBlendFlashPointC, Double blendBoilingMinC, Double blendBoilingMaxC, WaterCheck.Need withWater) {
+            Double minBlendFlashPointC, Double blendBoilingMinC, Double blendBoilingMaxC, WaterCheck.Need withWater,
+            Set<SoluteCharacter> solute) {
 
         public static final More NONE = new More(false, false, List.of(), Set.of(), null, null, null, null);
+
+        /** Demands without a solute character. */
+        public More(boolean noIchClass1, boolean ichUnlistedAllowed, List<HazardLimit> healthLimits, Set<ReactiveFlag> excludeReactive,
+                Double minBlendFlashPointC, Double blendBoilingMinC, Double blendBoilingMaxC, WaterCheck.Need withWater) {
+            this(noIchClass1, ichUnlistedAllowed, healthLimits, excludeReactive, minBlendFlashPointC, blendBoilingMinC, blendBoilingMaxC,
+                    withWater, Set.of());
+        }
+
+        /** A copy that leaves out the solvents reacting with a solute of these characters. */
+        public More withSolute(Set<SoluteCharacter> characters) {
+            return new More(noIchClass1, ichUnlistedAllowed, healthLimits, excludeReactive, minBlendFlashPointC, blendBoilingMinC,
+                    blendBoilingMaxC, withWater, characters);
+        }
 
         /** Demands without a water demand. */
         public More(boolean noIchClass1, boolean ichUnlistedAllowed, List<HazardLimit> healthLimits, Set<ReactiveFlag> excludeReactive,
@@ -70,6 +86,7 @@ public record BlendConstraints(
         public More {
             healthLimits = List.copyOf(Objects.requireNonNullElse(healthLimits, List.of()));
             excludeReactive = Set.copyOf(Objects.requireNonNullElse(excludeReactive, Set.of()));
+            solute = Set.copyOf(Objects.requireNonNullElse(solute, Set.of()));
             if (blendBoilingMinC != null && blendBoilingMaxC != null && blendBoilingMinC > blendBoilingMaxC) {
                 throw new IllegalArgumentException("blend boiling window " + blendBoilingMinC + ".." + blendBoilingMaxC + " °C is empty");
             }

@@ -241,6 +241,9 @@ public final class BlendDesigner {
             if (water != null) {
                 why.add(why.size() - 1, "with water: " + water.kind().label() + " (" + water.basis().label() + ")");
             }
+            for (SoluteCharacter sc : c.more().solute()) {
+                why.add(why.size() - 1, "solute " + sc.word() + ": no " + sc.clash().label() + " among the components (" + sc.why() + ")");
+            }
             List<String> flags = new ArrayList<>();
             for (BlendComponent bc : b.components()) {
                 for (ReactiveFlag rf : ReactiveFlag.of(bc.solvent())) {

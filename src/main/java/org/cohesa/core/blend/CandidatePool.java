@@ -73,6 +73,11 @@ public record CandidatePool(List<Solvent> free, List<BlendComponent> fixed, int 
         return new CandidatePool(free, c.fixed(), library.size(), out);
     }
 
+    /** The left-out reason for solvents that form a salt with a solute of this character. */
+    public static String saltWith(SoluteCharacter sc) {
+        return "forms a salt with the " + sc.word() + " solute (" + sc.clash().label() + ")";
+    }
+
     /** Number of solvents left out for lack of Hansen parameters. */
     public int withoutHansen() {
         return leftOut.getOrDefault(NO_HANSEN, List.of()).size();
@@ -107,6 +112,11 @@ public record CandidatePool(List<Solvent> free, List<BlendComponent> fixed, int 
         for (HazardLimit h : m.healthLimits()) {
             if (h.rejects(s)) {
                 return "as bad as or worse than the original on " + h.kind() + " (" + h.because() + ")";
+            }
+        }
+        for (SoluteCharacter sc : m.solute()) {
+            if (sc.clash().applies(s)) {
+                return saltWith(sc);
             }
         }
         for (ReactiveFlag f : m.excludeReactive()) {
