@@ -1,8 +1,8 @@
 package org.cohesa.desktop.cases;
 
 import java.util.List;
-import org.cohesa.core.activity.Miscibility;
-import org.cohesa.core.activity.MiscibilityResult;
+import org.cohesa.core.blend.MeasuredFirstPhaseCheck;
+import org.cohesa.core.blend.PhaseCheck;
 import org.cohesa.core.activity.WaterBehaviour;
 import org.cohesa.core.activity.WaterMiscibility;
 import org.cohesa.core.drying.DryingPath;
@@ -56,12 +56,10 @@ public record CandidateChecks(Blend blend, SafetyProfile safety, DryingPath dryi
         if (blend.size() == 1) {
             phase = "a single liquid";
         } else {
-            try {
-                MiscibilityResult m = Miscibility.check(blend.solvents(), blend.fractions(), kelvin);
-                phase = m.splits() ? "SPLITS into two liquid phases (" + m.model() + ")" : "one liquid phase (" + m.model() + ")";
-            } catch (RuntimeException e) {
-                phase = "phase test not possible: " + e.getMessage();
-            }
+            // the same test the search applies: published mutual solubilities with water first, the activity model elsewhere
+            PhaseCheck.Verdict v = MeasuredFirstPhaseCheck.with(WaterMiscibilityCsv.bundled()).check(blend.solvents(), blend.fractions(), kelvin);
+            phase = !v.checked() ? "phase test not possible: " + v.detail()
+                    : v.splits() ? "SPLITS into two liquid phases (" + v.model() + ")" : "one liquid phase (" + v.model() + ")";
         }
         WaterBehaviour water = null;
         String waterText;
