@@ -81,6 +81,7 @@ public final class StructureTargetForm {
         box.setId("target-structure");
         root = new ScrollPane(box);
         root.setFitToWidth(true);
+        root.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
     }
 
     public Node node() {
