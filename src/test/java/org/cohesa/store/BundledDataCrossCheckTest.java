@@ -186,11 +186,14 @@ class BundledDataCrossCheckTest {
 
     @Test
     void everyValueHasASourceAndEverySourceAValue() {
-        // Product rule (issue 2): every value carries a source key; an empty value has no source.
+        // Product rule (issue 2): every value carries a source key; an empty value has no source (except a
+        // hazard list the note declares "not classified as hazardous": that empty list is itself the sourced value).
         List<String> bad = new ArrayList<>();
         for (Map<String, String> r : rows) {
             GROUP_PRIMARY.forEach((group, column) -> {
-                boolean hasValue = !r.get(column).isEmpty();
+                // "Not classified as hazardous" is a classification with a source, stored as an empty list.
+                boolean hasValue = !r.get(column).isEmpty()
+                        || ("hazard_statements".equals(column) && r.get("note").contains("not classified as hazardous"));
                 boolean hasSource = !r.get("src_" + group).isEmpty();
                 if (hasValue != hasSource) {
                     bad.add(r.get("name") + ": " + column + "='" + r.get(column) + "' src_" + group + "='" + r.get("src_" + group) + "'");
