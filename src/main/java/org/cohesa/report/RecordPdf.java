@@ -78,6 +78,7 @@ public final class RecordPdf {
                 title(l, r);
                 summary(l, r, chain);
                 liquids(l, r.evidence());
+                ranking(l, r.evidence());
                 DryingChart.draw(l, r.evidence());
                 history(l, r);
                 cautions(l, r.evidence());
@@ -194,6 +195,31 @@ public final class RecordPdf {
             rows.add(new String[] {"Solvent-guide rank (CHEM21)", safetyText(sa, "guide_rank"), safetyText(sb, "guide_rank")});
         }
         l.table(new float[] {0.26f, 0.37f, 0.37f}, rows, true, true, 8.2f);
+    }
+
+    /** The evidence's ranking section: why the replacement ranks as it does (the terms replace prints as its why). */
+    private static void ranking(PdfLayout l, Evidence ev) throws IOException {
+        JsonNode rk = ev.section(Evidence.Sections.RANKING).orElse(null);
+        if (rk == null) {
+            return; // a record filed before the section existed
+        }
+        l.ensure(90);
+        l.heading("Why the replacement ranks as it does");
+        if (!rk.has("why")) {
+            l.paragraph(rk.path("note").asText("no ranking terms filed"), 9, PdfLayout.INK);
+            return;
+        }
+        List<String[]> rows = new ArrayList<>();
+        rows.add(new String[] {"Sphere", rk.path("sphere").asText()});
+        rows.add(new String[] {"RED (limit)", n(rk.get("red"), 3) + "  (" + n(rk.get("red_limit"), 2) + "; "
+                + (rk.path("qualifies").asBoolean() ? "qualifies" : "does not qualify") + ")"});
+        rows.add(new String[] {"Weights", rk.path("weights").asText()});
+        rows.add(new String[] {"Score without cost", n(rk.get("score_without_cost"), 2) + "  (lower is better)"});
+        List<String> terms = new ArrayList<>();
+        rk.path("why").forEach(t -> terms.add(t.asText()));
+        rows.add(new String[] {"Terms", String.join("; ", terms)});
+        l.table(new float[] {0.26f, 0.74f}, rows, false, true, 8.2f);
+        l.paragraph(rk.path("note").asText(), 7.5f, PdfLayout.MUTED);
     }
 
     /** "toluene", or "ethyl acetate 50 % + n-butyl acetate 50 %" for a blend (volume percent). */

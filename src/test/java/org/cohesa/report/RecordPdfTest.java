@@ -60,6 +60,33 @@ class RecordPdfTest {
     }
 
     @Test
+    void theRankingSectionOfTheEvidenceIsPrinted() throws Exception {
+        Path db = dir.resolve("ranked.db");
+        SubstitutionRecord r;
+        List<RecordEvent> events;
+        try (Database d = Database.open(db)) {
+            RecordRepository repo = new RecordRepository(new SqliteRegister(d, "bauthor"), java.time.Clock.systemUTC(), null);
+            repo.create(RecordFixtures.assembledDraft(new SolventRepository(d).library(), "degreasing (invented)", "dichloromethane", "ethyl acetate"),
+                    "B. Author");
+            r = repo.get(1);
+            events = repo.events(1);
+            Path pdf = dir.resolve("ranked.pdf");
+            RecordPdf.write(r, events.get(events.size() - 1).hash(), repo.verify(), "test", pdf, false);
+            String text;
+            try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+                text = new PDFTextStripper().getText(doc);
+            }
+            var ranking = r.evidence().section(org.cohesa.core.records.Evidence.Sections.RANKING).orElseThrow();
+            // what the record's JSON files is what the PDF prints: heading, RED, weights and each ranking term (ethyl acetate
+            // is one component, CHEM21 "recommended" by default scoring — Prat et al., Green Chem. 18 (2016) 288, scores from memory)
+            assertTrue(text.contains("Why the replacement ranks as it does") && text.contains("Score without cost"), text);
+            assertTrue(text.contains(ranking.get("weights").asText().substring(0, 20)), text);
+            assertTrue(ranking.get("why").size() >= 2, ranking.toString());
+            assertTrue(text.replaceAll("\\s+", " ").contains("1 component"), text);
+        }
+    }
+
+    @Test
     void theBuiltInFontWritesDeltaAsD() throws Exception {
         String text = render(false);
         assertTrue(text.contains("dD, dP, dH"), text);

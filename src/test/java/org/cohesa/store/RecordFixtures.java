@@ -13,6 +13,14 @@ public final class RecordFixtures {
     private RecordFixtures() {
     }
 
+    /** A draft whose evidence is assembled as `record new` assembles it (safety profile, ranking terms, drying path). */
+    public static RecordDraft assembledDraft(SolventLibrary library, String process, String replaced, String replacement) {
+        Blend from = library.resolveBlend("--replaced", replaced + ":1");
+        Blend to = library.resolveBlend("--replacement", replacement + ":1");
+        var evidence = org.cohesa.core.records.EvidenceAssembler.assemble(from, to, null, SourceCatalog.bundled().all(), "test");
+        return new RecordDraft(process, "test site (invented)", from.describe(), to.describe(), null, "test: regulatory", evidence);
+    }
+
     public static RecordDraft draft(SolventLibrary library, String process, String replaced, String replacement) {
         Blend from = library.resolveBlend("--replaced", replaced.contains(":") ? replaced : replaced + ":1");
         Blend to = library.resolveBlend("--replacement", replacement.contains(":") ? replacement : replacement + ":1");
