@@ -122,6 +122,7 @@ public final class SolventEditor {
             structure = new StructurePane(jobs, "SMILES");
             structure.smilesProperty().set(original.getOrDefault("smiles", ""));
             structure.setMeasured(this::measured);
+            structure.setOnShown(this::fitWindow);
             structure.setOnEstimated(r -> {
                 if (showingStored) {
                     showingStored = false;
@@ -247,13 +248,18 @@ public final class SolventEditor {
         };
     }
 
+    /** The dialog grows with what the structure part shows, so Save never moves out of the window. */
+    private void fitWindow() {
+        if (dialog.getDialogPane().getScene() != null && dialog.getDialogPane().getScene().getWindow() != null) {
+            dialog.getDialogPane().getScene().getWindow().sizeToScene();
+        }
+    }
+
     private void showFilled(String text) {
         filledHint.setText(text == null ? "" : text);
         filledHint.setVisible(text != null);
         filledHint.setManaged(text != null);
-        if (dialog.getDialogPane().getScene() != null && dialog.getDialogPane().getScene().getWindow() != null) {
-            dialog.getDialogPane().getScene().getWindow().sizeToScene();
-        }
+        fitWindow();
     }
 
     /** Adds the structure's columns to the row, or returns the line that says why they cannot be used. */

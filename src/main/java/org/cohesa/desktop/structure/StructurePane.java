@@ -61,6 +61,7 @@ public final class StructurePane {
     private final ReadOnlyObjectWrapper<Result> result = new ReadOnlyObjectWrapper<>();
     private Supplier<MeasuredProperties> measured = () -> MeasuredProperties.NONE;
     private Consumer<Result> onEstimated = r -> { };
+    private Runnable onShown = () -> { };
 
     /**
      * @param jobs  the session's job runner (the work runs off the FX thread, the status bar shows it)
@@ -162,6 +163,11 @@ public final class StructurePane {
         this.onEstimated = onEstimated;
     }
 
+    /** Called on the FX thread whenever the pane's content changed size (an estimate or a problem shown). */
+    public void setOnShown(Runnable onShown) {
+        this.onShown = onShown;
+    }
+
     /** Shows a problem of the form that holds this pane (one line), or hides it with null. */
     public void showProblem(String text) {
         problem.setText(text == null ? "" : text);
@@ -170,6 +176,7 @@ public final class StructurePane {
         if (text != null && text.startsWith(field + " ")) {
             smiles.getStyleClass().add("field-error");
         }
+        onShown.run();
     }
 
     /** Parses, estimates and draws the SMILES in the field off the FX thread. */
@@ -247,6 +254,7 @@ public final class StructurePane {
         }
         result.set(r);
         onEstimated.accept(r);
+        onShown.run();
     }
 
     private void row(int i, String label, EstimatedValue v) {
