@@ -27,7 +27,7 @@ public final class CaseStrip {
     public record Reference(String label, String id, Runnable open) {
     }
 
-    private static final double STEP_HEIGHT = 58;
+    private static final double STEP_HEIGHT = 62; // title and two lines of text, with the current step's thicker border
 
     private final CaseModel model;
     private final HBox root = new HBox(6);
