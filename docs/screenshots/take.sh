@@ -31,6 +31,8 @@ sized case-record --case=toluene --screen=record "$target" --search=3
 sized blends --screen=blends "$target" --search=3
 sized drying --screen=drying "$target" "$proposed"
 sized space-3d --screen=space --view=3d "$target" --select=toluene "$proposed"
+# the 3D view turned well away from its starting angle (δP towards the viewer, seen from higher up)
+sized space-3d-turned --screen=space --view=3d "$target" --select=toluene "$proposed" --turn=115,18
 shot library --screen=library --select=toluene
 shot target --screen=target "$target"
 shot blends --screen=blends "$target" --search=3

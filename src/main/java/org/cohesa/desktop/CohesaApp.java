@@ -95,6 +95,10 @@ public final class CohesaApp extends Application {
         if (opts.view() >= 0) {
             workbench.spaceView().showView(opts.view());
         }
+        if (opts.turn() != null) {
+            workbench.spaceView().view3d().rotateBy(opts.turn()[0], opts.turn()[1]);
+            workbench.spaceView().view3d().fitToFrame();
+        }
         if (opts.search() > 0) {
             workbench.blendModel().maxComponents.set(opts.search());
             try {

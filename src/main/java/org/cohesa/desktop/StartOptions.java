@@ -14,12 +14,13 @@ import org.cohesa.core.hsp.SolubilitySphere;
  * {@code --measure-frames=N} (rotate the 3D view with N points, print frame times, exit),
  * {@code --blend=NAME:FRACTION,...} (compute this blend's drying path and safety profile at start),
  * {@code --search=K} (run the blend search with up to K components against the target at start),
- * {@code --size=WxH} (window size of a screenshot or frame measurement, default 1400x860).
+ * {@code --size=WxH} (window size of a screenshot or frame measurement, default 1400x860),
+ * {@code --turn=YAW,PITCH} (turn the 3D view by these degrees from its starting angle, for screenshots).
  */
 public record StartOptions(Path screenshot, Screen screen, int view, SolubilitySphere target, String select, int measurePoints,
-                           String blend, int search, int width, int height, String caseReplacing) {
+                           String blend, int search, int width, int height, String caseReplacing, double[] turn) {
 
-    static final List<String> NAMES = List.of("screenshot", "screen", "view", "target", "select", "measure-frames", "blend", "search", "size", "case");
+    static final List<String> NAMES = List.of("screenshot", "screen", "view", "target", "select", "measure-frames", "blend", "search", "size", "case", "turn");
     private static final List<String> VIEWS = List.of("3d", "p-h", "d-p", "d-h", "teas");
 
     /** True for an argument the desktop app understands (the launcher sends everything else to the command line). */
@@ -86,7 +87,27 @@ public record StartOptions(Path screenshot, Screen screen, int view, SolubilityS
         }
         int[] size = size(named.get("size"));
         return new StartOptions(shot == null ? null : Path.of(shot), screen, view, target, named.get("select"), points, named.get("blend"),
-                search(named.get("search")), size[0], size[1], caseReplacing(named.get("case")));
+                search(named.get("search")), size[0], size[1], caseReplacing(named.get("case")), turn(named.get("turn")));
+    }
+
+    /** {@code --turn=YAW,PITCH}: degrees to turn the 3D view by (about the vertical, then the horizontal); none when absent. */
+    private static double[] turn(String text) {
+        if (text == null) {
+            return null;
+        }
+        String[] parts = text.strip().split(",");
+        try {
+            if (parts.length == 2) {
+                double yaw = Double.parseDouble(parts[0].strip());
+                double pitch = Double.parseDouble(parts[1].strip());
+                if (Math.abs(yaw) <= 360 && Math.abs(pitch) <= 180) {
+                    return new double[] {yaw, pitch};
+                }
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new InvalidInputException("--turn", text, "give YAW,PITCH in degrees, e.g. 60,15 (|yaw| ≤ 360, |pitch| ≤ 180)");
     }
 
     /** {@code --case=LIQUID}: an invented demo case replacing LIQUID (for screenshots); with --search its first two candidates are chosen and checked. */

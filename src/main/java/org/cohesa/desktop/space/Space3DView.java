@@ -113,8 +113,11 @@ public final class Space3DView {
 
     private enum SegmentKind { AXIS, GRID, CAGE }
 
-    /** A label's text and its 3D anchor (relative to the pivot). */
-    private record Anchor(String text, String kind, double x, double y, double z) {
+    /**
+     * A label's text and its 3D anchor (relative to the pivot); {@code side} &lt; 0 puts the label to the left of the
+     * projected anchor (its right edge 8 px from it), 0 centres it on the anchor.
+     */
+    private record Anchor(String text, String kind, double x, double y, double z, int side) {
     }
 
     /**
@@ -266,6 +269,15 @@ public final class Space3DView {
     public void resetView() {
         yaw = DEFAULT_YAW;
         pitch = DEFAULT_PITCH;
+        zoom = 1;
+        shiftX = 0;
+        shiftY = 0;
+        fit = fitFrame();
+        requestDraw();
+    }
+
+    /** Fits the picture to the frame at the angle it is turned to now (zoom and pan back to none). */
+    public void fitToFrame() {
         zoom = 1;
         shiftX = 0;
         shiftY = 0;
@@ -484,7 +496,8 @@ public final class Space3DView {
         for (double h = r.hMin() + hStep; h <= r.hMax() + 1e-9; h += hStep) {
             line(segs, kinds, SegmentKind.AXIS, x0, h, r.pMin(), x0 + 1.2, h, r.pMin());
             line(segs, kinds, SegmentKind.AXIS, x0, h, r.pMin(), x0, h, r.pMin() + 1.2);
-            anchor(Numbers.plain(h), "tick", x0 - 2, h, r.pMin() - 2);
+            // beside the vertical axis on the screen, whatever the angle, so the axis never runs through the number
+            anchors.add(new Anchor(Numbers.plain(h), "tick", x0 - pivot[0], h - pivot[1], -r.pMin() - pivot[2], -1));
         }
         anchor((k == 2 ? "2δD" : "δD") + " (MPa½)", "title", x1 + 6, r.hMin(), r.pMin() - 3);
         anchor("δP (MPa½)", "title", x0 - 3, r.hMin(), r.pMax() + 5);
@@ -540,7 +553,7 @@ public final class Space3DView {
     }
 
     private void anchor(String text, String kind, double x, double h, double p) {
-        anchors.add(new Anchor(text, kind, x - pivot[0], h - pivot[1], -p - pivot[2]));
+        anchors.add(new Anchor(text, kind, x - pivot[0], h - pivot[1], -p - pivot[2], 0));
     }
 
     /**
@@ -684,9 +697,11 @@ public final class Space3DView {
         GraphicsContext g = canvas.getGraphicsContext2D();
         g.clearRect(0, 0, canvas.getWidth(), canvas.getHeight());
         shown.clear();
+        // axis titles first (always shown), then the names of the marks around them, then the tick values in what is left
+        drawLabels(g, o, s, ox, oy, "title");
         drawMarks(px, g);
         pixelBuffer.updateBuffer(b -> null);
-        drawLabels(g, o, s, ox, oy);
+        drawLabels(g, o, s, ox, oy, "tick");
     }
 
     private double[] su = new double[0];
@@ -757,12 +772,16 @@ public final class Space3DView {
         if (sel != null && sel.hasHansen()) {
             Point2D p = toScreen(relative(sel.hansen()));
             px.ring(p.getX(), p.getY(), 9, 2, white);
-            markLabel(g, sel.name(), p.getX(), p.getY(), Palette.SELECTION, false);
+            // a component of the selected blend is named already, with its fraction
+            boolean named = b != null && b.components().stream().anyMatch(c -> c.solvent().name().equalsIgnoreCase(sel.name()));
+            if (!named) {
+                markLabel(g, sel.name(), p.getX(), p.getY(), Palette.SELECTION, false);
+            }
         }
     }
 
     /**
-     * Names a mark beside it: the first of eight places around the mark that covers no label already placed and no
+     * Names a mark beside it: the first of sixteen places around the mark that covers no label already placed and no
      * point, else the first that covers no label, else to the right. Drawn with a dark rim so it reads over the points.
      */
     private void markLabel(GraphicsContext g, String text, double x, double y, Color colour, boolean above) {
@@ -772,7 +791,10 @@ public final class Space3DView {
         double[][] places = above
                 ? new double[][] {{-tw / 2, -th - 4}, {gap, -th}, {-tw - gap, -th}, {-tw / 2, 4}}
                 : new double[][] {{gap, -th / 2}, {gap, -th - 2}, {gap, 2}, {-tw - gap, -th / 2}, {-tw - gap, -th - 2}, {-tw - gap, 2},
-                    {-tw / 2, -th - gap}, {-tw / 2, gap}};
+                    {-tw / 2, -th - gap}, {-tw / 2, gap},
+                    // farther out, when the near places are taken
+                    {gap, -1.6 * th - 4}, {gap, 0.6 * th + 4}, {-tw - gap, -1.6 * th - 4}, {-tw - gap, 0.6 * th + 4},
+                    {-tw / 2, -2 * th - gap}, {-tw / 2, th + gap}, {2.5 * gap, -th / 2}, {-tw - 2.5 * gap, -th / 2}};
         PlacedLabel chosen = null;
         PlacedLabel noLabelClash = null;
         for (double[] pl : places) {
@@ -819,10 +841,10 @@ public final class Space3DView {
      * The axis titles at their anchors (always shown), then the tick values: a tick value that would cover a label
      * already placed, a point or the target's outline is left out for this angle.
      */
-    private void drawLabels(GraphicsContext g, OrbitProjection o, double s, double ox, double oy) {
+    private void drawLabels(GraphicsContext g, OrbitProjection o, double s, double ox, double oy, String... kinds) {
         Point2D piv = pivotScreenPosition();
         double cageR = targetRadius > 0 ? silhouetteRadius() : 0;
-        for (String kind : new String[] {"title", "tick"}) {
+        for (String kind : kinds) {
             boolean title = kind.equals("title");
             Font font = title ? TITLE_FONT : TICK_FONT;
             g.setFont(font);
@@ -838,6 +860,9 @@ public final class Space3DView {
                 double x = ox + s * t[0] * f;
                 double y = oy - s * t[1] * f;
                 double tw = textWidth(a.text(), font) + 4;
+                if (a.side() < 0) {
+                    x -= tw / 2 + 8;
+                }
                 double th = title ? 17 : 15;
                 PlacedLabel l = new PlacedLabel(a.text(), kind, x - tw / 2, y - th / 2, tw, th);
                 if (!title) {
