@@ -71,6 +71,15 @@ class CandidateLimitsTest {
         });
         assertTrue(any(base, s -> s.inFamily("aromatic") && s.families().size() > 1), "multi-family aromatics take part without a family limit");
 
+        // the process term reaches the desktop ranking as it does `cohesa blend` (general by default: removed by evaporation)
+        assertEquals(org.cohesa.core.blend.ProcessUse.GENERAL, m.process.get());
+        assertTrue(base.stream().allMatch(r -> String.join("; ", r.suggestion().why()).contains("process general")
+                || String.join("; ", r.suggestion().why()).contains("(general)")), "every why names the process use");
+        List<BlendModel.Row> anyUse = search(robot, () -> m.process.set(org.cohesa.core.blend.ProcessUse.ANY));
+        assertTrue(anyUse.stream().noneMatch(r -> String.join("; ", r.suggestion().why()).contains("general")), "no process term under 'any'");
+        assertEquals("any", m.limits().get("process"), "the process use is stored with the case's limits");
+        robot.interact(() -> m.process.set(org.cohesa.core.blend.ProcessUse.GENERAL));
+
         // exclude the aromatic family: every solvent with aromatic among its families goes, whatever its first family
         List<BlendModel.Row> noAromatic = search(robot, () -> robot.lookup("#blend-exclude-families").queryAs(TextField.class).setText("aromatic"));
         assertFalse(noAromatic.isEmpty());

@@ -50,6 +50,8 @@ public final class BlendModel {
     public final ObjectProperty<Integer> maxComponents = new SimpleObjectProperty<>(3);
     public final ObjectProperty<Integer> top = new SimpleObjectProperty<>(20);
     public final ObjectProperty<RankBy> rankBy = new SimpleObjectProperty<>(RankBy.DESIRABILITY); // as the command line
+    /** How the liquid leaves the process (the desirability's process term); {@code general} as `cohesa blend`. */
+    public final ObjectProperty<org.cohesa.core.blend.ProcessUse> process = new SimpleObjectProperty<>(org.cohesa.core.blend.ProcessUse.GENERAL);
     public final StringProperty include = new SimpleStringProperty("");
     public final StringProperty exclude = new SimpleStringProperty("");
     public final StringProperty fixed = new SimpleStringProperty("");
@@ -132,6 +134,7 @@ public final class BlendModel {
         m.put("max-components", String.valueOf(maxComponents.get()));
         m.put("top", String.valueOf(top.get()));
         m.put("rank-by", rankBy.get().name());
+        m.put("process", process.get().word());
         m.put("include", include.get());
         m.put("exclude", exclude.get());
         m.put("families", families.get());
@@ -165,6 +168,10 @@ public final class BlendModel {
         integer(m.get("top"), 1, 100, top);
         if (m.get("rank-by") != null) {
             java.util.Arrays.stream(RankBy.values()).filter(r -> r.name().equals(m.get("rank-by"))).findFirst().ifPresent(rankBy::set);
+        }
+        if (m.get("process") != null) {
+            java.util.Arrays.stream(org.cohesa.core.blend.ProcessUse.values()).filter(u -> u.word().equals(m.get("process")))
+                    .filter(u -> u != org.cohesa.core.blend.ProcessUse.AS_ORIGINAL).findFirst().ifPresent(process::set);
         }
         text.accept("include", include);
         text.accept("exclude", exclude);
@@ -224,7 +231,8 @@ public final class BlendModel {
         }
         double limit = positive("RED limit", redLimit.get(), 1.0);
         double kelvin = number("temperature", temperatureC.get(), 25.0) + 273.15;
-        BlendDesigner.Request req = new BlendDesigner.Request(target.sphere(), c, k, top.get(), rankBy.get(), limit, false, kelvin);
+        BlendDesigner.Request req = new BlendDesigner.Request(target.sphere(), c, k, top.get(), rankBy.get(), limit, false, kelvin,
+                org.cohesa.core.blend.Desirability.DEFAULT.withProcess(process.get(), null));
         CancellationToken token = new CancellationToken();
         cancel = token;
         Object[] notes = new Object[2];

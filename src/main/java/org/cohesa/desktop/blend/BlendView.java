@@ -212,6 +212,26 @@ public final class BlendView {
         g.addRow(row++, new Label("Most components"), k);
         g.addRow(row++, new Label("Candidates listed"), top);
         g.addRow(row++, new Label("Rank by"), rank);
+        ComboBox<org.cohesa.core.blend.ProcessUse> process = new ComboBox<>();
+        process.setId("blend-process");
+        process.getItems().setAll(java.util.Arrays.stream(org.cohesa.core.blend.ProcessUse.values())
+                .filter(u -> u != org.cohesa.core.blend.ProcessUse.AS_ORIGINAL).toList());
+        process.setConverter(new javafx.util.StringConverter<>() {
+            @Override
+            public String toString(org.cohesa.core.blend.ProcessUse u) {
+                return u == null ? "" : u.word() + " — " + u.meaning();
+            }
+
+            @Override
+            public org.cohesa.core.blend.ProcessUse fromString(String s) {
+                return org.cohesa.core.blend.ProcessUse.GENERAL;
+            }
+        });
+        process.valueProperty().bindBidirectional(model.process);
+        process.setMaxWidth(Double.MAX_VALUE);
+        process.setTooltip(new javafx.scene.control.Tooltip("How the liquid leaves the process: candidates outside that use's"
+                + " evaporation or boiling window lose points (docs/methods.md, process term)"));
+        g.addRow(row++, new Label("Leaves the process by"), process);
         g.addRow(row++, new Label("Include only (a;b)"), field(model.include, "blend-include"));
         g.addRow(row++, new Label("Exclude (a;b)"), field(model.exclude, "blend-exclude"));
         g.addRow(row++, new Label("Families only (a;b)"), field(model.families, "blend-families"));
