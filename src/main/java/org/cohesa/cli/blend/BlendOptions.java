@@ -377,22 +377,7 @@ public final class BlendOptions {
     }
 
     private static Set<String> families(SolventLibrary lib, String field, List<String> values) {
-        Set<String> known = new LinkedHashSet<>();
-        lib.all().forEach(s -> s.families().forEach(f -> known.add(f.toLowerCase(Locale.ROOT))));
-        Set<String> out = new LinkedHashSet<>();
-        for (String v : values) {
-            for (String f : v.split(",")) {
-                String k = f.strip().toLowerCase(Locale.ROOT);
-                if (k.isEmpty()) {
-                    continue;
-                }
-                if (!known.contains(k)) {
-                    throw new InvalidInputException(field, f.strip(), "no solvent of that family in the library; families: " + String.join(", ", known));
-                }
-                out.add(k);
-            }
-        }
-        return out;
+        return lib.familyKeys(field, values);
     }
 
     /** A fraction written as 0.2 or 20%. */

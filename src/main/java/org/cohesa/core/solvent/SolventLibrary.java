@@ -211,4 +211,31 @@ public final class SolventLibrary {
         }
         return prev[b.length()];
     }
+
+    /**
+     * Family names as a user types them ("ester; alcohol", or several values each "ester,ketone") → the family keys,
+     * lower case, each checked against the families this library has (a solvent counts under every family it has).
+     * @throws InvalidInputException naming {@code field} and the first unknown family
+     */
+    public Set<String> familyKeys(String field, Iterable<String> texts) {
+        Set<String> known = new java.util.TreeSet<>();
+        all().forEach(s -> s.families().forEach(f -> known.add(f.toLowerCase(Locale.ROOT))));
+        Set<String> out = new LinkedHashSet<>();
+        for (String text : texts) {
+            if (text == null) {
+                continue;
+            }
+            for (String part : text.split("[;,]")) {
+                String k = part.strip().toLowerCase(Locale.ROOT);
+                if (k.isEmpty()) {
+                    continue;
+                }
+                if (!known.contains(k)) {
+                    throw new InvalidInputException(field, part.strip(), "no solvent of that family in the library; families: " + String.join(", ", known));
+                }
+                out.add(k);
+            }
+        }
+        return out;
+    }
 }

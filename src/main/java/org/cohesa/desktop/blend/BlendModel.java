@@ -342,23 +342,7 @@ public final class BlendModel {
 
     /** "ester; alcohol" → the family keys, each checked against the families the library has. */
     static Set<String> families(SolventLibrary lib, String field, String text) {
-        if (text == null || text.isBlank()) {
-            return Set.of();
-        }
-        java.util.Set<String> known = new java.util.TreeSet<>();
-        lib.all().forEach(s -> s.families().forEach(f -> known.add(f.toLowerCase(java.util.Locale.ROOT))));
-        java.util.Set<String> out = new java.util.LinkedHashSet<>();
-        for (String part : text.split("[;,]")) {
-            String k = part.strip().toLowerCase(java.util.Locale.ROOT);
-            if (k.isEmpty()) {
-                continue;
-            }
-            if (!known.contains(k)) {
-                throw new InvalidInputException(field, part.strip(), "no solvent of that family in the library; families: " + String.join(", ", known));
-            }
-            out.add(k);
-        }
-        return out;
+        return text == null || text.isBlank() ? Set.of() : lib.familyKeys(field, List.of(text));
     }
 
     /** The judgement for a water demand: published mutual solubilities with water first, the activity model elsewhere. */
