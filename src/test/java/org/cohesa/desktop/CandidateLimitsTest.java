@@ -80,6 +80,15 @@ class CandidateLimitsTest {
         assertEquals("any", m.limits().get("process"), "the process use is stored with the case's limits");
         robot.interact(() -> m.process.set(org.cohesa.core.blend.ProcessUse.GENERAL));
 
+        // replacing a liquid: the use follows it and the window is measured from its rate, as `cohesa replace` does
+        robot.interact(() -> fx.session.replacingProperty().set("toluene"));
+        assertEquals(org.cohesa.core.blend.ProcessUse.AS_ORIGINAL, m.process.get());
+        var lib = new org.cohesa.core.solvent.SolventLibrary(List.copyOf(fx.session.solvents()));
+        var asOriginal = m.processWeights(lib);
+        assertEquals(org.cohesa.core.blend.ProcessUse.rate(lib.resolve("test", "toluene")).rer(), asOriginal.reference().rer(), 1e-12);
+        robot.interact(() -> fx.session.replacingProperty().set(""));
+        assertEquals(org.cohesa.core.blend.ProcessUse.GENERAL, m.process.get());
+
         // exclude the aromatic family: every solvent with aromatic among its families goes, whatever its first family
         List<BlendModel.Row> noAromatic = search(robot, () -> robot.lookup("#blend-exclude-families").queryAs(TextField.class).setText("aromatic"));
         assertFalse(noAromatic.isEmpty());

@@ -91,6 +91,9 @@ public final class BlendModel {
         for (ReactiveFlag f : ReactiveFlag.values()) {
             excludeReactive.put(f, new SimpleBooleanProperty(false));
         }
+        // a case that replaces a liquid ranks by leaving the process as that liquid does, as `cohesa replace` does
+        session.replacingProperty().addListener((o, a, r) -> process.set(r == null || r.isBlank()
+                ? org.cohesa.core.blend.ProcessUse.GENERAL : org.cohesa.core.blend.ProcessUse.AS_ORIGINAL));
         // suggestions belong to the target they were searched for: a new target (picked, fitted, typed) clears them
         session.targetProperty().addListener((o, a, t) -> {
             rows.clear();
@@ -171,7 +174,7 @@ public final class BlendModel {
         }
         if (m.get("process") != null) {
             java.util.Arrays.stream(org.cohesa.core.blend.ProcessUse.values()).filter(u -> u.word().equals(m.get("process")))
-                    .filter(u -> u != org.cohesa.core.blend.ProcessUse.AS_ORIGINAL).findFirst().ifPresent(process::set);
+                    .findFirst().ifPresent(process::set);
         }
         text.accept("include", include);
         text.accept("exclude", exclude);
@@ -217,6 +220,37 @@ public final class BlendModel {
         }
     }
 
+    /**
+     * The default weights with the form's process use. "As the replaced liquid" measures from the rate of the liquid
+     * the case replaces (its largest component when it is a blend), as `cohesa replace` does; without one it falls
+     * back on {@code general}.
+     */
+    public org.cohesa.core.blend.Desirability.Weights processWeights(SolventLibrary lib) {
+        org.cohesa.core.blend.ProcessUse use = process.get();
+        if (use != org.cohesa.core.blend.ProcessUse.AS_ORIGINAL) {
+            return org.cohesa.core.blend.Desirability.DEFAULT.withProcess(use, null);
+        }
+        org.cohesa.core.solvent.Solvent original = replacedMainComponent(lib);
+        org.cohesa.core.blend.ProcessUse.Rate rate = original == null ? null : org.cohesa.core.blend.ProcessUse.rate(original);
+        return rate == null ? org.cohesa.core.blend.Desirability.DEFAULT.withProcess(org.cohesa.core.blend.ProcessUse.GENERAL, null)
+                : org.cohesa.core.blend.Desirability.DEFAULT.withProcess(use, rate);
+    }
+
+    private org.cohesa.core.solvent.Solvent replacedMainComponent(SolventLibrary lib) {
+        String text = session.replacingProperty().get();
+        if (text == null || text.isBlank()) {
+            return null;
+        }
+        try {
+            org.cohesa.core.solvent.Blend b = text.contains(":") ? lib.resolveBlend("replaced liquid", text)
+                    : org.cohesa.core.solvent.Blend.pure(lib.resolve("replaced liquid", text.strip()));
+            return b.components().stream().max(java.util.Comparator.comparingDouble(org.cohesa.core.solvent.BlendComponent::fraction))
+                    .map(org.cohesa.core.solvent.BlendComponent::solvent).orElse(null);
+        } catch (IllegalArgumentException e) {
+            return null; // a liquid no longer in the library: no reference rate
+        }
+    }
+
     /** Runs the search against the current target. @throws InvalidInputException naming the first bad field */
     public void search(Runnable then) {
         TargetChoice target = session.target();
@@ -232,7 +266,7 @@ public final class BlendModel {
         double limit = positive("RED limit", redLimit.get(), 1.0);
         double kelvin = number("temperature", temperatureC.get(), 25.0) + 273.15;
         BlendDesigner.Request req = new BlendDesigner.Request(target.sphere(), c, k, top.get(), rankBy.get(), limit, false, kelvin,
-                org.cohesa.core.blend.Desirability.DEFAULT.withProcess(process.get(), null));
+                processWeights(lib));
         CancellationToken token = new CancellationToken();
         cancel = token;
         Object[] notes = new Object[2];

@@ -214,12 +214,12 @@ public final class BlendView {
         g.addRow(row++, new Label("Rank by"), rank);
         ComboBox<org.cohesa.core.blend.ProcessUse> process = new ComboBox<>();
         process.setId("blend-process");
-        process.getItems().setAll(java.util.Arrays.stream(org.cohesa.core.blend.ProcessUse.values())
-                .filter(u -> u != org.cohesa.core.blend.ProcessUse.AS_ORIGINAL).toList());
+        process.getItems().setAll(org.cohesa.core.blend.ProcessUse.values());
         process.setConverter(new javafx.util.StringConverter<>() {
             @Override
             public String toString(org.cohesa.core.blend.ProcessUse u) {
-                return u == null ? "" : u.word() + " — " + u.meaning();
+                return u == null ? "" : u == org.cohesa.core.blend.ProcessUse.AS_ORIGINAL ? "as the replaced liquid (its evaporation rate ÷× 3)"
+                        : u.word() + " — " + u.meaning();
             }
 
             @Override
