@@ -110,9 +110,9 @@ public final class BlendOptions {
     String redLimit;
 
     @Option(names = "--process", paramLabel = "USE", description = {
-            "How the solvent must leave afterwards (a ranking term, docs/methods.md): general (blend default: it evaporates, RER ≥ 0.1, n-butyl acetate = 1),",
+            "How the solvent must leave afterwards (a ranking term, docs/methods.md): general (blend default: it evaporates, RER ≥ 0.3, n-butyl acetate = 1),",
             "film (coatings, inks, adhesives drying in air: RER 0.2–6), workup (stripped after a reaction: boiling point 70–139 °C), cleaning (RER 0.3–8),",
-            "as-original (replace default: boiling point near the original's) or any (no process term)."})
+            "as-original (replace default: within a factor of 3 of the original's RER) or any (no process term)."})
     String process;
 
     /** The limit used when --red-limit is not given (the commands set it: 0.8, or 1.0 around a replaced solvent). */
