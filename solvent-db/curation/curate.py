@@ -87,7 +87,12 @@ HAZARD_BASIS_KEYS = {"harmonised": "memory-clp-annex-vi", "self": "memory-suppli
                      # checked against a stored copy (SOURCES.md names the copy for each solvent)
                      "harmonised-checked": "clp-annex-vi-checked", "sds-checked": "supplier-sds-checked",
                      # UN GHS classification of an International Chemical Safety Card, read from a stored copy
-                     "icsc": "icsc"}
+                     "icsc": "icsc",
+                     # a REACH registrant's self-classification read from a stored copy of its ECHA registration
+                     # dossier page (not harmonised: the note still tells the user to check the SDS)
+                     "registrant-checked": "echa-registration-dossier"}
+# bases that are self-classifications (no harmonised CLP Annex VI entry): their note carries the SDS caution
+SELF_BASES = {"self", "registrant-checked"}
 SELF_CLASSIFICATION_NOTE = "hazard statements: supplier self-classification, check the SDS"
 # The manual note that says a solvent carries no hazard statement because it is not classified (not because none is known).
 NOT_CLASSIFIED_NOTE = "not classified as hazardous"
@@ -595,7 +600,7 @@ def main(argv):
             if basis not in HAZARD_BASIS_KEYS:
                 raise SystemExit(f"{cas}: hazard_basis must be one of {sorted(HAZARD_BASIS_KEYS)}, not {basis!r}")
             r["src_hazard_statements"] = HAZARD_BASIS_KEYS[basis]
-            if basis == "self":
+            if basis in SELF_BASES:
                 notes.append(SELF_CLASSIFICATION_NOTE)
         elif NOT_CLASSIFIED_NOTE in m["note"] and m.get("hazard_basis", "").strip() in HAZARD_BASIS_KEYS:
             # "no statements" is itself the classification here (the note says so and names its basis), not a gap:

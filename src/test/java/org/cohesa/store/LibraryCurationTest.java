@@ -239,7 +239,7 @@ class LibraryCurationTest {
             if (r.get("hazard_statements").isEmpty()) {
                 continue;
             }
-            if (key.equals("memory-supplier-classification")) {
+            if (key.equals("memory-supplier-classification") || key.equals("echa-registration-dossier")) {
                 if (!r.get("note").contains("supplier self-classification, check the SDS")) {
                     bad.add(r.get("name") + ": self-classified without the SDS caution in its note");
                 }
@@ -283,6 +283,14 @@ class LibraryCurationTest {
                 "108-10-1", Set.of("H225", "H332", "H319", "H335"),
                 "109-99-9", Set.of("H225", "H319", "H351", "H335"),
                 "67-56-1", Set.of("H225", "H301", "H311", "H331", "H370"));
+        // Self-classifications read in the REACH registrants' dossiers (ECHA registration dossiers 13699 and 15807,
+        // skin/eye irritation key information): 2-MeTHF Skin Irrit. 2 H315 and Eye Dam. 1 H318 (BCOP); 1,3-dioxolane
+        // Eye Dam. 1 H318 on top of its Annex VI entry 605-017-00-2 "highly flammable" = H225 (chemicaldictionary.org).
+        assertTrue(Set.of(solvent("96-47-9").get("hazard_statements").split(" ")).containsAll(Set.of("H225", "H315", "H318")));
+        assertEquals("echa-registration-dossier", solvent("96-47-9").get("src_hazard_statements"));
+        assertTrue(solvent("96-47-9").get("note").contains("supplier self-classification, check the SDS"));
+        assertEquals(Set.of("H225", "H318"), Set.of(solvent("646-06-0").get("hazard_statements").split(" ")));
+        assertEquals("clp-annex-vi-checked", solvent("646-06-0").get("src_hazard_statements"));
         annexVi.forEach((cas, codes) -> {
             assertEquals(codes, Set.of(solvent(cas).get("hazard_statements").split(" ")), cas);
             assertEquals("clp-annex-vi-checked", solvent(cas).get("src_hazard_statements"), cas);
