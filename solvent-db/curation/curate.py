@@ -90,7 +90,10 @@ HAZARD_BASIS_KEYS = {"harmonised": "memory-clp-annex-vi", "self": "memory-suppli
                      "icsc": "icsc",
                      # a REACH registrant's self-classification read from a stored copy of its ECHA registration
                      # dossier page (not harmonised: the note still tells the user to check the SDS)
-                     "registrant-checked": "echa-registration-dossier"}
+                     "registrant-checked": "echa-registration-dossier",
+                     # the classification of a GisChem data sheet (BG RCI / BGHM), which says whether the solvent is
+                     # listed in Annex VI and which classes it adds from supplier data; read from a stored copy
+                     "gischem-checked": "gischem"}
 # bases that are self-classifications (no harmonised CLP Annex VI entry): their note carries the SDS caution
 SELF_BASES = {"self", "registrant-checked"}
 SELF_CLASSIFICATION_NOTE = "hazard statements: supplier self-classification, check the SDS"

@@ -243,7 +243,7 @@ class LibraryCurationTest {
                 if (!r.get("note").contains("supplier self-classification, check the SDS")) {
                     bad.add(r.get("name") + ": self-classified without the SDS caution in its note");
                 }
-            } else if (!Set.of("memory-clp-annex-vi", "clp-annex-vi-checked", "supplier-sds-checked", "icsc").contains(key)) {
+            } else if (!Set.of("memory-clp-annex-vi", "clp-annex-vi-checked", "supplier-sds-checked", "icsc", "gischem").contains(key)) {
                 bad.add(r.get("name") + ": hazard statements with basis '" + key + "'");
             }
         }
@@ -291,6 +291,13 @@ class LibraryCurationTest {
         assertTrue(solvent("96-47-9").get("note").contains("supplier self-classification, check the SDS"));
         assertEquals(Set.of("H225", "H318"), Set.of(solvent("646-06-0").get("hazard_statements").split(" ")));
         assertEquals("clp-annex-vi-checked", solvent("646-06-0").get("src_hazard_statements"));
+        // GisChem data sheets (BG RCI / BGHM), read from stored copies: diethanolamine (472) Annex VI H302 H315 H318
+        // H373 plus GisChem's Repr. 2 H361fd and Aquatic Chronic 3 H412; monoethanolamine (513) H302+H312+H332, H314,
+        // H335, H412; cyclohexanone (423) H226, H302+H312+H332, H315, H318.
+        assertEquals(Set.of("H302", "H315", "H318", "H361fd", "H373", "H412"), Set.of(solvent("111-42-2").get("hazard_statements").split(" ")));
+        assertEquals(Set.of("H302", "H312", "H332", "H314", "H335", "H412"), Set.of(solvent("141-43-5").get("hazard_statements").split(" ")));
+        assertEquals(Set.of("H226", "H302", "H312", "H332", "H315", "H318"), Set.of(solvent("108-94-1").get("hazard_statements").split(" ")));
+        assertEquals("gischem", solvent("108-94-1").get("src_hazard_statements"));
         annexVi.forEach((cas, codes) -> {
             assertEquals(codes, Set.of(solvent(cas).get("hazard_statements").split(" ")), cas);
             assertEquals("clp-annex-vi-checked", solvent(cas).get("src_hazard_statements"), cas);
