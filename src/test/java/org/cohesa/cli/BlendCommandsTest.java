@@ -284,4 +284,31 @@ class BlendCommandsTest {
         assertEquals(30 + 435 + 4060, r.json().get("subsets").asLong(), "C(30,1)+C(30,2)+C(30,3)");
         assertTrue(r.json().get("seconds_median").asDouble() >= 0);
     }
+
+    @Test
+    void processTemperatureShiftsTheSolventsAndKeepsTheMaterialSphereAsMeasured() {
+        // Hansen–Beerbower (Hansen, Hansen Solubility Parameters: A User's Handbook, 2nd ed. (2007), ch. 1):
+        // δD(T) = δD(25 °C)·exp(−1.25·α·ΔT). Toluene's volumetric expansion coefficient near 50 °C, about 1.1·10⁻³ K⁻¹
+        // (CRC Handbook, from memory), over 25 → 80 °C: 18.0 · exp(−1.25 · 1.1e-3 · 55) = 16.7 MPa^½.
+        String[] base = {"blend", "--material", "PMMA", "--include", "toluene", "--max-components", "1", "--rank-by", "red", "--json"};
+        CliTestSupport.Result cold = run(base);
+        assertEquals(0, cold.exitCode(), cold.err());
+        String[] hotArgs = java.util.Arrays.copyOf(base, base.length + 2);
+        hotArgs[base.length] = "--temperature";
+        hotArgs[base.length + 1] = "80";
+        CliTestSupport.Result hot = run(hotArgs);
+        assertEquals(0, hot.exitCode(), hot.err());
+        JsonNode t = hot.json().get("temperature");
+        assertEquals(80.0, t.get("process_temperature_c").asDouble(), 1e-9);
+        assertTrue(t.get("solvent_parameters_shifted").asBoolean(), t.toString());
+        assertTrue(t.get("target_sphere").asText().contains("taken as measured"), t.toString());
+        assertFalse(cold.json().get("temperature").get("solvent_parameters_shifted").asBoolean());
+        // the material's sphere is the same at both temperatures
+        assertEquals(cold.json().get("target").get("dD").asDouble(), hot.json().get("target").get("dD").asDouble(), 1e-12);
+        assertEquals(18.0, cold.json().get("blends").get(0).get("dD").asDouble(), 1e-9, "toluene as stored at 25 °C");
+        assertEquals(16.7, hot.json().get("blends").get(0).get("dD").asDouble(), 0.15, "toluene shifted to 80 °C");
+        CliTestSupport.Result text = run("blend", "--material", "PMMA", "--include", "toluene", "--max-components", "1", "--rank-by", "red",
+                "--temperature", "80");
+        assertTrue(text.out().contains("shifted from 25 °C to 80 °C") && text.out().contains("target sphere is taken as measured"), text.out());
+    }
 }

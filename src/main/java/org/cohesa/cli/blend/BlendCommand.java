@@ -72,7 +72,7 @@ public final class BlendCommand extends CohesaSubcommand {
         if (json()) {
             BlendReport.Target t = new BlendReport.Target(sphere.centre().dD(), sphere.centre().dP(), sphere.centre().dH(), sphere.r0(),
                     material == null ? null : material.name(), material == null ? null : material.source(), null);
-            Output.json(out(), new BlendReport.Blends(t, rankBy.word(), redLimit, options.ranking(r, req.weights()), BlendReport.search(r),
+            Output.json(out(), new BlendReport.Blends(t, BlendReport.Temperature.of(atTemperature), rankBy.word(), redLimit, options.ranking(r, req.weights()), BlendReport.search(r),
                     BlendView.appliedLimits(c), BlendReport.suggestions(r, null), BlendView.SCREENING));
             return;
         }

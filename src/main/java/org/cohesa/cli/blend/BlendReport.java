@@ -121,15 +121,31 @@ final class BlendReport {
             @JsonInclude(JsonInclude.Include.NON_NULL) @JsonProperty("centred_on_original") Boolean centredOnOriginal) {
     }
 
-    record Blends(Target target, @JsonProperty("rank_by") String rankBy, @JsonProperty("red_limit") double redLimit, Ranking ranking, Search search,
-            @JsonProperty("applied_limits") List<String> appliedLimits, List<Suggestion> blends, String notice) {
+    record Blends(Target target, Temperature temperature, @JsonProperty("rank_by") String rankBy, @JsonProperty("red_limit") double redLimit,
+            Ranking ranking, Search search, @JsonProperty("applied_limits") List<String> appliedLimits, List<Suggestion> blends, String notice) {
+    }
+
+    /**
+     * The process temperature of a blend or replace run: whether the solvents' Hansen parameters were shifted to it
+     * (Hansen–Beerbower), that the target sphere is taken as measured, and the solvents the shift could not handle
+     * (left out of the search; they are also counted under "no Hansen parameters").
+     */
+    record Temperature(@JsonProperty("process_temperature_c") double processTemperatureC,
+            @JsonProperty("solvent_parameters_shifted") boolean solventParametersShifted, String method,
+            @JsonProperty("target_sphere") String targetSphere, @JsonProperty("left_out_for_the_shift") List<String> leftOutForTheShift) {
+
+        static Temperature of(org.cohesa.core.solvent.LibraryAtTemperature at) {
+            return new Temperature(Output.round(at.kelvin() - 273.15, 2), at.shifted(),
+                    at.shifted() ? "Hansen–Beerbower shift from 25 °C (docs/methods.md)" : "none: parameters as stored (25 °C)",
+                    "taken as measured (not shifted)", at.leftOut());
+        }
     }
 
     record Original(String name, @JsonProperty("dD") double dD, @JsonProperty("dP") double dP, @JsonProperty("dH") double dH, double red,
             @JsonProperty("flash_point_c") Double flashPointC, @JsonProperty("replaced_for") List<String> replacedFor, @JsonUnwrapped Comparison comparison) {
     }
 
-    record Replacement(Original original, Target target, @JsonProperty("rank_by") String rankBy, Ranking ranking, Search search,
+    record Replacement(Original original, Target target, Temperature temperature, @JsonProperty("rank_by") String rankBy, Ranking ranking, Search search,
             @JsonProperty("applied_limits") List<String> appliedLimits, List<Suggestion> candidates, String notice) {
     }
 }
