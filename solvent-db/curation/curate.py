@@ -93,7 +93,9 @@ HAZARD_BASIS_KEYS = {"harmonised": "memory-clp-annex-vi", "self": "memory-suppli
                      "registrant-checked": "echa-registration-dossier",
                      # the classification of a GisChem data sheet (BG RCI / BGHM), which says whether the solvent is
                      # listed in Annex VI and which classes it adds from supplier data; read from a stored copy
-                     "gischem-checked": "gischem"}
+                     "gischem-checked": "gischem",
+                     # the GHS box of a German Wikipedia infobox (which cites GESTIS or a supplier), read from a copy
+                     "dewiki-checked": "dewiki-infobox"}
 # bases that are self-classifications (no harmonised CLP Annex VI entry): their note carries the SDS caution
 SELF_BASES = {"self", "registrant-checked"}
 SELF_CLASSIFICATION_NOTE = "hazard statements: supplier self-classification, check the SDS"
