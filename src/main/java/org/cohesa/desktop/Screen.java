@@ -6,7 +6,8 @@ import java.util.Locale;
 public enum Screen {
     CASES("cases", "Cases"),
     TARGET("target", "Material"),
-    BLENDS("blends", "Limits and candidates"),
+    LIMITS("limits", "Limits"),
+    BLENDS("blends", "Candidates"),
     CHECKS("checks", "Checks"),
     RECORD("record", "Record"),
     LIBRARY("library", "Library"),

@@ -62,6 +62,8 @@ public final class Workbench {
     private final CaseModel caseModel;
     private final CaseStrip strip;
     private final BlendView blendView;
+    private final org.cohesa.desktop.cases.LimitsStepView limitsStep;
+    private final org.cohesa.desktop.cases.CandidatesStepView candidatesStep;
     private final org.cohesa.desktop.cases.InsideOutPanel insideOut;
     private final LibraryModel libraryModel;
     private final LibraryView libraryView;
@@ -99,7 +101,16 @@ public final class Workbench {
         blendView.addPanel("Inside or out", insideOut.node(), "blend-inside-out-tab");
         addScreen(Screen.CASES, new CasesView(caseModel, () -> show(Screen.TARGET)).node());
         addScreen(Screen.TARGET, targetView.node());
-        addScreen(Screen.BLENDS, blendView.node());
+        limitsStep = new org.cohesa.desktop.cases.LimitsStepView(caseModel, blendView.limitsNode(), () -> show(Screen.BLENDS));
+        addScreen(Screen.LIMITS, limitsStep.node());
+        candidatesStep = new org.cohesa.desktop.cases.CandidatesStepView(caseModel, blendView.node(), () -> show(Screen.LIMITS));
+        addScreen(Screen.BLENDS, candidatesStep.node());
+        // a search started on the Limits step goes on to its candidates
+        blendView.onSearched(() -> {
+            if (showing == Screen.LIMITS) {
+                show(Screen.BLENDS);
+            }
+        });
         addScreen(Screen.CHECKS, new ChecksView(caseModel, this::openDrying).node());
         addScreen(Screen.RECORD, new RecordStepView(caseModel, () -> show(Screen.RECORDS)).node());
         addScreen(Screen.LIBRARY, libraryView.node());
@@ -183,11 +194,20 @@ public final class Workbench {
         return blendView;
     }
 
+    public org.cohesa.desktop.cases.LimitsStepView limitsStep() {
+        return limitsStep;
+    }
+
+    public org.cohesa.desktop.cases.CandidatesStepView candidatesStep() {
+        return candidatesStep;
+    }
+
     /** Shows the pane of a case's step. */
     public void showStep(org.cohesa.core.cases.CaseStep step) {
         show(switch (step) {
             case MATERIAL -> Screen.TARGET;
-            case LIMITS, CANDIDATES -> Screen.BLENDS;
+            case LIMITS -> Screen.LIMITS;
+            case CANDIDATES -> Screen.BLENDS;
             case CHECKS -> Screen.CHECKS;
             case RECORD -> Screen.RECORD;
         });
@@ -260,6 +280,7 @@ public final class Workbench {
         if (strip != null) {
             strip.showing(switch (s) {
                 case TARGET -> org.cohesa.core.cases.CaseStep.MATERIAL;
+                case LIMITS -> org.cohesa.core.cases.CaseStep.LIMITS;
                 case BLENDS -> org.cohesa.core.cases.CaseStep.CANDIDATES;
                 case CHECKS -> org.cohesa.core.cases.CaseStep.CHECKS;
                 case RECORD -> org.cohesa.core.cases.CaseStep.RECORD;

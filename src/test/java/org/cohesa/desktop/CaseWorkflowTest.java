@@ -138,7 +138,7 @@ class CaseWorkflowTest {
         fx.awaitJobs();
         Long record = fx.workbench.caseModel().current().recordId();
         assertNotNull(record, fx.session.jobs().messageProperty().get());
-        assertTrue(fx.workbench.caseStrip().text(CaseStep.RECORD).startsWith("✓ record " + record));
+        assertEquals("○ record " + record + " draft: send it to review", fx.workbench.caseStrip().text(CaseStep.RECORD));
         assertTrue(robot.lookup("#record-step-state").queryAs(Label.class).getText().contains("draft"),
                 robot.lookup("#record-step-state").queryAs(Label.class).getText());
         assertEquals(first, fx.workbench.recordsModel().records().get(0).content().replacement());
@@ -179,6 +179,6 @@ class CaseWorkflowTest {
         assertFalse(fx.workbench.blendModel().rows().isEmpty(), "the search ran again with the stored limits");
         assertEquals(java.util.List.of(first, second), back.chosen().stream().map(SubstitutionCase.ChosenCandidate::blend).toList());
         assertEquals(record, back.recordId());
-        assertTrue(fx.workbench.caseStrip().text(CaseStep.RECORD).startsWith("✓ record " + record));
+        assertEquals("○ record " + record + " draft: send it to review", fx.workbench.caseStrip().text(CaseStep.RECORD));
     }
 }

@@ -54,13 +54,15 @@ public final class BlendView {
     private final TableView<List<String>> comparison = new TableView<>();
     private final TabPane right = new TabPane();
     private final Consumer<Blend> showDrying;
+    private final Node limits;
+    private Runnable afterSearch;
 
     /** @param showDrying opens the drying screen for a blend */
     public BlendView(BlendModel model, Consumer<Blend> showDrying) {
         this.model = model;
         this.showDrying = showDrying;
         root.setId("blend-screen");
-        root.setLeft(form());
+        limits = form();
         table.setId("blend-cards");
         table.getStyleClass().add("candidate-list");
         table.setItems(model.rows());
@@ -153,8 +155,19 @@ public final class BlendView {
         root.setCenter(split);
     }
 
+    /** The candidates: the cards with the panels beside them (the Candidates step of a case). */
     public Node node() {
         return root;
+    }
+
+    /** The limits form with its Search button (the Limits step of a case). */
+    public Node limitsNode() {
+        return limits;
+    }
+
+    /** What runs once a search started from the form has its candidates (the case moves on to them). */
+    public void onSearched(Runnable action) {
+        this.afterSearch = action;
     }
 
     private Consumer<List<BlendModel.Row>> onChoose;
@@ -275,7 +288,7 @@ public final class BlendView {
             Spinners.commit(k);
             Spinners.commit(top);
             try {
-                model.search(null);
+                model.search(afterSearch);
             } catch (RuntimeException ex) {
                 model.session().jobs().complain(ErrorText.of(ex));
             }
@@ -288,7 +301,7 @@ public final class BlendView {
         target.getStyleClass().add("headline");
         target.setWrapText(true);
         target.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(() -> model.session().target() == null
-                ? "No target: set one on the target screen." : "Target: " + model.session().target().name(), model.session().targetProperty()));
+                ? "No material yet: pick one on the Material step." : "For: " + model.session().target().name(), model.session().targetProperty()));
         VBox box = new VBox(10, target, g, search, hint);
         box.setPadding(new Insets(10));
         box.setPrefWidth(360);
@@ -307,7 +320,7 @@ public final class BlendView {
     }
 
     /** The trade's words for the ranking keys after solvency. */
-    static String rankWord(RankBy r) {
+    public static String rankWord(RankBy r) {
         return r == null ? "" : switch (r) {
             case DESIRABILITY -> "overall (safety first)";
             case HAZARD -> "safety";

@@ -54,6 +54,8 @@ public final class CaseModel {
         return t;
     });
     private boolean applying;
+    private final javafx.beans.property.ReadOnlyBooleanWrapper limitsChanged = new javafx.beans.property.ReadOnlyBooleanWrapper();
+    private final javafx.beans.binding.ObjectBinding<List<CaseProgress.State>> progress;
 
     public CaseModel(Session session, BlendModel blends, RecordsModel records, Clock clock) {
         this.session = session;
@@ -73,6 +75,50 @@ public final class CaseModel {
                 checks.keySet().retainAll(found);
             }
         });
+        // the Limits step is open again as soon as the form no longer holds the limits the candidates were found with
+        List<javafx.beans.Observable> form = new ArrayList<>(List.of(blends.maxComponents, blends.top, blends.rankBy, blends.process,
+                blends.include, blends.exclude, blends.fixed, blends.minFractionPercent, blends.boilingMin, blends.boilingMax,
+                blends.minFlashPoint, blends.maxIchClass, blends.noCmr, blends.maxCost, blends.redLimit, blends.temperatureC,
+                blends.families, blends.excludeFamilies, blends.withWater, blends.minBlendFlash, blends.allowIchClass1, current));
+        form.addAll(blends.excludeReactive.values());
+        javafx.beans.InvalidationListener recheck = o -> limitsChanged.set(differs(current.get(), blends.limits()));
+        form.forEach(x -> x.addListener(recheck));
+        progress = javafx.beans.binding.Bindings.createObjectBinding(() -> current.get() == null ? List.of()
+                : CaseProgress.of(current.get(), new CaseProgress.Facts(limitsChanged.get(), recordStatus())), current, limitsChanged, records.records());
+    }
+
+    /** True when the case has searched and a limit it searched with now reads differently in the form. */
+    static boolean differs(SubstitutionCase c, Map<String, String> form) {
+        if (c == null || c.limits().isEmpty()) {
+            return false;
+        }
+        for (Map.Entry<String, String> e : form.entrySet()) {
+            String was = c.limits().get(e.getKey());
+            if (was != null && !was.strip().equals(e.getValue() == null ? "" : e.getValue().strip())) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** Whether the form's limits differ from those the case's candidates were found with. */
+    public javafx.beans.property.ReadOnlyBooleanProperty limitsChangedProperty() {
+        return limitsChanged.getReadOnlyProperty();
+    }
+
+    /** The status of the case's record as the register read last holds it, or null (none filed, or not in this register). */
+    public org.cohesa.core.records.RecordStatus recordStatus() {
+        SubstitutionCase c = current.get();
+        if (c == null || c.recordId() == null) {
+            return null;
+        }
+        return records.records().stream().filter(r -> r.id() == c.recordId()).findFirst()
+                .map(org.cohesa.core.records.SubstitutionRecord::status).orElse(null);
+    }
+
+    /** What each step has done or misses, kept up to date with the case, the limits form and the register. */
+    public javafx.beans.binding.ObjectBinding<List<CaseProgress.State>> progressBinding() {
+        return progress;
     }
 
     public Session session() {
@@ -111,7 +157,7 @@ public final class CaseModel {
     }
 
     public List<CaseProgress.State> progress() {
-        return current.get() == null ? List.of() : CaseProgress.of(current.get());
+        return progress.get();
     }
 
     /** Reads the list of saved cases. */

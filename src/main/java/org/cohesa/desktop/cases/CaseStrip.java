@@ -102,6 +102,7 @@ public final class CaseStrip {
         refs.getChildren().add(refRow);
         root.getChildren().addAll(gap, refs);
         model.currentProperty().addListener((o, a, c) -> refresh());
+        model.progressBinding().addListener((o, a, c) -> refresh());
         refresh();
     }
 
@@ -125,7 +126,7 @@ public final class CaseStrip {
         caseLabel.setText(c == null ? "No case open" : c.title() + (c.replaced().isEmpty() ? "" : " · replaces " + c.replaced()));
         caseLabel.setTooltip(c == null ? null : new javafx.scene.control.Tooltip(c.kind().words() + ": " + caseLabel.getText()
                 + (c.process().isEmpty() ? "" : "\nprocess: " + c.process())));
-        List<CaseProgress.State> states = c == null ? List.of() : CaseProgress.of(c);
+        List<CaseProgress.State> states = model.progress();
         for (CaseStep s : CaseStep.values()) {
             Button b = steps.get(s);
             b.getStyleClass().removeAll("step-done", "step-missing", "step-current");

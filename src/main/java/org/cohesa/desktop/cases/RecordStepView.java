@@ -1,25 +1,36 @@
 package org.cohesa.desktop.cases;
 
+import javafx.beans.binding.Bindings;
 import javafx.geometry.Insets;
+import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.CheckBox;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.Separator;
 import javafx.scene.control.TextField;
 import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import org.cohesa.core.cases.SubstitutionCase;
 import org.cohesa.core.cases.SubstitutionCase.ChosenCandidate;
+import org.cohesa.core.records.RecordStatus;
+import org.cohesa.core.records.StatusChange;
 import org.cohesa.core.records.SubstitutionRecord;
 import org.cohesa.desktop.common.ErrorText;
+import org.cohesa.desktop.common.LocalTimes;
 import org.cohesa.desktop.records.RecordsModel;
 
 /**
  * The Record step: files the case's substitution in the register (the same evidence the command line files), with the
- * liquid replaced and process from the case and the replacement picked from the chosen candidates; then shows the
- * record's number and state. Review and approval happen in the register.
+ * liquid replaced and process from the case and the replacement picked from the chosen candidates; then takes the record
+ * through review to its decision without leaving the case. The register holds the rules: the moves draft → in review →
+ * approved | rejected, and four eyes against the account at the keyboard (the author may not review or approve, the
+ * reviewer may not approve); a refused step is said here and in the status bar, and nothing is written.
  */
 public final class RecordStepView {
 
@@ -34,12 +45,24 @@ public final class RecordStepView {
     private final CheckBox withTarget = new CheckBox("File the case's material as the target (parameters and distances in the evidence)");
     private final Label state = new Label();
     private final Label unchecked = new Label();
+    private final GridPane filing = new GridPane();
+    private final Button file = new Button("_File the record");
+    private final VBox decision = new VBox(8);
+    private final VBox history = new VBox(3);
+    private final Label next = new Label();
+    private final TextField by = new TextField(System.getProperty("user.name", ""));
+    private final TextField comment = new TextField();
+    private final Button review = new Button("Send to re_view");
+    private final Button approve = new Button("_Approve");
+    private final Button reject = new Button("Re_ject");
+    private final Label refused = new Label();
 
     /** @param openRegister shows the register screen */
     public RecordStepView(CaseModel model, Runnable openRegister) {
         this.model = model;
         root.setId("record-step");
         root.setPadding(new Insets(14));
+        root.setMaxWidth(900);
         Label head = new Label("File the substitution");
         head.getStyleClass().add("headline");
         replaced.setId("record-step-replaced");
@@ -62,23 +85,22 @@ public final class RecordStepView {
         reason.setPromptText("why the liquid is replaced, e.g. reprotoxic (H360D)");
         author.setId("record-step-author");
         withTarget.setSelected(true);
-        GridPane g = new GridPane();
-        g.setHgap(8);
-        g.setVgap(8);
+        filing.setHgap(8);
+        filing.setVgap(8);
         int r = 0;
-        g.addRow(r++, new Label("Liquid replaced"), replaced);
-        g.addRow(r++, new Label("Replacement"), replacement);
-        g.addRow(r++, new Label("Process"), process);
-        g.addRow(r++, new Label("Site"), site);
-        g.addRow(r++, new Label("Reason"), reason);
-        g.addRow(r++, new Label("Filed by"), author);
-        g.add(withTarget, 0, r++, 2, 1);
+        filing.addRow(r++, new Label("Liquid replaced"), replaced);
+        filing.addRow(r++, new Label("Replacement"), replacement);
+        filing.addRow(r++, new Label("Process"), process);
+        filing.addRow(r++, new Label("Site"), site);
+        filing.addRow(r++, new Label("Reason"), reason);
+        filing.addRow(r++, new Label("Filed by"), author);
+        filing.add(withTarget, 0, r++, 2, 1);
         GridPane.setHgrow(replacement, Priority.ALWAYS);
-        g.setMaxWidth(760);
+        filing.setMaxWidth(760);
         unchecked.setWrapText(true);
         unchecked.getStyleClass().add("form-problems");
         unchecked.setId("record-step-unchecked");
-        Button file = new Button("_File the record");
+        unchecked.setMinHeight(Region.USE_PREF_SIZE);
         file.setId("record-step-file");
         file.setOnAction(e -> {
             try {
@@ -91,51 +113,177 @@ public final class RecordStepView {
         });
         state.setId("record-step-state");
         state.setWrapText(true);
-        Button register = new Button("Open the register (review, approve, PDF)");
+        state.getStyleClass().add("section-title");
+        Button register = new Button("Open the register (all records, PDF, CSV, verify)");
         register.setId("record-step-register");
         register.setOnAction(e -> openRegister.run());
         Label note = new Label("The record takes a snapshot of the evidence when it is filed: parameters, distances, both liquids' "
-                + "safety profiles and drying paths, and every data source. Review and approval are done by others in the register.");
+                + "safety profiles and drying paths, and every data source. Records are never changed, only appended to.");
         note.setWrapText(true);
         note.getStyleClass().add("hint");
-        root.getChildren().addAll(head, g, unchecked, file, state, register, note);
+        note.setMinHeight(Region.USE_PREF_SIZE);
+        root.getChildren().addAll(head, filing, unchecked, file, state, new Separator(), decisionPane(), new Separator(), register, note);
+        ScrollPane scroll = new ScrollPane(root);
+        scroll.setFitToWidth(true);
+        scroll.setId("record-step-scroll");
+        this.node = scroll;
         model.currentProperty().addListener((o, a, c) -> refresh(a, c));
         model.records().records().addListener((javafx.collections.ListChangeListener<SubstitutionRecord>) ch -> showState());
+        model.records().infoProperty().addListener((o, a, b) -> showState());
         refresh(null, model.current());
     }
 
+    private final Node node;
+
     public Node node() {
-        return root;
+        return node;
+    }
+
+    /** Review and decision, here in the case: who acts (as the register sees it), the record's steps so far, the next move. */
+    private Node decisionPane() {
+        Label head = new Label("Review and decision");
+        head.getStyleClass().add("headline");
+        Label who = new Label();
+        who.setId("record-step-who");
+        who.setWrapText(true);
+        who.getStyleClass().add("hint");
+        who.setMinHeight(Region.USE_PREF_SIZE);
+        who.textProperty().bind(Bindings.createStringBinding(() -> {
+            RecordsModel.RegisterInfo i = model.records().infoProperty().get();
+            if (i == null) {
+                return "Register: opening…";
+            }
+            return "You act as " + (i.login() ? "the database login " : "the operating-system account ") + i.account() + " on the "
+                    + ("postgresql".equals(i.kind()) ? "shared" : "local") + " register. "
+                    + (i.fourEyes() ? "Four eyes is on: the author of a record cannot review or approve it, and its reviewer cannot "
+                            + "approve it — whatever name is typed, the register compares accounts."
+                            : "Four eyes is off on this register (one person may file, review and approve).");
+        }, model.records().infoProperty()));
+        history.setId("record-step-history");
+        next.setId("record-step-next");
+        next.setWrapText(true);
+        next.setMinHeight(Region.USE_PREF_SIZE);
+        by.setId("record-step-by");
+        by.setPrefColumnCount(18);
+        comment.setId("record-step-comment");
+        comment.setPromptText("e.g. evidence complete; lab trial 12 passed");
+        GridPane g = new GridPane();
+        g.setHgap(8);
+        g.setVgap(6);
+        g.addRow(0, new Label("By"), by);
+        g.addRow(1, new Label("Comment"), comment);
+        GridPane.setHgrow(comment, Priority.ALWAYS);
+        g.setMaxWidth(760);
+        review.setId("record-step-review");
+        approve.setId("record-step-approve");
+        reject.setId("record-step-reject");
+        review.setOnAction(e -> decide(RecordStatus.IN_REVIEW));
+        approve.setOnAction(e -> decide(RecordStatus.APPROVED));
+        reject.setOnAction(e -> decide(RecordStatus.REJECTED));
+        Button reread = new Button("Read the register again");
+        reread.setId("record-step-reread");
+        reread.setOnAction(e -> model.records().reload(null));
+        HBox buttons = new HBox(8, review, approve, reject, reread);
+        buttons.setAlignment(Pos.CENTER_LEFT);
+        refused.setId("record-step-refused");
+        refused.setWrapText(true);
+        refused.getStyleClass().add("form-problems");
+        refused.setMinHeight(Region.USE_PREF_SIZE);
+        refused.managedProperty().bind(refused.visibleProperty());
+        refused.setVisible(false);
+        Label steps = new Label("Steps so far");
+        steps.getStyleClass().add("section-title");
+        decision.getChildren().addAll(head, who, steps, history, next, g, buttons, refused);
+        decision.setId("record-step-decision");
+        return decision;
+    }
+
+    private void decide(RecordStatus to) {
+        SubstitutionCase c = model.current();
+        if (c == null || c.recordId() == null) {
+            return;
+        }
+        refused.setVisible(false);
+        long id = c.recordId();
+        try {
+            model.records().changeStatus(id, to, by.getText(), comment.getText(), () -> comment.clear(), why -> {
+                refused.setText("Refused, nothing written: " + why);
+                refused.setVisible(true);
+            });
+        } catch (RuntimeException ex) {
+            refused.setText(ErrorText.of(ex));
+            refused.setVisible(true);
+            model.session().jobs().complain(ErrorText.of(ex));
+        }
     }
 
     private void refresh(SubstitutionCase before, SubstitutionCase c) {
         if (c == null) {
             replacement.getItems().clear();
             state.setText("No case open.");
+            showState();
             return;
         }
         if (before == null || before.id() != c.id() && before.id() != 0) {
             replaced.setText(c.replaced());
             process.setText(c.process());
+            refused.setVisible(false);
         }
         String pick = replacement.getValue();
         replacement.getItems().setAll(c.chosen().stream().map(ChosenCandidate::blend).toList());
         replacement.setValue(pick != null && replacement.getItems().contains(pick) ? pick
                 : replacement.getItems().isEmpty() ? null : replacement.getItems().get(0));
         long open = c.chosen().stream().filter(x -> x.checksDone() < 3).count();
-        unchecked.setText(c.chosen().isEmpty() ? "No candidate chosen: the record needs a replacement (Candidates step)."
+        unchecked.setText(c.recordId() != null ? "" : c.chosen().isEmpty() ? "No candidate chosen: the record needs a replacement (Candidates step)."
                 : open == 0 ? "" : open + " chosen candidate" + (open == 1 ? " has" : "s have") + " checks not yet run (Checks step).");
         showState();
     }
 
     private void showState() {
         SubstitutionCase c = model.current();
-        if (c == null || c.recordId() == null) {
+        boolean filed = c != null && c.recordId() != null;
+        filing.setDisable(filed);
+        file.setDisable(c == null || filed);
+        history.getChildren().clear();
+        SubstitutionRecord r = !filed ? null : model.records().records().stream().filter(x -> x.id() == c.recordId()).findFirst().orElse(null);
+        RecordStatus status = r == null ? null : r.status();
+        review.setDisable(status == null || !status.canMoveTo(RecordStatus.IN_REVIEW));
+        approve.setDisable(status == null || !status.canMoveTo(RecordStatus.APPROVED));
+        reject.setDisable(status == null || !status.canMoveTo(RecordStatus.REJECTED));
+        if (!filed) {
             state.setText(c == null ? "No case open." : "Not filed yet.");
+            history.getChildren().add(new Label("Nothing yet: file the record first."));
+            next.setText("");
             return;
         }
-        String status = model.records().records().stream().filter(x -> x.id() == c.recordId()).findFirst()
-                .map(x -> x.status().label()).orElse("in the register");
-        state.setText("Filed as record " + c.recordId() + " — " + status + ".");
+        if (r == null) {
+            state.setText("Filed as record " + c.recordId() + " — not in the register shown now (another register?).");
+            history.getChildren().add(new Label("Record " + c.recordId() + " is not in this register: switch registers on the register screen."));
+            next.setText("");
+            return;
+        }
+        state.setText("Filed as record " + r.id() + " — " + r.status().label().replace('_', ' ') + ".");
+        for (StatusChange s : r.history()) {
+            Label l = new Label(s.seq() + ".  " + LocalTimes.of(s.at()) + "   " + words(s.kind()) + " by " + s.by()
+                    + (s.account() == null || s.account().isBlank() ? "" : " (account " + s.account() + ")")
+                    + (s.comment() == null || s.comment().isBlank() ? "" : " — " + s.comment()));
+            l.setWrapText(true);
+            l.setId("record-step-history-" + s.seq());
+            history.getChildren().add(l);
+        }
+        next.setText(switch (r.status()) {
+            case DRAFT -> "Next: someone other than the author sends it to review (it can be done here, under their own account).";
+            case IN_REVIEW -> "Next: a third person approves or rejects it — not the author, not the reviewer.";
+            case APPROVED -> "✓ Approved: the substitution is decided. A new decision needs a new record (a new case).";
+            case REJECTED -> "✓ Rejected: the decision is final. Start a new case for another replacement.";
+        });
+    }
+
+    private static String words(String kind) {
+        return switch (kind) {
+            case "created" -> "filed";
+            case "sent_to_review" -> "sent to review";
+            default -> kind.replace('_', ' ');
+        };
     }
 }

@@ -203,6 +203,16 @@ public final class RecordsModel {
     }
 
     public void changeStatus(long id, RecordStatus next, String by, String comment, Runnable then) {
+        changeStatus(id, next, by, comment, then, null);
+    }
+
+    /**
+     * Takes record {@code id} to {@code next} on a worker thread. The register holds the rules (the moves, four eyes
+     * against the account at the keyboard); a refused step writes nothing and its one-line reason goes to the status bar
+     * and to {@code refused} (on the FX thread).
+     */
+    public void changeStatus(long id, RecordStatus next, String by, String comment, Runnable then,
+            java.util.function.Consumer<String> refused) {
         session.jobs().run("Recording the decision on record " + id, p -> {
             try (Opened o = open()) {
                 return o.repo().changeStatus(id, next, required("by", by), comment);
@@ -212,7 +222,7 @@ public final class RecordsModel {
             if (then != null) {
                 then.run();
             }
-        }));
+        }), refused);
     }
 
     /** Walks the hash chain; the status bar says whether it is intact or names the first problem. */

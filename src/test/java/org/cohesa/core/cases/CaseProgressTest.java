@@ -10,6 +10,7 @@ import java.util.List;
 import java.util.Map;
 import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.cases.SubstitutionCase.CaseMaterial;
+import org.cohesa.core.records.RecordStatus;
 import org.junit.jupiter.api.Test;
 
 /** The step strip's words: each step says what is done or what is missing (invented demo case). */
@@ -68,5 +69,26 @@ class CaseProgressTest {
         e = assertThrows(InvalidInputException.class, () -> SubstitutionCase.start("x", SubstitutionCase.Kind.REPLACE, "", "", NOW));
         assertTrue(e.getMessage().contains("replaced liquid"), e.getMessage());
         assertThrows(InvalidInputException.class, () -> SubstitutionCase.start("x".repeat(201), SubstitutionCase.Kind.FIND, "", "", NOW));
+    }
+
+    @Test
+    void changedLimitsAndAnUndecidedRecordKeepTheirStepsOpen() {
+        SubstitutionCase c = SubstitutionCase.start("Demo", SubstitutionCase.Kind.REPLACE, "toluene", "thinner", NOW)
+                .withMaterial(new CaseMaterial("demo resin", "typed in", 18.5, 9, 8, 8))
+                .withSearch(Map.of("red-limit", "0.8", "families", "esters;ketones", "with-water", "separates from water (extraction)"),
+                        List.of("acetone:1"));
+        assertEquals("RED ≤ 0.8 · only esters, ketones · separates from water", CaseProgress.of(c).get(1).text());
+        CaseProgress.State changed = CaseProgress.of(c, new CaseProgress.Facts(true, null)).get(1);
+        assertFalse(changed.done());
+        assertEquals("changed since the last search: search again", changed.text());
+        c = c.choose("acetone:1", 0.4).withRecord(7);
+        CaseProgress.State draft = CaseProgress.of(c, new CaseProgress.Facts(false, RecordStatus.DRAFT)).get(4);
+        assertFalse(draft.done());
+        assertEquals("record 7 draft: send it to review", draft.text());
+        assertFalse(CaseProgress.of(c, new CaseProgress.Facts(false, RecordStatus.IN_REVIEW)).get(4).done());
+        CaseProgress.State approved = CaseProgress.of(c, new CaseProgress.Facts(false, RecordStatus.APPROVED)).get(4);
+        assertTrue(approved.done());
+        assertEquals("record 7 approved", approved.text());
+        assertTrue(CaseProgress.of(c, new CaseProgress.Facts(false, RecordStatus.REJECTED)).get(4).done());
     }
 }
