@@ -95,9 +95,12 @@ HAZARD_BASIS_KEYS = {"harmonised": "memory-clp-annex-vi", "self": "memory-suppli
                      # listed in Annex VI and which classes it adds from supplier data; read from a stored copy
                      "gischem-checked": "gischem",
                      # the GHS box of a German Wikipedia infobox (which cites GESTIS or a supplier), read from a copy
-                     "dewiki-checked": "dewiki-infobox"}
+                     "dewiki-checked": "dewiki-infobox",
+                     # the GHS box of an English Wikipedia infobox, read from a copy; its source is not named there, so
+                     # the list is treated as a self-classification (the note keeps the SDS caution)
+                     "wikipedia-checked": "wikipedia-infobox"}
 # bases that are self-classifications (no harmonised CLP Annex VI entry): their note carries the SDS caution
-SELF_BASES = {"self", "registrant-checked"}
+SELF_BASES = {"self", "registrant-checked", "wikipedia-checked"}
 SELF_CLASSIFICATION_NOTE = "hazard statements: supplier self-classification, check the SDS"
 # The manual note that says a solvent carries no hazard statement because it is not classified (not because none is known).
 NOT_CLASSIFIED_NOTE = "not classified as hazardous"
@@ -491,6 +494,15 @@ def main(argv):
             notes.append(f"boiling point: the temperature at which the {fit.label} fit ({fit.range_text()}) gives "
                          f"101.325 kPa, so the boiling-point check of that fit is no independent test"
                          + recalled_bp_replaced(m))
+        elif cas in vapour.SAME_LIQUID_PROXIES and (from_fit := vapour.boiling_point_from_fit(
+                vapour_tables.get(vapour.PROXIES[cas][0], []))) is not None:
+            # the same liquid under another CAS entry (enantiomer, racemate): its fit gives the boiling point
+            tb, fit = from_fit
+            other, reason = vapour.PROXIES[cas]
+            r["src_boiling_point"] = "tb-from-vapour-fit"
+            notes.append(f"boiling point: the temperature at which the {fit.label} fit of {other} ({fit.range_text()}; "
+                         f"{reason.split(':')[0]}, the same liquid) gives 101.325 kPa, so the boiling-point check of "
+                         f"that fit is no independent test" + recalled_bp_replaced(m))
         elif m.get("boiling_point_c"):
             tb = float(m["boiling_point_c"]) + 273.15
             r["src_boiling_point"] = m["src_boiling_point"]

@@ -161,6 +161,10 @@ PROXIES = {
     "25498-49-1": ("20324-33-8", "tripropylene glycol methyl ether (isomer mixture): curve of the isomer 20324-33-8"),
 }
 
+# PROXIES that are the same liquid under another CAS entry (an enantiomer or the racemate, not an isomer of a mixture):
+# where no CRC table has a boiling point, the proxy's own published fit may give it (curate.py, tb-from-vapour-fit).
+SAME_LIQUID_PROXIES = {"138-86-3", "97-64-3", "547-64-8"}
+
 # Solvents without a boiling point of their own whose liquid the CRC table lists under another CAS: that boiling point
 # is the check of the vapour-pressure fit (written into the note): cas -> (CAS of the CRC row, reason).
 TB_PROXIES = {

@@ -239,7 +239,8 @@ class LibraryCurationTest {
             if (r.get("hazard_statements").isEmpty()) {
                 continue;
             }
-            if (key.equals("memory-supplier-classification") || key.equals("echa-registration-dossier")) {
+            if (key.equals("memory-supplier-classification") || key.equals("echa-registration-dossier")
+                    || key.equals("wikipedia-infobox")) {
                 if (!r.get("note").contains("supplier self-classification, check the SDS")) {
                     bad.add(r.get("name") + ": self-classified without the SDS caution in its note");
                 }
