@@ -100,7 +100,7 @@ HAZARD_BASIS_KEYS = {"harmonised": "memory-clp-annex-vi", "self": "memory-suppli
                      # the list is treated as a self-classification (the note keeps the SDS caution)
                      "wikipedia-checked": "wikipedia-infobox"}
 # bases that are self-classifications (no harmonised CLP Annex VI entry): their note carries the SDS caution
-SELF_BASES = {"self", "registrant-checked", "wikipedia-checked"}
+SELF_BASES = {"self", "registrant-checked", "wikipedia-checked", "dewiki-checked"}
 SELF_CLASSIFICATION_NOTE = "hazard statements: supplier self-classification, check the SDS"
 # The manual note that says a solvent carries no hazard statement because it is not classified (not because none is known).
 NOT_CLASSIFIED_NOTE = "not classified as hazardous"

@@ -240,7 +240,7 @@ class LibraryCurationTest {
                 continue;
             }
             if (key.equals("memory-supplier-classification") || key.equals("echa-registration-dossier")
-                    || key.equals("wikipedia-infobox")) {
+                    || key.equals("wikipedia-infobox") || key.equals("dewiki-infobox")) {
                 if (!r.get("note").contains("supplier self-classification, check the SDS")) {
                     bad.add(r.get("name") + ": self-classified without the SDS caution in its note");
                 }
