@@ -98,9 +98,10 @@ HAZARD_BASIS_KEYS = {"harmonised": "memory-clp-annex-vi", "self": "memory-suppli
                      "dewiki-checked": "dewiki-infobox",
                      # the GHS box of an English Wikipedia infobox, read from a copy; its source is not named there, so
                      # the list is treated as a self-classification (the note keeps the SDS caution)
-                     "wikipedia-checked": "wikipedia-infobox"}
+                     "wikipedia-checked": "wikipedia-infobox",
+                     "frwiki-checked": "frwiki-infobox"}
 # bases that are self-classifications (no harmonised CLP Annex VI entry): their note carries the SDS caution
-SELF_BASES = {"self", "registrant-checked", "wikipedia-checked", "dewiki-checked"}
+SELF_BASES = {"self", "registrant-checked", "wikipedia-checked", "dewiki-checked", "frwiki-checked"}
 SELF_CLASSIFICATION_NOTE = "hazard statements: supplier self-classification, check the SDS"
 # The manual note that says a solvent carries no hazard statement because it is not classified (not because none is known).
 NOT_CLASSIFIED_NOTE = "not classified as hazardous"

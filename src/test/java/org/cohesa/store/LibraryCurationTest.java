@@ -240,7 +240,7 @@ class LibraryCurationTest {
                 continue;
             }
             if (key.equals("memory-supplier-classification") || key.equals("echa-registration-dossier")
-                    || key.equals("wikipedia-infobox") || key.equals("dewiki-infobox")) {
+                    || key.equals("wikipedia-infobox") || key.equals("dewiki-infobox") || key.equals("frwiki-infobox")) {
                 if (!r.get("note").contains("supplier self-classification, check the SDS")) {
                     bad.add(r.get("name") + ": self-classified without the SDS caution in its note");
                 }
@@ -299,6 +299,10 @@ class LibraryCurationTest {
         assertEquals(Set.of("H302", "H312", "H332", "H314", "H335", "H412"), Set.of(solvent("141-43-5").get("hazard_statements").split(" ")));
         assertEquals(Set.of("H226", "H302", "H312", "H332", "H315", "H318"), Set.of(solvent("108-94-1").get("hazard_statements").split(" ")));
         assertEquals("gischem", solvent("108-94-1").get("src_hazard_statements"));
+        // 1,3-dimethyl-2-imidazolidinone had no statements; the French Wikipedia infobox (stored copy) gives H302, H318,
+        // H361, H373, kept as a self-classification with the SDS caution.
+        assertEquals(Set.of("H302", "H318", "H361", "H373"), Set.of(solvent("80-73-9").get("hazard_statements").split(" ")));
+        assertTrue(solvent("80-73-9").get("note").contains("supplier self-classification, check the SDS"));
         annexVi.forEach((cas, codes) -> {
             assertEquals(codes, Set.of(solvent(cas).get("hazard_statements").split(" ")), cas);
             assertEquals("clp-annex-vi-checked", solvent(cas).get("src_hazard_statements"), cas);
