@@ -20,6 +20,7 @@ import org.cohesa.core.blend.MeasuredFirstPhaseCheck;
 import org.cohesa.core.blend.PhaseCheck;
 import org.cohesa.core.blend.RankBy;
 import org.cohesa.core.blend.ReactiveFlag;
+import org.cohesa.core.blend.SoluteCharacter;
 import org.cohesa.core.blend.WaterCheck;
 import org.cohesa.core.activity.WaterMiscibility;
 import org.cohesa.core.activity.WaterSolubilityTable;
@@ -76,6 +77,11 @@ public final class BlendModel {
     public final StringProperty minBlendFlash = new SimpleStringProperty("");
     /** Let ICH Q3C class 1 solvents take part (left out by default, as on the command line). */
     public final BooleanProperty allowIchClass1 = new SimpleBooleanProperty(false);
+    /**
+     * Let amine solvents take part for an acidic material and carboxylic acids for a basic one (left out by default,
+     * as on the command line without {@code --allow-salt-formers}: they form a salt with it, they do not dissolve it).
+     */
+    public final BooleanProperty allowSaltFormers = new SimpleBooleanProperty(false);
     private final StringProperty searchNote = new SimpleStringProperty("");
     private final ObservableList<String> leftOutBySafety = FXCollections.observableArrayList();
     private final ObservableList<Row> rows = FXCollections.observableArrayList();
@@ -151,6 +157,7 @@ public final class BlendModel {
         m.put("ich", maxIchClass.get());
         m.put("allow-ich-class-1", String.valueOf(allowIchClass1.get()));
         m.put("no-cmr", String.valueOf(noCmr.get()));
+        m.put("allow-salt-formers", String.valueOf(allowSaltFormers.get()));
         m.put("max-cost", maxCost.get());
         m.put("red-limit", redLimit.get());
         m.put("temperature", temperatureC.get());
@@ -200,6 +207,9 @@ public final class BlendModel {
         }
         if (m.get("no-cmr") != null) {
             noCmr.set(Boolean.parseBoolean(m.get("no-cmr")));
+        }
+        if (m.get("allow-salt-formers") != null) {
+            allowSaltFormers.set(Boolean.parseBoolean(m.get("allow-salt-formers")));
         }
         if (m.get("exclude-reactive") != null) {
             java.util.Set<String> on = java.util.Set.of(m.get("exclude-reactive").split(","));
@@ -258,7 +268,8 @@ public final class BlendModel {
             throw new InvalidInputException("target", "", "set a target first (target screen: pick a material, fit or type in a sphere)");
         }
         SolventLibrary lib = new SolventLibrary(List.copyOf(session.solvents()));
-        BlendConstraints c = constraints(lib);
+        Set<SoluteCharacter> character = soluteCharacter();
+        BlendConstraints c = forSolute(constraints(lib), character);
         int k = maxComponents.get();
         if (c.fixed().size() >= k) {
             throw new InvalidInputException("most components", String.valueOf(k), "must exceed the number of fixed components");
@@ -270,6 +281,7 @@ public final class BlendModel {
         CancellationToken token = new CancellationToken();
         cancel = token;
         Object[] notes = new Object[2];
+        boolean allowed = allowSaltFormers.get();
         WaterCheck water = waterCheck(lib, c.more().withWater());
         session.jobs().run("Searching blends", p -> {
             Thread watcher = new Thread(() -> {
@@ -291,7 +303,9 @@ public final class BlendModel {
                         (done, total) -> p.update(total == 0 ? -1 : 0.9 * done / (double) total, null), token);
                 List<Row> out = new ArrayList<>();
                 notes[0] = SearchNotes.summary(r, c);
-                notes[1] = SearchNotes.safetyDefaults(r.pool());
+                List<String> defaults = new ArrayList<>(SearchNotes.safetyDefaults(r.pool()));
+                defaults.addAll(SearchNotes.saltFormers(r.pool(), target.name(), character, allowed));
+                notes[1] = defaults;
                 int i = 1;
                 for (BlendSuggestion s : r.suggestions()) {
                     if (p.isCancelled()) {
@@ -323,6 +337,24 @@ public final class BlendModel {
                 then.run();
             }
         });
+    }
+
+    /** The target's acid–base character from its structure, as the command line reads a material's (empty: none or unknown). */
+    public Set<SoluteCharacter> soluteCharacter() {
+        return TargetStructure.characterOf(session.target(), List.copyOf(session.materials()));
+    }
+
+    /** True when a structure is known for the target (so "neither acidic nor basic" means something). */
+    public boolean targetHasStructure() {
+        return TargetStructure.hasStructure(session.target(), List.copyOf(session.materials()));
+    }
+
+    /**
+     * The constraints with the solvents that form a salt with the material left out, unless the switch allows them:
+     * the same core rule as the command line's (BlendConstraints.More.withSolute, applied by CandidatePool).
+     */
+    BlendConstraints forSolute(BlendConstraints c, Set<SoluteCharacter> character) {
+        return allowSaltFormers.get() || character.isEmpty() ? c : c.with(c.more().withSolute(character));
     }
 
     /** The two-phase test: published mutual solubilities with water first, the activity model elsewhere (as the command line). */

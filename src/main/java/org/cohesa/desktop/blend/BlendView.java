@@ -56,6 +56,7 @@ public final class BlendView {
     private final Consumer<Blend> showDrying;
     private final Node limits;
     private Runnable afterSearch;
+    private final TradeOffChart tradeOffs;
 
     /** @param showDrying opens the drying screen for a blend */
     public BlendView(BlendModel model, Consumer<Blend> showDrying) {
@@ -112,9 +113,15 @@ public final class BlendView {
         comparison.setId("blend-comparison");
         comparison.setPlaceholder(new Label("Select up to four suggestions (Ctrl+click) and press Compare."));
         TableTools.equip(comparison, () -> { });
-        right.getTabs().addAll(new Tab("Safety profile", profile), new Tab("Side by side", comparison));
+        tradeOffs = new TradeOffChart(model.rows(), table.getSelectionModel().selectedItemProperty(), r -> {
+            table.getSelectionModel().clearAndSelect(model.rows().indexOf(r));
+            table.scrollTo(r);
+        });
+        Tab tradeTab = new Tab("Trade-offs", tradeOffs.node());
+        tradeTab.setId("blend-tradeoff-tab");
+        right.getTabs().addAll(new Tab("Safety profile", profile), tradeTab, new Tab("Side by side", comparison));
         right.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
-        right.getTabs().get(1).setId("blend-compare-tab");
+        right.getTabs().get(2).setId("blend-compare-tab");
         Label note = new Label();
         note.setId("blend-search-note");
         note.setWrapText(true);
@@ -127,7 +134,7 @@ public final class BlendView {
         defaults.setWrapText(true);
         defaults.getStyleClass().add("left-out");
         Runnable showDefaults = () -> defaults.setText(model.leftOutBySafety().isEmpty() ? ""
-                : "Left out by the safety defaults:\n" + model.leftOutBySafety().stream().map(x -> "• " + x).collect(Collectors.joining("\n")));
+                : "Left out by the defaults:\n" + model.leftOutBySafety().stream().map(x -> "• " + x).collect(Collectors.joining("\n")));
         model.leftOutBySafety().addListener((javafx.collections.ListChangeListener<String>) ch -> showDefaults.run());
         defaults.setMaxHeight(74); // four lines; the whole list is the tooltip
         Runnable tip = () -> defaults.setTooltip(model.leftOutBySafety().isEmpty() ? null : new javafx.scene.control.Tooltip(defaults.getText()));
@@ -136,6 +143,7 @@ public final class BlendView {
         defaults.managedProperty().bind(defaults.visibleProperty());
         Button choose = new Button("C_hoose for checks");
         choose.setId("blend-choose");
+        choose.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         choose.disableProperty().bind(table.getSelectionModel().selectedItemProperty().isNull());
         choose.setOnAction(e -> {
             if (onChoose != null) {
@@ -152,6 +160,16 @@ public final class BlendView {
         javafx.scene.layout.VBox.setVgrow(table, javafx.scene.layout.Priority.ALWAYS);
         SplitPane split = new SplitPane(cardsBox, right);
         split.setDividerPositions(0.66);
+        // the chart needs room: while its tab is in front the panel takes more of the width, and gives it back after
+        double[] cardsShare = {0.66};
+        right.getSelectionModel().selectedItemProperty().addListener((o, was, now) -> {
+            if (now == tradeTab) {
+                cardsShare[0] = split.getDividers().get(0).getPosition();
+                split.setDividerPositions(Math.min(cardsShare[0], 0.52));
+            } else if (was == tradeTab) {
+                split.setDividerPositions(cardsShare[0]);
+            }
+        });
         root.setCenter(split);
     }
 
@@ -168,6 +186,16 @@ public final class BlendView {
     /** What runs once a search started from the form has its candidates (the case moves on to them). */
     public void onSearched(Runnable action) {
         this.afterSearch = action;
+    }
+
+    /** The trade-off chart of the candidates (RED, hazard, cost). */
+    public TradeOffChart tradeOffs() {
+        return tradeOffs;
+    }
+
+    /** Brings the trade-off chart to the front of the right-hand panel. */
+    public void showTradeOffs() {
+        right.getTabs().stream().filter(t -> "blend-tradeoff-tab".equals(t.getId())).findFirst().ifPresent(t -> right.getSelectionModel().select(t));
     }
 
     private Consumer<List<BlendModel.Row>> onChoose;
@@ -278,6 +306,18 @@ public final class BlendView {
             reactive.getChildren().add(box);
         }
         g.add(reactive, 0, row++, 2, 1);
+        CheckBox salt = new CheckBox("Allow salt formers (amines with an acidic material, acids with a basic one)");
+        salt.setId("blend-allow-salt-formers");
+        salt.setWrapText(true);
+        salt.selectedProperty().bindBidirectional(model.allowSaltFormers);
+        g.add(salt, 0, row++, 2, 1);
+        Label character = new Label();
+        character.setId("blend-solute-character");
+        character.setWrapText(true);
+        character.getStyleClass().add("hint");
+        character.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(this::characterText,
+                model.session().targetProperty(), model.session().materials()));
+        g.add(character, 0, row++, 2, 1);
         g.addRow(row++, new Label("Maximum cost per litre"), field(model.maxCost, "blend-max-cost"));
         g.addRow(row++, new Label("RED limit"), field(model.redLimit, "blend-red-limit"));
         g.addRow(row++, new Label("Temperature (°C)"), field(model.temperatureC, "blend-temperature"));
@@ -309,6 +349,20 @@ public final class BlendView {
         sp.setFitToWidth(true);
         sp.setMinWidth(370);
         return sp;
+    }
+
+    /** What the target's structure says about salt formation, beside the switch. */
+    private String characterText() {
+        if (model.session().target() == null) {
+            return "";
+        }
+        var character = model.soluteCharacter();
+        if (!character.isEmpty()) {
+            return model.session().target().name() + " is " + character.stream().map(c -> c.word() + " (" + c.why() + ")")
+                    .collect(Collectors.joining(" and ")) + " by its structure.";
+        }
+        return model.targetHasStructure() ? "By its structure " + model.session().target().name() + " is neither acidic nor basic."
+                : "No structure is known for this target, so salt formers cannot be recognised.";
     }
 
     private static TextField field(javafx.beans.property.StringProperty p, String id) {
