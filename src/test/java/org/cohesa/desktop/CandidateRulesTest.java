@@ -209,6 +209,10 @@ class CandidateRulesTest {
         robot.interact(() -> cards.getSelectionModel().clearAndSelect(0));
         assertTrue(chart.tileOf(rows.get(0).rank()).getStyleClass().contains("tradeoff-tile-selected"));
         assertFalse(lastTile.getStyleClass().contains("tradeoff-tile-selected"));
+        // the screenshot shows a candidate of the front picked on the chart, its card scrolled into view
+        robot.clickOn(chart.tileOf(expected.iterator().next()));
+        org.testfx.util.WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(expected.iterator().next(), cards.getSelectionModel().getSelectedItem().rank());
         screenshot(robot, "candidates-tradeoffs-1280x800");
 
         // with a price on every solvent, cost joins the front and gets its own chart (prices invented for the test)

@@ -199,6 +199,7 @@ public final class TradeOffChart {
     private StackPane tile(BlendModel.Row r, ParetoFront.Point p, boolean front) {
         Label n = new Label(String.valueOf(r.rank()));
         n.getStyleClass().add("tradeoff-rank");
+        n.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE); // a number is never shortened to "…"
         // a beaten candidate is a small open ring (its number shows when it is selected), so the front stands out
         show(n, front);
         StackPane t = new StackPane(n);
@@ -275,6 +276,9 @@ public final class TradeOffChart {
                 }
             }
         }));
+        // the marks changed size: the charts place them again
+        hazardChart.requestLayout();
+        costChart.requestLayout();
     }
 
     private static Node legendEntry(boolean front, String text) {
