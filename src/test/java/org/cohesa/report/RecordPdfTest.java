@@ -92,7 +92,7 @@ class RecordPdfTest {
         assertTrue(text.contains("dD, dP, dH"), text);
         assertFalse(text.contains("δ"), "Helvetica cannot encode δ");
         for (String fact : List.of("REJECTED", "1,4-dioxane 30 % + water 70 %", "ethanol", "drying too slow in the pilot coater",
-                "M. Manager", "H351")) {   // 1,4-dioxane: Carc. 2, H351 (CLP Annex VI, as carried by the bundled table)
+                "M. Manager", "H350")) {   // 1,4-dioxane: Carc. 1B, H350 (CLP Annex VI index 603-024-00-5 as given by SUBSPORT+ case 264-EN, carried by the bundled table)
             assertTrue(text.contains(fact), "missing '" + fact + "' in\n" + text);
         }
     }
