@@ -8,6 +8,7 @@ import java.util.Map;
 import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.activity.ActivityModel;
 import org.cohesa.core.activity.ActivityModels;
+import org.cohesa.core.activity.CoexistingLiquids;
 import org.cohesa.core.activity.Composition;
 import org.cohesa.core.safety.SafetyProfile.FlashPoint;
 import org.cohesa.core.safety.SafetyProfile.FlashPointStatus;
@@ -81,6 +82,10 @@ public final class SafetyProfiler {
         } else {
             try {
                 model = ActivityModels.choose(solvents, ideal);
+                if (n == 2 && !ideal) {
+                    // inside the model's own miscibility gap the vapour is that of the coexisting layers
+                    model = new CoexistingLiquids(model);
+                }
             } catch (IllegalArgumentException e) {
                 modelProblem = e.getMessage();
             }
@@ -147,6 +152,15 @@ public final class SafetyProfiler {
                 }
                 if (!inert.isEmpty()) {
                     notes.add("treated as non-flammable (no flash point in the library and no flammable-liquid H-statement): " + String.join(", ", inert));
+                }
+                if (r.hasFlashPoint() && model instanceof CoexistingLiquids two) {
+                    java.util.Optional<org.cohesa.core.activity.BinaryLle.Phases> layers = two.splitAt(x, r.kelvin());
+                    if (layers.isPresent()) {
+                        notes.add(String.format(java.util.Locale.ROOT,
+                                "two liquid layers predicted at the flash point (%s: %s mole fraction %.3g and %.3g): the vapour is that over the"
+                                        + " coexisting layers, so the estimate is the same throughout the gap (Liaw et al. 2008)",
+                                two.name(), names.get(0), layers.get().x1Lean(), layers.get().x1Rich()));
+                    }
                 }
                 String m = FLASH_METHOD + ", activity model: " + modelName;
                 if (r.hasFlashPoint()) {

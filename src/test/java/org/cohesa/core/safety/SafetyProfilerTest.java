@@ -120,4 +120,30 @@ class SafetyProfilerTest {
         assertEquals("temperature", e.field());
         assertFalse(e.getMessage().isBlank());
     }
+
+    @Test
+    void insideTheModelsMiscibilityGapTheFlashPointIsTheSameAtEveryComposition() {
+        // Methanol and n-heptane are only partly miscible near room temperature (common practice, no source). Over a
+        // two-liquid mixture in equilibrium the vapour is that of either layer, so the flash point is constant across
+        // the gap (Liaw, Lu, Gerbaud & Chen, J. Hazard. Mater. 153 (2008) 1165; from memory) — the phase rule: at fixed
+        // pressure a two-phase binary has one degree of freedom left, temperature.
+        double[] inGap = {0.1, 0.2, 0.5, 0.8};
+        double first = Double.NaN;
+        for (double f : inGap) {
+            SafetyProfile p = SafetyProfiler.profile(blend("methanol", f, "n-heptane"), 298.15);
+            assertEquals(SafetyProfile.FlashPointStatus.COMPUTED, p.flashPoint().status(), p.flashPoint().detail().toString());
+            assertTrue(p.flashPoint().detail().stream().anyMatch(d -> d.contains("two liquid layers")), p.flashPoint().detail().toString());
+            if (Double.isNaN(first)) {
+                first = p.flashPoint().celsius();
+            }
+            assertEquals(first, p.flashPoint().celsius(), 0.05, "flash point at " + f + " methanol by volume");
+        }
+        // below both pure flash points (minimum-flash-point behaviour; the library has methanol 9 °C, n-heptane −7 °C)
+        double lowestPure = Math.min(LIB.resolve("s", "methanol").flashPointC(), LIB.resolve("s", "n-heptane").flashPointC());
+        assertTrue(first < lowestPure, first + " °C against " + lowestPure + " °C");
+        // outside the gap the one-liquid calculation stands and says nothing of layers
+        SafetyProfile rich = SafetyProfiler.profile(blend("methanol", 0.97, "n-heptane"), 298.15);
+        assertFalse(rich.flashPoint().detail().stream().anyMatch(d -> d.contains("two liquid layers")), rich.flashPoint().detail().toString());
+        assertTrue(rich.flashPoint().celsius() > first + 1, "nearly pure methanol flashes higher than the two-layer mixture");
+    }
 }
