@@ -210,6 +210,74 @@ class Space3DViewTest {
         assertTrue(exact >= 0.7 * inside, exact + " of " + inside + " lone points inside the target show their palette colour exactly");
     }
 
+    /**
+     * The scene is scaled to its frame by the data (the points and the target), not by the empty box around them: in the
+     * wide frame of the window the data reach the margin on the limiting side; and the axis titles, wherever the turn
+     * puts their axis' end, stay inside the frame, clear of each other, the points, the target and the tick values.
+     */
+    @Test
+    void theDataFillTheFrameAndTheAxisTitlesKeepClear(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        robot.interact(() -> {
+            fx.workbench.show(Screen.SPACE);
+            fx.session.targetProperty().set(new TargetChoice("test sphere", SolubilitySphere.of(18, 8, 7, 6), "test"));
+        });
+        Space3DView view = fx.workbench.spaceView().view3d();
+        Canvas canvas = robot.lookup("#space3d").queryAs(Canvas.class);
+        for (double[] turn : new double[][] {{0, 0}, {115, 18}, {-60, 30}, {200, -25}}) {
+            robot.interact(() -> {
+                view.resetView();
+                view.rotateBy(turn[0], turn[1]);
+                view.fitToFrame();
+            });
+            double w = canvas.getWidth();
+            double h = canvas.getHeight();
+            double minX = Double.MAX_VALUE;
+            double maxX = -Double.MAX_VALUE;
+            double minY = Double.MAX_VALUE;
+            double maxY = -Double.MAX_VALUE;
+            List<double[]> discs = onFx(robot, view::drawnDiscs);
+            for (double[] d : discs) {
+                minX = Math.min(minX, d[0]);
+                maxX = Math.max(maxX, d[0]);
+                minY = Math.min(minY, d[1]);
+                maxY = Math.max(maxY, d[1]);
+            }
+            Point2D c = onFx(robot, view::pivotScreenPosition);
+            double r = onFx(robot, view::targetScreenRadius);
+            minX = Math.min(minX, c.getX() - r);
+            maxX = Math.max(maxX, c.getX() + r);
+            minY = Math.min(minY, c.getY() - r);
+            maxY = Math.max(maxY, c.getY() + r);
+            double margin = 48;
+            double fill = Math.max((maxX - minX) / (w - 2 * margin), (maxY - minY) / (h - 2 * margin));
+            // common practice, no source: a fitted picture touches the margin on its limiting side (2 % for the disc
+            // centres against the cage's outline and the mild perspective)
+            assertTrue(fill > 0.9 && fill < 1.02, "the data fill " + fill + " of the frame " + w + "×" + h + " after " + Arrays.toString(turn));
+            assertTrue(minX >= 0 && maxX <= w && minY >= 0 && maxY <= h, "all data inside after " + Arrays.toString(turn));
+            List<Space3DView.PlacedLabel> shown = onFx(robot, view::visibleLabels);
+            List<Space3DView.PlacedLabel> titles = shown.stream().filter(l -> l.kind().equals("title")).toList();
+            assertEquals(3, titles.size());
+            for (Space3DView.PlacedLabel t : titles) {
+                assertTrue(t.x() >= 0 && t.y() >= 0 && t.x() + t.width() <= w && t.y() + t.height() <= h,
+                        t.text() + " inside the frame after " + Arrays.toString(turn));
+                for (Space3DView.PlacedLabel o : shown) {
+                    boolean overlap = o != t && t.x() < o.x() + o.width() && o.x() < t.x() + t.width() && t.y() < o.y() + o.height()
+                            && o.y() < t.y() + t.height();
+                    assertFalse(overlap, t.text() + " overlaps " + o.text() + " after " + Arrays.toString(turn));
+                }
+                for (double[] d : discs) {
+                    double nx = Math.max(t.x(), Math.min(d[0], t.x() + t.width()));
+                    double ny = Math.max(t.y(), Math.min(d[1], t.y() + t.height()));
+                    assertTrue(Math.hypot(nx - d[0], ny - d[1]) >= d[2], t.text() + " covers a point after " + Arrays.toString(turn));
+                }
+                double nx = Math.max(t.x(), Math.min(c.getX(), t.x() + t.width()));
+                double ny = Math.max(t.y(), Math.min(c.getY(), t.y() + t.height()));
+                assertTrue(Math.hypot(nx - c.getX(), ny - c.getY()) >= r, t.text() + " covers the target after " + Arrays.toString(turn));
+            }
+        }
+    }
+
     private static <T> T onFx(FxRobot robot, java.util.function.Supplier<T> s) {
         Object[] out = new Object[1];
         robot.interact(() -> out[0] = s.get());

@@ -128,7 +128,7 @@ class WorkflowTest {
         });
         assertNotNull(fx.session.target());
         assertEquals(picked.name(), fx.session.target().name());
-        assertTrue(robot.lookup("#target-current").queryAs(Label.class).getText().startsWith(picked.name()));
+        assertTrue(robot.lookup("#target-current").queryAs(Label.class).getText().startsWith("✓ " + picked.name()));
         assertTrue(robot.lookup("#status-target").queryAs(Label.class).getText().contains(picked.name()));
 
         // blend search: two components at most keeps the test quick

@@ -499,6 +499,7 @@ public final class Space3DView {
             // beside the vertical axis on the screen, whatever the angle, so the axis never runs through the number
             anchors.add(new Anchor(Numbers.plain(h), "tick", x0 - pivot[0], h - pivot[1], -r.pMin() - pivot[2], -1));
         }
+        axisOrigin = new double[] {x0 - pivot[0], r.hMin() - pivot[1], -r.pMin() - pivot[2]};
         anchor((k == 2 ? "2δD" : "δD") + " (MPa½)", "title", x1 + 6, r.hMin(), r.pMin() - 3);
         anchor("δP (MPa½)", "title", x0 - 3, r.hMin(), r.pMax() + 5);
         anchor("δH (MPa½)", "title", x0, r.hMax() + 4, r.pMin());
@@ -552,31 +553,36 @@ public final class Space3DView {
         kinds.add(SegmentKind.CAGE);
     }
 
+    /** The corner the three axes start from, relative to the pivot. */
+    private double[] axisOrigin = {0, 0, 0};
+
     private void anchor(String text, String kind, double x, double h, double p) {
         anchors.add(new Anchor(text, kind, x - pivot[0], h - pivot[1], -p - pivot[2], 0));
     }
 
     /**
-     * The scale and offset that fit the box, the points, the target and the axis titles into the frame at the current
-     * angle, with {@link #MARGIN} pixels free on each side.
+     * The scale and offset that fit the points and the target into the frame at the current angle, with {@link #MARGIN}
+     * pixels free on each side (the box alone when there is neither).
      */
     private OrbitProjection.Fit fitFrame() {
         OrbitProjection o = projection();
         double[] b = {Double.MAX_VALUE, -Double.MAX_VALUE, Double.MAX_VALUE, -Double.MAX_VALUE};
         AxisRanges r = model.rangesProperty().get();
         double k = model.doubledDdProperty().get() ? 2 : 1;
-        for (double[] c : boxCorners(r, k)) {
-            grow(b, o, c[0], c[1], c[2]);
-        }
+        // the data decide the scale: the points and the target's cage; the box, its grid and the axis titles may reach past
+        // the frame (the titles are then placed on the visible part of their axis, see placeTitle)
         for (int i = 0; i < points.size(); i++) {
             grow(b, o, pointXyz[3 * i], pointXyz[3 * i + 1], pointXyz[3 * i + 2]);
         }
         for (int i = 0; i < segKind.length; i++) {
-            grow(b, o, segXyz[6 * i], segXyz[6 * i + 1], segXyz[6 * i + 2]);
+            if (segKind[i] == SegmentKind.CAGE) {
+                grow(b, o, segXyz[6 * i], segXyz[6 * i + 1], segXyz[6 * i + 2]);
+                grow(b, o, segXyz[6 * i + 3], segXyz[6 * i + 4], segXyz[6 * i + 5]);
+            }
         }
-        for (Anchor a : anchors) {
-            if (a.kind().equals("title")) {
-                grow(b, o, a.x(), a.y(), a.z());
+        if (b[0] > b[1]) { // nothing to show: the box
+            for (double[] c : boxCorners(r, k)) {
+                grow(b, o, c[0], c[1], c[2]);
             }
         }
         double w = Math.max(1, canvas.getWidth());
@@ -865,17 +871,80 @@ public final class Space3DView {
                 }
                 double th = title ? 17 : 15;
                 PlacedLabel l = new PlacedLabel(a.text(), kind, x - tw / 2, y - th / 2, tw, th);
-                if (!title) {
-                    boolean clash = shown.stream().anyMatch(l::overlaps) || coversPoint(l)
+                if (title) {
+                    l = placeTitle(a, l, o, s, ox, oy, piv, cageR);
+                } else {
+                    boolean clash = shown.stream().anyMatch(l::overlaps) || coversPoint(l) || outside(l)
                             || (cageR > 0 && l.touchesDisc(piv.getX(), piv.getY(), cageR + 2));
                     if (clash) {
                         continue;
                     }
                 }
                 shown.add(l);
-                g.fillText(a.text(), x, y);
+                g.fillText(a.text(), l.x() + l.width() / 2, l.y() + l.height() / 2);
             }
         }
+    }
+
+    /**
+     * Where an axis title goes: at its axis' end when that is inside the frame and clear, else slid back along the axis
+     * towards the corner it starts from, and a little to either side of it, to the first place inside the frame that
+     * covers no other title, no point and not the target; failing that, the nearest such place around the axis' end;
+     * failing that, the first place inside the frame, else the end pulled into the frame.
+     */
+    private PlacedLabel placeTitle(Anchor a, PlacedLabel atEnd, OrbitProjection o, double s, double ox, double oy, Point2D piv, double cageR) {
+        double[] t0 = o.turn(axisOrigin[0], axisOrigin[1], axisOrigin[2]);
+        double f0 = o.perspective(t0[2]);
+        double sx0 = ox + s * t0[0] * f0;
+        double sy0 = oy - s * t0[1] * f0;
+        double ex = atEnd.x() + atEnd.width() / 2;
+        double ey = atEnd.y() + atEnd.height() / 2;
+        double len = Math.max(1, Math.hypot(ex - sx0, ey - sy0));
+        double nx = -(ey - sy0) / len; // the axis' normal on the screen
+        double ny = (ex - sx0) / len;
+        double w = atEnd.width();
+        double h = atEnd.height();
+        PlacedLabel firstInside = null;
+        for (double along = 1.0; along >= 0.3; along -= 0.05) {
+            for (double side : new double[] {0, 1, -1, 2, -2}) {
+                double cx = sx0 + along * (ex - sx0) + side * nx * (h + 2);
+                double cy = sy0 + along * (ey - sy0) + side * ny * (h + 2);
+                PlacedLabel c = new PlacedLabel(a.text(), "title", cx - w / 2, cy - h / 2, w, h);
+                if (outside(c)) {
+                    continue;
+                }
+                if (firstInside == null) {
+                    firstInside = c;
+                }
+                boolean clash = shown.stream().anyMatch(c::overlaps) || coversPoint(c)
+                        || (cageR > 0 && c.touchesDisc(piv.getX(), piv.getY(), cageR + 2));
+                if (!clash) {
+                    return c;
+                }
+            }
+        }
+        // no clear place by the axis: the nearest clear place around its end (rings 12 px apart), still beside the axis
+        double endX = Math.max(w / 2 + 3, Math.min(canvas.getWidth() - w / 2 - 3, ex));
+        double endY = Math.max(h / 2 + 3, Math.min(canvas.getHeight() - h / 2 - 3, ey));
+        for (double rad = 12; rad <= 360; rad += 12) {
+            for (int k = 0; k < 24; k++) {
+                double ang = 2 * Math.PI * k / 24;
+                double cx = endX + rad * Math.cos(ang);
+                double cy = endY + rad * Math.sin(ang);
+                PlacedLabel c = new PlacedLabel(a.text(), "title", cx - w / 2, cy - h / 2, w, h);
+                if (outside(c) || shown.stream().anyMatch(c::overlaps) || coversPoint(c)
+                        || (cageR > 0 && c.touchesDisc(piv.getX(), piv.getY(), cageR + 2))) {
+                    continue;
+                }
+                return c;
+            }
+        }
+        if (firstInside != null) {
+            return firstInside;
+        }
+        double cw = canvas.getWidth();
+        double ch = canvas.getHeight();
+        return new PlacedLabel(a.text(), "title", Math.max(3, Math.min(cw - w - 3, atEnd.x())), Math.max(3, Math.min(ch - h - 3, atEnd.y())), w, h);
     }
 
     private double textWidth(String text, Font font) {

@@ -82,8 +82,9 @@ public final class TargetView {
         current.setId("target-current");
         current.getStyleClass().add("headline");
         current.setWrapText(true);
-        current.textProperty().bind(Bindings.createStringBinding(() -> describe(model.session().target()),
-                model.session().targetProperty()));
+        current.setMinHeight(Region.USE_PREF_SIZE);
+        current.textProperty().bind(Bindings.createStringBinding(() -> (model.session().target() == null ? "○ " : "✓ ")
+                + describe(model.session().target()), model.session().targetProperty()));
         javafx.scene.control.TabPane ways = new javafx.scene.control.TabPane(
                 new javafx.scene.control.Tab("Material", materialPicker()),
                 new javafx.scene.control.Tab("Fit your tests", fitPane()),
@@ -91,15 +92,21 @@ public final class TargetView {
                 new javafx.scene.control.Tab("Type in", typedPane));
         ways.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
         ways.setId("target-ways");
+        ways.getStyleClass().add("material-ways"); // the way cards above choose the pane; the tab headers are hidden
         ways.getTabs().get(1).setId("target-fit-tab");
         ways.getTabs().get(2).setId("target-structure-tab");
-        // the drawing and the estimate table need room: the side widens while that tab is open
-        ways.getSelectionModel().selectedIndexProperty().addListener((o, a, i) -> side.setPrefWidth(i.intValue() == 2 ? 660 : 390));
+        // the test table, the drawing and the estimate table need room: the side widens while their pane is open
+        ways.getSelectionModel().selectedIndexProperty().addListener((o, a, i) -> side.setPrefWidth(switch (i.intValue()) {
+            case 1 -> 500;
+            case 2 -> 660;
+            default -> 390;
+        }));
         VBox.setVgrow(ways, Priority.ALWAYS);
-        side.getChildren().addAll(current, ways);
-        side.setPadding(new Insets(10));
+        side.getChildren().addAll(ways);
+        side.setPadding(new Insets(4, 10, 10, 10));
         side.setPrefWidth(390);
         side.setMinWidth(300);
+        root.setTop(stepHead(current, ways));
 
         table.setId("target-ranking");
         SortedList<TargetModel.Ranked> sorted = new SortedList<>(model.ranked());
@@ -147,6 +154,54 @@ public final class TargetView {
         right.setBottom(findings(report));
         root.setLeft(side);
         root.setCenter(right);
+    }
+
+    /** The four ways to the case's material, as cards that say what each takes. */
+    static final String[][] WAYS = {
+        {"Pick from the library", "a published sphere (polymers, resins, drugs, pigments) or one you kept"},
+        {"Fit from your tests", "dissolves / does not, one row per liquid: the sphere that explains them"},
+        {"Estimate from a structure", "a SMILES: the centre by group contribution, R0 a default until you test"},
+        {"Type in a sphere", "δD, δP, δH and R0 from a paper or another fit"}};
+
+    /** The step's head: what it answers, the material the case has (or that it has none), and the four ways to one. */
+    private Node stepHead(Label current, javafx.scene.control.TabPane ways) {
+        Label title = new Label("Material: what must dissolve");
+        title.getStyleClass().add("step-head");
+        javafx.scene.control.ToggleGroup group = new javafx.scene.control.ToggleGroup();
+        HBox cards = new HBox(8);
+        cards.setId("material-ways");
+        for (int i = 0; i < WAYS.length; i++) {
+            Label t = new Label((i + 1) + "  " + WAYS[i][0]);
+            t.getStyleClass().add("step-title");
+            Label d = new Label(WAYS[i][1]);
+            d.getStyleClass().add("step-text");
+            d.setWrapText(true);
+            javafx.scene.control.ToggleButton b = new javafx.scene.control.ToggleButton();
+            b.setGraphic(new VBox(2, t, d));
+            b.setToggleGroup(group);
+            b.setId("material-way-" + (i + 1));
+            b.getStyleClass().add("way");
+            b.setAlignment(Pos.TOP_LEFT);
+            b.setMaxWidth(Double.MAX_VALUE);
+            b.setPrefWidth(260);
+            b.setMinWidth(150);
+            b.setPrefHeight(54);
+            HBox.setHgrow(b, Priority.ALWAYS);
+            int index = i;
+            b.setOnAction(e -> {
+                ways.getSelectionModel().select(index);
+                b.setSelected(true); // a way stays chosen: clicking it again does not leave none
+            });
+            cards.getChildren().add(b);
+        }
+        Runnable mark = () -> ((javafx.scene.control.ToggleButton) cards.getChildren().get(ways.getSelectionModel().getSelectedIndex())).setSelected(true);
+        ways.getSelectionModel().selectedIndexProperty().addListener((o, a, i) -> mark.run());
+        mark.run();
+        VBox head = new VBox(6, new HBox(14, title, current), cards);
+        ((HBox) head.getChildren().get(0)).setAlignment(Pos.BASELINE_LEFT);
+        head.setPadding(new Insets(10, 10, 6, 10));
+        head.setId("material-head");
+        return head;
     }
 
     /** One row of the fit's findings: a misfit or a suggested next test. */
@@ -267,8 +322,9 @@ public final class TargetView {
         Button fit = new Button("_Fit sphere");
         fit.setId("fit-run");
         fit.setOnAction(e -> fitModel.fit(null));
-        Label help = new Label("One row per liquid: liquid (library name or NAME:FRACTION;NAME:FRACTION), score 1 dissolves, "
-                + "0 does not, between for partial; optional dD, dP, dH for liquids not in the library.");
+        Label help = new Label("One row per liquid tested: a library liquid (pick or type), a blend NAME:FRACTION;NAME:FRACTION, "
+                + "or a label with its δD, δP, δH; score 1 dissolves, 0 does not, between for partly. Paste rows from a "
+                + "spreadsheet with Ctrl+V.");
         help.setWrapText(true);
         help.getStyleClass().add("hint");
         Label nameLabel = new Label("Material name");
@@ -292,7 +348,19 @@ public final class TargetView {
         question.getStyleClass().add("question");
         question.visibleProperty().bind(fitModel.pendingProperty().isNotNull());
         question.managedProperty().bind(question.visibleProperty());
-        VBox box = new VBox(6, help, csv, new HBox(8, nameLabel, name), new HBox(8, load, fit, save), question);
+        javafx.collections.ObservableList<String> liquids = javafx.collections.FXCollections.observableArrayList();
+        Runnable names = () -> liquids.setAll(model.session().solvents().stream().map(x -> x.name())
+                .sorted(String.CASE_INSENSITIVE_ORDER).toList());
+        model.session().solvents().addListener((javafx.collections.ListChangeListener<org.cohesa.core.solvent.Solvent>) c -> names.run());
+        names.run();
+        TestTable tests = new TestTable(fitModel.csvProperty(), liquids);
+        testTable = tests;
+        javafx.scene.control.ToggleButton asText = new javafx.scene.control.ToggleButton("As text (CSV)");
+        asText.setId("fit-as-text");
+        csv.visibleProperty().bind(asText.selectedProperty());
+        csv.managedProperty().bind(csv.visibleProperty());
+        VBox box = new VBox(6, help, tests.node(), asText, csv, new HBox(8, nameLabel, name), new HBox(8, load, fit, save), question);
+        VBox.setVgrow(tests.node(), Priority.ALWAYS);
         box.setPadding(new Insets(8));
         return box;
     }
@@ -311,6 +379,13 @@ public final class TargetView {
     /** Extra panes (material picker, fit) added by later features, above the typed-in sphere. */
     public void addSection(Node section) {
         side.getChildren().add(1, section);
+    }
+
+    private TestTable testTable;
+
+    /** The fit's tests as a table (for tests). */
+    public TestTable testTable() {
+        return testTable;
     }
 
     public TableView<TargetModel.Ranked> table() {
