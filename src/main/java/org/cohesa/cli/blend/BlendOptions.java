@@ -94,7 +94,7 @@ public final class BlendOptions {
     @Option(names = "--weights", paramLabel = "NAME=W,...", description = "Expert: desirability weights hazard, components, cost, distance (e.g. hazard=2,components=1); unnamed ones keep the --prefer value.")
     String weights;
 
-    @Option(names = "--with-water", paramLabel = "miscible|immiscible", description = "How the blend must behave with water: immiscible (separates at 1:1, an extraction solvent) or miscible (one phase at every water content, a waterborne cosolvent); measured mutual solubilities first, the activity model elsewhere.")
+    @Option(names = "--with-water", paramLabel = "miscible|immiscible|any", description = "How the blend must behave with water: immiscible (separates at 1:1, an extraction solvent), miscible (one phase at every water content, a waterborne cosolvent) or any (no demand; replace otherwise keeps the original's own behaviour with water under --process as-original); measured mutual solubilities first, the activity model elsewhere.")
     String withWater;
 
     @Option(names = "--all", description = "Show the near-duplicates folded under each suggestion (same solvents but one, fractions within 5 %%).")
@@ -247,10 +247,39 @@ public final class BlendOptions {
             water = switch (withWater.strip().toLowerCase(Locale.ROOT)) {
                 case "miscible" -> WaterCheck.Need.MISCIBLE;
                 case "immiscible" -> WaterCheck.Need.IMMISCIBLE;
-                default -> throw new InvalidInputException("--with-water", withWater, "write miscible or immiscible");
+                case "any" -> null;
+                default -> throw new InvalidInputException("--with-water", withWater, "write miscible, immiscible or any");
             };
         }
         return c.with(new BlendConstraints.More(!allowIchClass1, unl.equals("keep"), List.of(), reactive, minBlendFlash, bb[0], bb[1], water));
+    }
+
+    /** True when the user chose the weights: a --prefer, or a --weights that names components. */
+    boolean preferenceNamed() {
+        return prefer != null || (weights != null && weights.toLowerCase(Locale.ROOT).contains("components"));
+    }
+
+    /** True when the user named a water demand (any included), so replace does not add the original's own. */
+    boolean waterDemandGiven() {
+        return withWater != null;
+    }
+
+    /** True when the process use is the original's (replace's default, or named). */
+    boolean processAsOriginal() {
+        return process == null || ProcessUse.parse("--process", process, true) == ProcessUse.AS_ORIGINAL;
+    }
+
+    /** How the solvent alone behaves with water (published mutual solubilities first, the LLE model elsewhere); null when it cannot be judged. */
+    static org.cohesa.core.activity.WaterBehaviour waterBehaviour(SolventLibrary lib, Solvent s, double kelvin) {
+        Solvent water = lib.all().stream().filter(WaterMiscibility::isWater).findFirst().orElse(null);
+        if (water == null || WaterMiscibility.isWater(s)) {
+            return null;
+        }
+        try {
+            return WaterMiscibility.withWater(List.of(s), new double[] {1.0}, water, kelvin, WaterMiscibilityCsv.bundled());
+        } catch (IllegalArgumentException e) {
+            return null;
+        }
     }
 
     /** The water judgement for --with-water: published mutual solubilities (solvent-db/water-miscibility.csv), else the LLE model. */

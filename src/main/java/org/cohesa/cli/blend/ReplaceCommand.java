@@ -17,6 +17,8 @@ import org.cohesa.core.blend.BlendDesigner;
 import org.cohesa.core.blend.BlendSuggestion;
 import org.cohesa.core.blend.Desirability;
 import org.cohesa.core.blend.HazardLimit;
+import org.cohesa.core.blend.WaterCheck;
+import org.cohesa.core.activity.WaterBehaviour;
 import org.cohesa.core.blend.ProcessUse;
 import org.cohesa.core.safety.FlammableLiquidClass;
 import org.cohesa.core.target.Material;
@@ -122,6 +124,22 @@ public final class ReplaceCommand extends CohesaSubcommand {
         int k = options.maxComponents();
         Reasons why = reasons(original);
         BlendConstraints c = options.forSolute(applyReasons(options.constraints(lib, original), why), mat);
+        // a substitute does the original's job: under the as-original use it must behave with water as the original does
+        // (separate for an extraction or work-up, mix for a water-miscible process; docs/methods.md)
+        String waterAsOriginal = null;
+        if (!options.waterDemandGiven() && options.processAsOriginal()) {
+            WaterBehaviour wb = BlendOptions.waterBehaviour(lib, original, options.kelvin());
+            WaterCheck.Need need = wb == null ? null : switch (wb.kind()) {
+                case IMMISCIBLE -> WaterCheck.Need.IMMISCIBLE;
+                case MISCIBLE -> WaterCheck.Need.MISCIBLE;
+                case PARTLY_MISCIBLE -> null;
+            };
+            if (need != null) {
+                c = c.with(c.more().withWater(need));
+                waterAsOriginal = "with water as the original: " + original.name() + " is " + wb.kind().label() + " with water ("
+                        + wb.detail() + "), so every suggestion must be too (--with-water any drops this, --process another use)";
+            }
+        }
         options.checkPricesExist(lib);
         if (c.fixed().size() >= k) {
             throw new InvalidInputException("--max-components", String.valueOf(k), "must exceed the number of fixed components (" + c.fixed().size() + ")");
@@ -152,6 +170,9 @@ public final class ReplaceCommand extends CohesaSubcommand {
                 ? "replaced for: nothing named, and " + original.name() + " carries no CMR, organ-damage or acute-toxicity statement; --because says what must improve"
                 : "replaced for: " + String.join("; ", replacedFor));
         out().println(BlendView.summary(r));
+        if (waterAsOriginal != null) {
+            out().println(waterAsOriginal);
+        }
         BlendView.header(out(), r, c, options, req.weights());
         TextTable t = new TextTable("", "solvent or blend (volume %)", "dD", "dP", "dH", "Ra to original", "RED", "score", "bp °C", "flash °C", "ICH",
                 "hazard statements", "phases");
@@ -184,11 +205,20 @@ public final class ReplaceCommand extends CohesaSubcommand {
      * the way the original does: its evaporation rate within a factor of 3 of the original's, docs/methods.md).
      */
     public static Desirability.Weights defaultWeights(Solvent original) {
-        return Desirability.DEFAULT.withProcess(ProcessUse.AS_ORIGINAL, ProcessUse.rate(original));
+        return Desirability.DEFAULT.withProcess(ProcessUse.AS_ORIGINAL, ProcessUse.rate(original)).withComponents(REPLACE_COMPONENTS);
     }
 
+    /**
+     * Weight of each component beyond the first when a single liquid is replaced and the user names no preference: 3, as much
+     * as a Category 1 flammability (blend's default 2). A process that ran on one liquid must recover and recycle it: a blend
+     * fractionates on distillation, so the recovered solvent is not the fresh one, and it needs its own specification and
+     * analytics (common practice in process chemistry, no source). Blends are still offered, after singles of similar merit.
+     */
+    public static final double REPLACE_COMPONENTS = 3;
+
     static Desirability.Weights replaceWeights(BlendOptions o, Solvent original) {
-        return o.weights(ProcessUse.AS_ORIGINAL, original);
+        Desirability.Weights w = o.weights(ProcessUse.AS_ORIGINAL, original);
+        return o.preferenceNamed() ? w : w.withComponents(REPLACE_COMPONENTS);
     }
 
     /** The reasons the user named, or by default the original's own health statements. */
@@ -208,7 +238,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
             }
         }
         if (given.isEmpty()) {
-            limits.addAll(HazardLimit.from(original, HazardLimit.DEFAULT_KINDS));
+            limits.addAll(HazardLimit.defaults(original));
         }
         for (String w : given) {
             List<String> kinds = HazardLimit.kindsOf("--because", w);

@@ -114,7 +114,7 @@ public final class HazardsCommand extends CohesaSubcommand {
             ich.row(l.component(), l.entry() == null ? "not listed" : l.entry().solventClass(), l.entry() == null ? null : Output.fmt(l.entry().pdeMgPerDay(), 1),
                     l.entry() == null ? null : Output.fmt(l.entry().limitPpm(), 0),
                     l.entry() == null ? "" : l.entry().basisText(),
-                    s.safety() + "/" + s.health() + "/" + s.environment(), s.rank().label());
+                    s.safety() + "/" + s.health() + "/" + s.environment(), s.rank().label() + (s.published() ? " (published)" : " (computed)"));
         }
         ich.print(o);
         o.println("  " + IchQ3c.VERSION + "; " + SolventGuide.METHOD);

@@ -61,7 +61,7 @@ record HazardsReport(
                @JsonProperty("limit_ppm") Double limitPpm, String basis) {
     }
 
-    record Guide(String name, int safety, int health, int environment, String rank, List<String> notes) {
+    record Guide(String name, int safety, int health, int environment, String rank, @JsonProperty("rank_basis") String rankBasis, List<String> notes) {
     }
 
     static HazardsReport of(SafetyProfile p, List<String> cautions) {
@@ -85,7 +85,7 @@ record HazardsReport(
                     e == null ? "not listed in the guideline" : e.basisText()));
         }
         List<Guide> g = p.guide().stream().map(l -> new Guide(l.component(), l.scores().safety(), l.scores().health(),
-                l.scores().environment(), l.scores().rank().label(), l.scores().notes())).toList();
+                l.scores().environment(), l.scores().rank().label(), l.scores().basis(), l.scores().notes())).toList();
         return new HazardsReport(p.blend().describe(), Output.round(p.temperatureC(), 2), Output.round(p.flashPoint().celsius(), 1),
                 p.flashPoint().status().name().toLowerCase(Locale.ROOT), p.flashPoint().model(), p.flashPoint().detail(),
                 Output.round(p.initialBoilingPointC(), 1), p.initialBoilingPointBasis(), p.ghs().category(),

@@ -77,6 +77,12 @@ public record BlendConstraints(
                     blendBoilingMaxC, withWater, characters);
         }
 
+        /** A copy with another water demand (null: none). */
+        public More withWater(WaterCheck.Need need) {
+            return new More(noIchClass1, ichUnlistedAllowed, healthLimits, excludeReactive, minBlendFlashPointC, blendBoilingMinC,
+                    blendBoilingMaxC, need, solute);
+        }
+
         /** Demands without a water demand. */
         public More(boolean noIchClass1, boolean ichUnlistedAllowed, List<HazardLimit> healthLimits, Set<ReactiveFlag> excludeReactive,
                 Double minBlendFlashPointC, Double blendBoilingMinC, Double blendBoilingMaxC) {

@@ -60,6 +60,11 @@ public final class Desirability {
             return new Weights(hazard, components, cost, distance, process, u, ref);
         }
 
+        /** The same weights with another components weight. */
+        public Weights withComponents(double w) {
+            return new Weights(hazard, w, cost, distance, process, use, reference);
+        }
+
         /** The same weights with another process weight. */
         public Weights withProcessWeight(double w) {
             return new Weights(hazard, components, cost, distance, w, use, reference);

@@ -17,7 +17,10 @@ import org.cohesa.core.solvent.Solvent;
  * H372 2, H373 1; acute toxicity, worst route, fatal (H300, H310, H330) 3, toxic (H301, H311, H331) 2, harmful
  * (H302, H312, H332) 1; aspiration H304 1; ozone layer H420 or EUH059 1. STOT SE category 3 (H335 respiratory
  * irritation, H336 drowsiness) is not counted as organ damage: it is the mildest category and carried by
- * nearly every volatile solvent, so it would leave nothing to offer (our choice, said in docs/methods.md).
+ * nearly every volatile solvent, so it would leave nothing to offer (our choice, said in docs/methods.md). For the same
+ * reason acute toxicity category 4 alone ("harmful", H302/H312/H332) is not a <i>default</i> reason ({@link #defaults}):
+ * it is the mildest acute category, most ethers and esters carry it by self-classification, and as a default it left
+ * out the published substitutes of diethyl ether (2-MeTHF, CPME: H302); {@code --because toxic} still makes it one.
  *
  * @param kind    one of {@link #KINDS}
  * @param level   the original's severity (≥ 1); a candidate at this level or above is left out
@@ -88,6 +91,14 @@ public record HazardLimit(String kind, int level, String because) {
             }
         }
         return out;
+    }
+
+    /**
+     * The limits {@code replace} applies without {@code --because}: the original's statements in {@link #DEFAULT_KINDS},
+     * except acute toxicity when the original is only harmful (category 4), the mildest acute category.
+     */
+    public static List<HazardLimit> defaults(Solvent original) {
+        return from(original, DEFAULT_KINDS).stream().filter(l -> !(l.kind().equals("acute-toxicity") && l.level() == 1)).toList();
     }
 
     /** True when the solvent is as bad as the original or worse in this kind. */

@@ -6,7 +6,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import org.cohesa.core.safety.FlammableLiquidClass;
-import org.cohesa.core.safety.GuideRank;
 import org.cohesa.core.safety.HazardStatements;
 import org.cohesa.core.safety.SafetyProfiler;
 import org.cohesa.core.safety.SolventGuide;
@@ -16,13 +15,13 @@ import org.cohesa.core.solvent.Solvent;
  * The hazard penalty of one solvent in the desirability ranking ({@link Desirability}), in points, with the
  * terms that make it up so every rank can say why. Our own weighting (common practice, no source); the
  * classifications it reads are published: GHS Rev. 10 hazard classes and flammable-liquid categories, the
- * CHEM21 ranking by default (Prat et al., Green Chem. 18 (2016) 288, computed by {@link SolventGuide}) and
+ * CHEM21 ranking (Prat et al., Green Chem. 18 (2016) 288: published final rank, else computed by {@link SolventGuide}) and
  * ICH Q3C(R8) classes. docs/methods.md ("Ranking") gives the table and the reasons for each weight.
  *
  * <ul>
  *   <li>health, each hazard class once: CMR category 1 (H340, H350, H360…) 8; suspected CMR (H341, H351,
  *       H361…) 4; lactation H362 2; fatal (H300, H310, H330) 6; toxic (H301, H311, H331) 4; harmful (H302,
- *       H312, H332) 1; organ damage (H370, H372) 4, possible (H371, H373) 2; respiratory sensitiser H334 3;
+ *       H312, H332) 0.5 (with the irritants, as CHEM21's health score ranks them); organ damage (H370, H372) 4, possible (H371, H373) 2; respiratory sensitiser H334 3;
  *       skin sensitiser H317 1; corrosive or serious eye damage (H314, H318) 1.5; aspiration H304 1;
  *       irritation or drowsiness (H315, H319, H335, H336, EUH066) 0.5;</li>
  *   <li>flammability, GHS category of the liquid (flash point and boiling point, else its H224–H227):
@@ -32,7 +31,10 @@ import org.cohesa.core.solvent.Solvent;
  *       generous published limit must not rank below it); skin notation + 0.5;</li>
  *   <li>process suitability: a reactive solvent ({@link ReactiveFlag} other than peroxide former, which is counted
  *       below) 1: it reacts with bases, amines or the solute and is a worse first try;</li>
- *   <li>solvent guide (CHEM21 ranking by default): recommended 0, problematic 1, hazardous 2.5;</li>
+ *   <li>solvent guide (CHEM21: the paper's final ranking where it lists the solvent, else the computed ranking by
+ *       default): recommended 0, problematic 0.5, hazardous 1.25, highly hazardous 2 — half of what a term of its own
+ *       would weigh, because the guide's safety and health scores are computed from the flash point and H statements
+ *       counted above;</li>
  *   <li>ICH Q3C: class 1 5, class 2 1.5, class 3 0, not listed 0.5 (needs justification under Q3C);</li>
  *   <li>environment: ozone H420 3; aquatic acute/chronic 1–2 (H400, H410, H411) 1, (H412, H413) 0.5;
  *       peroxide former 0.5; halogenated (Cl, Br, I in the formula, or the chlorinated family) 1.5: halogenated waste
@@ -70,7 +72,9 @@ public record HazardPenalty(double points, List<String> terms) {
             new Health(2, "harms breast-fed children", Set.of("H362")),
             new Health(6, "fatal on exposure", Set.of("H300", "H310", "H330")),
             new Health(4, "toxic", Set.of("H301", "H311", "H331")),
-            new Health(1, "harmful", Set.of("H302", "H312", "H332")),
+            // acute toxicity category 4 weighs as an irritant, as in the CHEM21 health score (Prat 2016 Table 4: H302, H312,
+            // H332 score 2, the same as H315, H319, H335, H336)
+            new Health(0.5, "harmful", Set.of("H302", "H312", "H332")),
             new Health(4, "organ damage", Set.of("H370", "H372")),
             new Health(2, "possible organ damage", Set.of("H371", "H373")),
             new Health(3, "respiratory sensitiser", Set.of("H334")),
@@ -121,11 +125,17 @@ public record HazardPenalty(double points, List<String> terms) {
         if (s.exposure().skin()) {
             t.add(new Term(0.5, "skin notation"));
         }
-        GuideRank rank = SolventGuide.score(s).rank();
-        if (rank == GuideRank.PROBLEMATIC) {
-            t.add(new Term(1, "guide: problematic"));
-        } else if (rank == GuideRank.HAZARDOUS) {
-            t.add(new Term(2.5, "guide: hazardous"));
+        SolventGuide.Scores guide = SolventGuide.score(s);
+        double guidePoints = switch (guide.rank()) {
+            case RECOMMENDED -> 0;
+            // half the weight of a term of its own: the guide's scores restate the flash point, H statements and boiling
+            // point counted above; what it adds is the panel's judgement and criteria we do not count (docs/methods.md)
+            case PROBLEMATIC -> 0.5;
+            case HAZARDOUS -> 1.25;
+            case HIGHLY_HAZARDOUS -> 2;
+        };
+        if (guidePoints > 0) {
+            t.add(new Term(guidePoints, "guide: " + guide.rank().label() + (guide.published() ? " (CHEM21 published)" : " (computed)")));
         }
         Integer ich = s.ichClass();
         if (ich == null) {

@@ -43,7 +43,7 @@ public enum ProcessUse {
     /** Points per factor of ten outside an RER window. */
     public static final double POINTS_PER_DECADE = 3;
     /** Most points the process term gives one component (before its weight). */
-    public static final double CAP = 4;
+    public static final double CAP = 6;
     /** {@link #AS_ORIGINAL}: the window is the original's RER divided and multiplied by this factor. */
     public static final double AS_ORIGINAL_FACTOR = 3;
     /** Boiling-point fallback for the RER, fitted over the bundled library's predicted rates (ProcessUseTest). */

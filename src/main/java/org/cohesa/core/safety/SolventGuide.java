@@ -1,9 +1,20 @@
 package org.cohesa.core.safety;
 
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVRecord;
 import org.cohesa.core.solvent.Solvent;
 
 /**
@@ -33,11 +44,34 @@ import org.cohesa.core.solvent.Solvent;
  *   paper then revised some solvents after discussion (e.g. methanol and acetone to recommended), which a
  *   computation cannot reproduce.</li>
  * </ul>
+ *
+ * <p><b>Published ranks first.</b> For the 74 solvents of the paper's Tables 7 and 8 that our library holds
+ * ({@code chem21-ranks.csv}, with its provenance) {@link #score} returns the paper's own three scores and its
+ * <i>final</i> ranking (Table 7: after the panel's discussion, e.g. acetone, methanol and anisole to recommended,
+ * DMSO, acetonitrile and cyclohexanone to problematic, pyridine and triethylamine to hazardous; Table 8: the ranking by
+ * default, confirmed as final by the paper). Every other solvent gets the computed ranking by default, and
+ * {@link Scores#basis()} says which.
  */
 public final class SolventGuide {
 
     /** Citation printed beside the ranking. */
-    public static final String METHOD = "CHEM21 (Prat et al., Green Chem. 18 (2016) 288), ranking by default; scoring tables from memory";
+    public static final String METHOD = "CHEM21 (Prat et al., Green Chem. 18 (2016) 288): the paper's final ranking (Tables 7-8) where it lists the solvent, else its ranking by default computed with scoring tables from memory";
+
+    private static final String RESOURCE = "chem21-ranks.csv";
+    private static final Map<String, Published> PUBLISHED = load();
+
+    /**
+     * One row of the paper's Table 7 or 8.
+     *
+     * @param cas         CAS number as in our library
+     * @param name        the paper's name
+     * @param table       7 (classical solvents) or 8 (less classical)
+     * @param defaultRank the ranking by default printed by the paper
+     * @param finalRank   the final ranking (Table 7: after discussion; Table 8: the default, confirmed)
+     */
+    public record Published(String cas, String name, int table, int safety, int health, int environment,
+                            GuideRank defaultRank, GuideRank finalRank) {
+    }
 
     private static final String WATER_CAS = "7732-18-5";
     private static final Set<String> STATIC_ACCUMULATING_FAMILIES = Set.of("aliphatic", "aromatic", "terpene");
@@ -46,28 +80,78 @@ public final class SolventGuide {
      * @param safety      1–10
      * @param health      1–10
      * @param environment 1–10
-     * @param rank        the ranking by default
+     * @param rank        the paper's final ranking where it lists the solvent, else the computed ranking by default
      * @param notes       which inputs were missing or assumed
+     * @param published   true when scores and rank are the paper's own (Table 7 or 8), false when computed here
      */
-    public record Scores(int safety, int health, int environment, GuideRank rank, List<String> notes) {
+    public record Scores(int safety, int health, int environment, GuideRank rank, List<String> notes, boolean published) {
         public Scores {
             notes = List.copyOf(notes);
         }
+
+        /** Where the rank comes from, in words. */
+        public String basis() {
+            return published ? "published final ranking" : "computed ranking by default";
+        }
+    }
+
+    /** Every row of the published tables held here, in table order. */
+    public static List<Published> publishedRows() {
+        return List.copyOf(PUBLISHED.values());
+    }
+
+    /** The paper's row for a CAS number, or empty when neither table lists the solvent. */
+    public static Optional<Published> published(String cas) {
+        return cas == null ? Optional.empty() : Optional.ofNullable(PUBLISHED.get(cas.strip()));
     }
 
     private SolventGuide() {
     }
 
-    /** Scores and ranks one solvent. */
+    /** Scores and ranks one solvent: the paper's own row where it has one, else computed. */
     public static Scores score(Solvent s) {
+        Optional<Published> p = published(s.cas());
+        if (p.isPresent()) {
+            Published r = p.get();
+            List<String> notes = new ArrayList<>();
+            notes.add("Prat et al. 2016 Table " + r.table() + (r.table() == 7
+                    ? ", ranking after discussion (by default: " + r.defaultRank().label() + ")"
+                    : ", ranking by default confirmed as final"));
+            return new Scores(r.safety(), r.health(), r.environment(), r.finalRank(), notes, true);
+        }
+        return computed(s);
+    }
+
+    /** The ranking by default computed from the library's data, ignoring the published tables. */
+    public static Scores computed(Solvent s) {
         List<String> notes = new ArrayList<>();
         if (WATER_CAS.equals(s.cas())) {
-            return new Scores(1, 1, 1, GuideRank.RECOMMENDED, notes);
+            return new Scores(1, 1, 1, GuideRank.RECOMMENDED, notes, false);
         }
         int safety = safety(s, notes);
         int health = health(s, notes);
         int environment = environment(s, notes);
-        return new Scores(safety, health, environment, rank(safety, health, environment), notes);
+        return new Scores(safety, health, environment, rank(safety, health, environment), notes, false);
+    }
+
+    private static Map<String, Published> load() {
+        Map<String, Published> m = new LinkedHashMap<>();
+        try (InputStream in = SolventGuide.class.getResourceAsStream(RESOURCE)) {
+            if (in == null) {
+                throw new IllegalStateException("missing resource " + RESOURCE);
+            }
+            CSVFormat fmt = CSVFormat.DEFAULT.builder().setCommentMarker('#').setHeader().setSkipHeaderRecord(true).get();
+            for (CSVRecord r : fmt.parse(new InputStreamReader(in, StandardCharsets.UTF_8))) {
+                String cas = r.get("cas").strip();
+                m.put(cas, new Published(cas, r.get("chem21_name").strip(), Integer.parseInt(r.get("table").strip()),
+                        Integer.parseInt(r.get("safety").strip()), Integer.parseInt(r.get("health").strip()),
+                        Integer.parseInt(r.get("environment").strip()), GuideRank.parse(r.get("default_rank")),
+                        GuideRank.parse(r.get("final_rank"))));
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot read " + RESOURCE, e);
+        }
+        return Collections.unmodifiableMap(m);
     }
 
     /** The ranking rule of the paper (from memory). */

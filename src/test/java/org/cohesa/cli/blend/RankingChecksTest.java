@@ -154,7 +154,7 @@ class RankingChecksTest {
         for (Map.Entry<String, List<String>> e : PUBLISHED.entrySet()) {
             Solvent original = BundledLiquids.get(e.getKey());
             SolubilitySphere sphere = new SolubilitySphere(original.hansen(), ReplaceCommand.DEFAULT_RADIUS);
-            List<HazardLimit> limits = HazardLimit.from(original, HazardLimit.DEFAULT_KINDS);
+            List<HazardLimit> limits = HazardLimit.defaults(original);
             // as replace does: Ra ≤ radius qualifies, the process term measures from the original's evaporation rate
             BlendDesigner.Result r = replaceAround(original, defaults(limits, original));
             List<String> offered = new ArrayList<>();
@@ -183,18 +183,16 @@ class RankingChecksTest {
                 whyNot.add(name + ": " + why);
             }
             report.append(e.getKey()).append(" → found ").append(found).append("; not: ").append(whyNot).append('\n');
-            // a data reason (not in the library, no parameters, left out by a rule, outside the sphere) or the ranking terms that put
-            // it lower; dichloromethane is the known case of the second kind (2-MeTHF: hazard 7.5 against 4 for the leaders)
-            boolean explained = whyNot.stream().noneMatch(w -> w.endsWith("ranked below ten other ideas"));
-            assertTrue(!found.isEmpty() || explained, "replacing " + e.getKey() + ": no published replacement in the top 10 and no reason:\n" + report);
-            if (!e.getKey().equals("dichloromethane")) {
-                assertFalse(found.isEmpty(), "replacing " + e.getKey() + ": no published replacement in the top 10:\n" + report);
-            }
+            // every original has at least one published replacement in its top 10; the others carry their reason (not in the
+            // library, no parameters, left out by a rule, outside the sphere, or the ranking terms that put them lower).
+            // Dichloromethane: 2-MeTHF (Ra 3.42) is the one published answer inside Ra 4; ethyl acetate (Ra 5.0), MTBE, CPME
+            // and toluene lie outside, and the report says so.
+            assertFalse(found.isEmpty(), "replacing " + e.getKey() + ": no published replacement in the top 10:\n" + report);
         }
         // The dipolar aprotics are the published success stories: the first suggestion must be a published answer.
         for (String aprotic : List.of("N,N-dimethylformamide", "N-methyl-2-pyrrolidone")) {
             Solvent original = BundledLiquids.get(aprotic);
-            BlendDesigner.Result r = replaceAround(original, defaults(HazardLimit.from(original, HazardLimit.DEFAULT_KINDS), original));
+            BlendDesigner.Result r = replaceAround(original, defaults(HazardLimit.defaults(original), original));
             List<String> first = solvents(r.suggestions().get(0)).stream().map(Solvent::name).toList();
             assertTrue(PUBLISHED.get(aprotic).containsAll(first), aprotic + ": #1 is " + first + ", not a published replacement");
         }
@@ -226,7 +224,7 @@ class RankingChecksTest {
     @Test
     void theFiledEvidenceCarriesTheWhyReplaceShowed() {
         Solvent dmf = BundledLiquids.get("N,N-dimethylformamide");
-        BlendSuggestion first = replaceAround(dmf, defaults(HazardLimit.from(dmf, HazardLimit.DEFAULT_KINDS), dmf)).suggestions().get(0);
+        BlendSuggestion first = replaceAround(dmf, defaults(HazardLimit.defaults(dmf), dmf)).suggestions().get(0);
         org.cohesa.core.records.Evidence e = org.cohesa.core.records.EvidenceAssembler.assemble(org.cohesa.core.solvent.Blend.pure(dmf),
                 new org.cohesa.core.solvent.Blend(first.blend().components()), null, Map.of(), "test");
         com.fasterxml.jackson.databind.JsonNode ranking = e.section(org.cohesa.core.records.Evidence.Sections.RANKING).orElseThrow();
@@ -241,7 +239,7 @@ class RankingChecksTest {
     void replaceNeverOffersACandidateWithAStatementTheOriginalIsReplacedFor() {
         for (String name : List.of("N-methyl-2-pyrrolidone", "N,N-dimethylformamide", "dichloromethane", "toluene", "chloroform", "1,4-dioxane")) {
             Solvent original = BundledLiquids.get(name);
-            List<HazardLimit> limits = HazardLimit.from(original, HazardLimit.DEFAULT_KINDS);
+            List<HazardLimit> limits = HazardLimit.defaults(original);
             assertFalse(limits.isEmpty(), name + " is replaced for its health statements");
             BlendDesigner.Result r = replaceAround(original, defaults(limits, original));
             for (BlendSuggestion s : r.suggestions()) {
