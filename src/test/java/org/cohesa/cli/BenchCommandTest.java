@@ -50,4 +50,23 @@ class BenchCommandTest {
         assertEquals(2, code);
         assertTrue(err.toString().startsWith("error: --runs '0'"), err.toString());
     }
+
+    @Test
+    void fitChecksRefuseAListOfLiquidsTheSeriesCannotBeDrawnFrom() throws Exception {
+        Path shortList = dir.resolve("short.txt");
+        java.nio.file.Files.writeString(shortList, "# our shelf\nacetone\nwater\n");
+        StringWriter err = new StringWriter();
+        int code = CohesaCommand.run(new String[] {"--db", dir.resolve("t.db").toString(), "bench", "fit-checks", "--liquids", shortList.toString()},
+                new PrintWriter(new StringWriter()), new PrintWriter(err));
+        assertEquals(2, code);
+        assertTrue(err.toString().startsWith("error: --liquids '" + shortList + "': lists 2 different liquids"), err.toString());
+
+        Path unknown = dir.resolve("unknown.txt");
+        java.nio.file.Files.writeString(unknown, "acetone\nnot-a-liquid\n");
+        err = new StringWriter();
+        code = CohesaCommand.run(new String[] {"--db", dir.resolve("t.db").toString(), "bench", "fit-checks", "--liquids", unknown.toString()},
+                new PrintWriter(new StringWriter()), new PrintWriter(err));
+        assertEquals(2, code);
+        assertTrue(err.toString().startsWith("error: --liquids 'not-a-liquid': no such solvent"), err.toString());
+    }
 }

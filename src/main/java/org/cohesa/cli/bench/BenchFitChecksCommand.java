@@ -1,10 +1,13 @@
 package org.cohesa.cli.bench;
 
 import com.fasterxml.jackson.annotation.JsonProperty;
+import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import org.cohesa.cli.CohesaSubcommand;
+import org.cohesa.cli.InputFile;
 import org.cohesa.cli.Output;
 import org.cohesa.cli.TextTable;
 import org.cohesa.core.InvalidInputException;
@@ -28,8 +31,8 @@ import picocli.CommandLine.Option;
  */
 @Command(name = "fit-checks", description = {
         "Measure the sphere fit on seeded synthetic series: published library spheres, series of 15, 20 and 30 of the",
-        "35 common test liquids, clean and with two results flipped near the surface (RED 0.8-1.25); likelihood fit",
-        "and classic baseline side by side; then the centre error after 5 suggested tests vs 5 random common liquids;",
+        "35 common test liquids: clean; with two results flipped near the surface (RED 0.8-1.25); and issue 14's own",
+        "series, two flips and two more near-surface results scored 0.5; likelihood fit and classic baseline side by side; then the centre error after 5 suggested tests vs 5 random common liquids;",
         "then drug substances fitted without and with a prior estimated from their structure."})
 final class BenchFitChecksCommand extends CohesaSubcommand {
 
@@ -51,13 +54,16 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
             + "common liquids inside and 4 outside; drug substances, whose radius is a default, left out) or library (dev plus validation).")
     String spheres = "validation";
 
-    @Option(names = "--graded", paramLabel = "N", description = "Also score N results with true RED 0.9-1.1 as 0.5 in the rows with flips (issue 14's series had 2; default ${DEFAULT-VALUE}).")
-    int graded = 0;
-
     @Option(names = "--seed", paramLabel = "N", description = "Seed (default ${DEFAULT-VALUE}).")
     long seed = 14;
 
-    record Row(int liquids, int flips, int trials, @JsonProperty("centre_error_median") double centreMedian,
+    @Option(names = "--liquids", paramLabel = "FILE", description = "Draw the series from the liquids in FILE (one library name, "
+            + "synonym or CAS per line, # starts a comment; at least 30) instead of the 35 common test liquids, e.g. your lab's own "
+            + "list. The spheres stay those the set names on the common list; those for which FILE's liquids cannot give a "
+            + "usable series (3 inside, 3 outside, the flips and partial results near the surface) are left out.")
+    Path liquids;
+
+    record Row(int liquids, int flips, @JsonProperty("scored_half") int scoredHalf, int trials, @JsonProperty("centre_error_median") double centreMedian,
                @JsonProperty("centre_error_max") double centreMax, @JsonProperty("r0_error_median") double r0Median,
                @JsonProperty("region_coverage") double regionCoverage, @JsonProperty("box_coverage") double boxCoverage,
                @JsonProperty("flips_detected") Double flipsDetected, double bounded,
@@ -77,7 +83,8 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
                     @JsonProperty("region_coverage") double plainCoverage, @JsonProperty("region_coverage_with_prior") double priorCoverage) {
     }
 
-    record Report(String benchmark, String spheres, long seed, @JsonProperty("common_liquids") List<String> commonLiquids, List<Row> rows,
+    record Report(String benchmark, String spheres, @JsonProperty("liquid_list") String liquidList, long seed,
+                  @JsonProperty("liquids") List<String> liquids, List<Row> rows,
                   @JsonProperty("next_tests") Curve nextTests, @JsonProperty("structure_prior") List<PriorRow> structurePrior,
                   @JsonProperty("structure_prior_cases") List<String> structurePriorCases,
                   @JsonProperty("related_prior") List<PriorRow> relatedPrior, @JsonProperty("related_prior_cases") List<String> relatedPriorCases,
@@ -114,7 +121,7 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
     }
 
     @Override
-    protected void execute() {
+    protected void execute() throws java.io.IOException {
         if (trials < 1 || trials > 1000) {
             throw new InvalidInputException("--trials", String.valueOf(trials), "must lie between 1 and 1000");
         }
@@ -124,33 +131,43 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
         if (classicResamples < 0 || classicResamples > 1000) {
             throw new InvalidInputException("--classic-resamples", String.valueOf(classicResamples), "must lie between 0 and 1000");
         }
-        if (graded < 0 || graded > 5) {
-            throw new InvalidInputException("--graded", String.valueOf(graded), "must lie between 0 and 5");
-        }
         if (!List.of("validation", "dev", "library").contains(spheres)) {
             throw new InvalidInputException("--spheres", spheres, "must be validation, dev or library");
         }
         long start = System.nanoTime();
-        List<NamedPoint> pool = CommonTestLiquids.resolve(ctx().library());
+        List<NamedPoint> common = CommonTestLiquids.resolve(ctx().library());
+        List<NamedPoint> pool = liquids == null ? common : listed(liquids);
         List<SolubilitySphere> truths = new ArrayList<>();
+        int dropped = 0;
         for (Material m : ctx().materials().library().all()) {
             if (m.userEntry()) {
                 continue;
             }
-            long in = pool.stream().filter(p -> m.sphere().contains(p.point())).count();
+            // the sets are defined on the common list, so that another list is measured on the same spheres
+            long in = common.stream().filter(p -> m.sphere().contains(p.point())).count();
             boolean validation = ISSUE_SPHERES.contains(m.name());
-            boolean dev = !validation && m.kind() != MaterialKind.DRUG && in >= 4 && pool.size() - in >= 4;
+            boolean dev = !validation && m.kind() != MaterialKind.DRUG && in >= 4 && common.size() - in >= 4;
             if (spheres.equals("validation") ? validation : spheres.equals("dev") ? dev : validation || dev) {
-                truths.add(m.sphere());
+                if (drawable(m.sphere(), pool)) {
+                    truths.add(m.sphere());
+                } else {
+                    dropped++;
+                }
             }
+        }
+        if (truths.isEmpty()) {
+            throw new InvalidInputException("--liquids", String.valueOf(liquids), "none of the " + spheres + " spheres can be tested with these liquids");
         }
         List<Row> rows = new ArrayList<>();
         for (int size : new int[] {15, 20, 30}) {
-            for (int flips : new int[] {0, 2}) {
-                FitValidation.Figures f = FitValidation.run(truths, pool, new FitValidation.Scenario(size, flips, flips > 0 ? graded : 0), trials,
-                        seed * 1000 + size * 10 + flips, true, classicResamples);
+            // clean; two near-surface flips (the issue's checks); the issue's own series: two flips and two results scored 0.5
+            for (int[] fg : new int[][] {{0, 0}, {2, 0}, {2, 2}}) {
+                int flips = fg[0];
+                int half = fg[1];
+                FitValidation.Figures f = FitValidation.run(truths, pool, new FitValidation.Scenario(size, flips, half), trials,
+                        seed * 1000 + size * 10 + flips + 5 * half, true, classicResamples);
                 double n = f.trials();
-                rows.add(new Row(size, flips, f.trials(), Output.round(f.centreMedian(), 3), Output.round(f.centreMax(), 3),
+                rows.add(new Row(size, flips, half, f.trials(), Output.round(f.centreMedian(), 3), Output.round(f.centreMax(), 3),
                         Output.round(f.r0Median(), 3), Output.round(f.regionCovered() / n, 3), Output.round(f.boxCovered() / n, 3),
                         flips > 0 ? Output.round(f.detected() / n, 3) : null, Output.round(f.bounded() / n, 3),
                         Output.round(f.classicCentreMedian(), 3), Output.round(f.classicR0Median(), 3),
@@ -175,7 +192,9 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
         List<FitValidation.PriorCase> related = relatedCases(pool);
         List<PriorRow> relatedRows = priorRows(related, pool, seed * 1000 + 700);
         double seconds = Output.round((System.nanoTime() - start) / 1e9, 1);
-        Report report = new Report("fit-checks", spheres + " (" + truths.size() + " spheres)", seed, CommonTestLiquids.NAMES, rows, curve, priorRows,
+        String set = spheres + " (" + truths.size() + " spheres" + (dropped > 0 ? ", " + dropped + " left out for the list" : "") + ")";
+        Report report = new Report("fit-checks", set, liquids == null ? "the 35 common test liquids" : liquids.toString(), seed,
+                pool.stream().map(NamedPoint::name).toList(), rows, curve, priorRows,
                 cases.stream().map(FitValidation.PriorCase::name).toList(), relatedRows,
                 related.stream().map(FitValidation.PriorCase::name).toList(), seconds);
         if (json()) {
@@ -184,13 +203,11 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
         }
         out().printf(Locale.ROOT, "sphere fit on synthetic series: %s, %d trials per row, seed %d; centre error |Δ(δD, δP, δH)| and R0 error in MPa^½%n",
                 report.spheres(), trials, seed);
-        if (graded > 0) {
-            out().printf(Locale.ROOT, "rows with flips also hold %d results near the surface scored 0.5%n", graded);
-        }
-        TextTable t = new TextTable("liquids", "flips", "centre med", "centre max", "R0 med", "region cover", "box cover", "flips found",
+        out().printf(Locale.ROOT, "series drawn from %s%n", report.liquidList());
+        TextTable t = new TextTable("liquids", "flips", "scored 0.5", "centre med", "centre max", "R0 med", "region cover", "box cover", "flips found",
                 "bounded", "classic centre", "classic R0", "classic box", "classic flips found");
         for (Row x : rows) {
-            t.row(x.liquids(), x.flips(), Output.fmt(x.centreMedian(), 2), Output.fmt(x.centreMax(), 2), Output.fmt(x.r0Median(), 2),
+            t.row(x.liquids(), x.flips(), x.scoredHalf(), Output.fmt(x.centreMedian(), 2), Output.fmt(x.centreMax(), 2), Output.fmt(x.r0Median(), 2),
                     pct(x.regionCoverage()), pct(x.boxCoverage()), x.flipsDetected() == null ? "-" : pct(x.flipsDetected()), pct(x.bounded()),
                     Output.fmt(x.classicCentreMedian(), 2), Output.fmt(x.classicR0Median(), 2),
                     x.classicBoxCoverage() == null ? "-" : pct(x.classicBoxCoverage()),
@@ -271,6 +288,38 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
             cases.add(new FitValidation.PriorCase(m.name(), m.sphere(), CentrePrior.fromStructure(est)));
         }
         return cases;
+    }
+
+    /** Whether series of 15 and 30 liquids with two flips and two partial results can be drawn from {@code pool} for {@code truth}. */
+    private static boolean drawable(SolubilitySphere truth, List<NamedPoint> pool) {
+        try {
+            for (int size : new int[] {15, 30}) {
+                FitValidation.usable(truth, pool, new FitValidation.Scenario(size, 2, 2), new java.util.SplittableRandom(size));
+            }
+            return true;
+        } catch (IllegalArgumentException e) {
+            return false;
+        }
+    }
+
+    /** The liquids of {@code file}: one library name, synonym or CAS per line; blank lines and # comments skipped. */
+    private List<NamedPoint> listed(Path file) throws java.io.IOException {
+        List<String> lines = InputFile.read("--liquids", file, r -> new java.io.BufferedReader(r).lines().toList());
+        LinkedHashMap<String, NamedPoint> out = new LinkedHashMap<>();
+        for (String line : lines) {
+            String name = line.replace("\uFEFF", "").replaceFirst("#.*", "").strip();
+            if (!name.isEmpty()) {
+                var s = ctx().library().resolve("--liquids", name);
+                if (s.hansen() == null) {
+                    throw new InvalidInputException("--liquids", name, "has no Hansen parameters in the library");
+                }
+                out.putIfAbsent(s.name(), new NamedPoint(s.name(), s.hansen()));
+            }
+        }
+        if (out.size() < 30) {
+            throw new InvalidInputException("--liquids", file.toString(), "lists " + out.size() + " different liquids; the series of 30 need at least 30");
+        }
+        return List.copyOf(out.values());
     }
 
     private static String pct(double share) {

@@ -9,7 +9,8 @@ import org.cohesa.core.solvent.SolventLibrary;
  * A fixed list of 35 common test liquids: those most labs keep on the shelf and use for a solubility series,
  * spread over the whole (δD, δP, δH) space from alkanes to water (common practice, no source). The synthetic
  * series of the fit's checks and benchmarks draw from it, and it is the pool of "random common liquids" the
- * next-test suggestions are measured against.
+ * next-test suggestions are measured against. Three deliberately chosen lists (even coverage of δ-space, expected
+ * information, more corners) were measured against it and did no better (docs/methods.md, docs/fit-lists/).
  */
 public final class CommonTestLiquids {
 

@@ -173,12 +173,15 @@ public final class FitValidation {
                 priorCovered);
     }
 
-    /** A series with the requested flips, and at least 3 dissolving and 3 non-dissolving results (redrawn until so). */
-    static SyntheticSeries usable(SolubilitySphere truth, List<NamedPoint> pool, Scenario s, SplittableRandom rng) {
+    /**
+     * A series with exactly the requested flips and results scored 0.5, and at least 3 dissolving and 3 non-dissolving
+     * results (redrawn until so).
+     */
+    public static SyntheticSeries usable(SolubilitySphere truth, List<NamedPoint> pool, Scenario s, SplittableRandom rng) {
         for (int attempt = 0; attempt < 1000; attempt++) {
             SyntheticSeries series = SyntheticSeries.draw(truth, pool, s.size(), s.flips(), s.graded(), rng);
             long good = series.results().stream().filter(TestResult::good).count();
-            if (series.flipped().size() == s.flips() && good >= 3 && series.results().size() - good >= 3) {
+            if (series.flipped().size() == s.flips() && series.graded().size() == s.graded() && good >= 3 && series.results().size() - good >= 3) {
                 return series;
             }
         }

@@ -40,15 +40,17 @@ class FitChecksTest {
         for (int size : new int[] {15, 20, 30}) {
             for (int flips : new int[] {0, 2}) {
                 // more trials where the issue sets error limits (30 liquids), ten elsewhere
-                RUNS.put(size + "/" + flips, run(size, flips, size == 30 ? 20 : 10, 4000 + size * 10 + flips));
+                RUNS.put(size + "/" + flips, run(size, flips, 0, size == 30 ? 20 : 10, 4000 + size * 10 + flips));
             }
         }
+        // issue 14's own series: two near-surface flips and two more near-surface results scored 0.5
+        RUNS.put("30/2/2", run(30, 2, 2, 10, 4000 + 30 * 10 + 2 + 10));
     }
 
-    private static FitValidation.Figures run(int size, int flips, int trials, long seed) {
-        FitValidation.Figures f = FitValidation.run(truths, pool, new FitValidation.Scenario(size, flips, 0), trials, seed, flips > 0, 0);
-        System.out.printf(Locale.ROOT, "%d liquids, %d flips, %d trials: centre median %.2f, R0 median %.2f, region holds truth %d, flips found %d"
-                + "; classic centre %.2f, flips found %d%n", size, flips, trials, f.centreMedian(), f.r0Median(), f.regionCovered(), f.detected(),
+    private static FitValidation.Figures run(int size, int flips, int half, int trials, long seed) {
+        FitValidation.Figures f = FitValidation.run(truths, pool, new FitValidation.Scenario(size, flips, half), trials, seed, flips > 0, 0);
+        System.out.printf(Locale.ROOT, "%d liquids, %d flips, %d scored 0.5, %d trials: centre median %.2f, R0 median %.2f, region holds truth %d, flips found %d"
+                + "; classic centre %.2f, flips found %d%n", size, flips, half, trials, f.centreMedian(), f.r0Median(), f.regionCovered(), f.detected(),
                 f.classicCentreMedian(), f.classicDetected());
         return f;
     }
@@ -86,6 +88,31 @@ class FitChecksTest {
                         + f.regionCovered() + " of " + f.trials());
             }
         }
+    }
+
+    @Test
+    void theIssuesOwnSeriesHoldsThirtyCommonLiquidsTwoFlipsAndTwoPartialResults() {
+        // issue 14: 30 liquids of the fixed list, two results flipped near the surface (true RED 0.8–1.25), two scored 0.5
+        SolubilitySphere pmma = materials.stream().filter(m -> m.name().equals("poly(methyl methacrylate)")).findFirst().orElseThrow().sphere();
+        for (int t = 0; t < 20; t++) {
+            SyntheticSeries s = FitValidation.usable(pmma, pool, new FitValidation.Scenario(30, 2, 2), new java.util.SplittableRandom(300 + t));
+            assertTrue(s.results().size() == 30 && s.flipped().size() == 2 && s.graded().size() == 2, "series " + t);
+            java.util.Set<String> names = new java.util.HashSet<>();
+            for (TestResult r : s.results()) {
+                assertTrue(CommonTestLiquids.NAMES.contains(r.label()) && names.add(r.label()), "drawn once from the list: " + r.label());
+                double red = pmma.red(r.liquid());
+                boolean inside = pmma.contains(r.liquid());
+                if (s.flipped().contains(r.label())) {
+                    assertTrue(red >= 0.8 && red <= 1.25 && r.score() == (inside ? 0 : 1), "flip " + r.label() + " at RED " + red);
+                } else if (s.graded().contains(r.label())) {
+                    assertTrue(red >= 0.8 && red <= 1.25 && r.score() == 0.5, "partial " + r.label() + " at RED " + red);
+                } else {
+                    assertTrue(r.score() == (inside ? 1 : 0), "clean " + r.label());
+                }
+            }
+        }
+        FitValidation.Figures f = RUNS.get("30/2/2");
+        assertTrue(f.regionCovered() >= 0.9 * f.trials(), "region held the truth in " + f.regionCovered() + " of " + f.trials());
     }
 
     @Test
