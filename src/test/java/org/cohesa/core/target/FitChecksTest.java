@@ -18,7 +18,8 @@ import org.junit.jupiter.api.Test;
  * PMMA, polycarbonate, cellulose acetate butyrate, ethyl cellulose) from the bundled solvent-db/materials.csv
  * (Hansen 2007, Table A.2, recalled from memory; see solvent-db/SOURCES.md). Liquids: {@link CommonTestLiquids}
  * with the bundled table's published parameters. Scores 1 inside / 0 outside the true sphere; "flips" are two
- * results with true RED 0.8–1.25 scored the other way. Few trials keep the test fast; {@code cohesa bench
+ * results with true RED 0.8–1.25 scored the other way; the issue's own series adds two more results in that band
+ * scored 0.5. Few trials keep the test fast; {@code cohesa bench
  * fit-checks} runs the same measurement with 30 trials per row (docs/methods.md records both).
  */
 class FitChecksTest {
