@@ -14,13 +14,13 @@ import java.util.Optional;
  * coexisting ones and the estimates drift with composition where the real liquid does not.
  *
  * <p>The coexisting phases are those of the wrapped model itself ({@link BinaryLle} on the same γ), so the activities
- * stay continuous at the gap's edges. A coarse convexity test of the Gibbs energy of mixing comes first: a gap needs
- * a non-convex stretch, and most pairs have none, so they cost 80 extra evaluations per temperature.
+ * stay continuous at the gap's edges. A coarse tangent-plane test at the overall composition comes first (48 extra
+ * evaluations); only a composition that fails it pays for the phase search.
  * Temperatures in K; mole fractions.
  */
 public final class CoexistingLiquids implements ActivityModel {
 
-    private static final int COARSE = 80;
+    private static final int COARSE = 48;
     private static final double COARSE_RANGE = 14;
 
     private final ActivityModel inner;
@@ -50,9 +50,9 @@ public final class CoexistingLiquids implements ActivityModel {
 
     @Override
     public double[] gamma(double[] x, double kelvin) {
-        Optional<BinaryLle.Phases> gap = gap(kelvin);
-        if (gap.isPresent() && inside(gap.get(), x[0])) {
-            double x1 = gap.get().x1Lean();
+        Optional<BinaryLle.Phases> layers = splitAt(x, kelvin);
+        if (layers.isPresent()) {
+            double x1 = layers.get().x1Lean();
             double[] g = inner.gamma(new double[] {x1, 1 - x1}, kelvin);
             return new double[] {x1 * g[0] / x[0], (1 - x1) * g[1] / x[1]};
         }
@@ -61,31 +61,27 @@ public final class CoexistingLiquids implements ActivityModel {
 
     /** The coexisting layers at {@code kelvin} when the overall composition {@code x} lies inside the model's gap. */
     public Optional<BinaryLle.Phases> splitAt(double[] x, double kelvin) {
-        Optional<BinaryLle.Phases> gap = gap(kelvin);
-        return gap.filter(p -> inside(p, x[0]));
+        if (x[0] <= 0 || x[1] <= 0 || !belowTangent(x[0], kelvin)) {
+            return Optional.empty();
+        }
+        return BinaryLle.solve(inner, kelvin).filter(p -> x[0] > p.x1Lean() && x[0] < p.x1Rich());
     }
 
-    private static boolean inside(BinaryLle.Phases p, double x1) {
-        return x1 > p.x1Lean() && x1 < p.x1Rich();
-    }
-
-    private Optional<BinaryLle.Phases> gap(double kelvin) {
-        return nonConvex(kelvin) ? BinaryLle.solve(inner, kelvin) : Optional.empty();
-    }
-
-    /** True when g/RT = Σ xᵢ ln(xᵢγᵢ) bends downward anywhere on a coarse grid (a gap needs such a stretch). */
-    private boolean nonConvex(double kelvin) {
-        double[] x = new double[COARSE];
-        double[] g = new double[COARSE];
+    /**
+     * Tangent-plane test on a coarse grid: true when g/RT = Σ xᵢ ln(xᵢγᵢ) falls below its tangent at x₁ somewhere,
+     * i.e. x₁ is not a stable single liquid (Michelsen 1982). Most compositions pass it and cost no phase search.
+     */
+    private boolean belowTangent(double x1, double kelvin) {
+        double[] lx = inner.lnGamma(new double[] {x1, 1 - x1}, kelvin);
+        double mu1 = Math.log(x1) + lx[0];
+        double mu2 = Math.log(1 - x1) + lx[1];
         for (int i = 0; i < COARSE; i++) {
             double s = -COARSE_RANGE + 2 * COARSE_RANGE * i / (COARSE - 1);
-            x[i] = 1 / (1 + Math.exp(-s));
-            double[] lg = inner.lnGamma(new double[] {x[i], 1 - x[i]}, kelvin);
-            g[i] = x[i] * (Math.log(x[i]) + lg[0]) + (1 - x[i]) * (Math.log(1 - x[i]) + lg[1]);
-        }
-        for (int i = 1; i < COARSE - 1; i++) {
-            double chord = g[i - 1] + (g[i + 1] - g[i - 1]) * (x[i] - x[i - 1]) / (x[i + 1] - x[i - 1]);
-            if (g[i] > chord + 1e-12) {
+            double y = 1 / (1 + Math.exp(-s));
+            double[] ly = inner.lnGamma(new double[] {y, 1 - y}, kelvin);
+            // g(y) − tangent(y) = y(μ1(y) − μ1(x)) + (1 − y)(μ2(y) − μ2(x))
+            double d = y * (Math.log(y) + ly[0] - mu1) + (1 - y) * (Math.log(1 - y) + ly[1] - mu2);
+            if (d < -1e-9) {
                 return true;
             }
         }
