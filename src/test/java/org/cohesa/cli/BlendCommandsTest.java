@@ -118,6 +118,29 @@ class BlendCommandsTest {
     }
 
     @Test
+    void pvdfGetsNoWaterAndLdpeTheHotCaution() {
+        // Water precipitates PVDF from its solutions (membrane casting from NMP or DMAc into water; common practice, no
+        // source): no default suggestion for PVDF contains water, and the output says why. Before, acetone 90 % + water 10 %
+        // was #4, carried in by water's δH 42.3 at full weight.
+        CliTestSupport.Result r = run("blend", "--material", "PVDF", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.json().get("applied_limits").toString().contains("water left out"), r.out());
+        for (JsonNode b : r.json().get("blends")) {
+            for (JsonNode c : b.get("components")) {
+                assertFalse(c.get("name").asText().equals("water"), "water in a PVDF blend: " + b);
+            }
+        }
+        // asked for, water comes back (an aqueous process)
+        CliTestSupport.Result asked = run("blend", "--material", "PVDF", "--with-water", "miscible", "--json");
+        assertFalse(asked.json().get("applied_limits").toString().contains("water left out"), asked.out());
+        // LDPE is semicrystalline: at 25 °C solvents inside its sphere swell it; it dissolves hot (common practice, no source)
+        CliTestSupport.Result ldpe = run("blend", "--material", "LDPE", "--top", "3");
+        assertTrue(ldpe.out().contains("is semicrystalline") && ldpe.out().contains("--temperature"), ldpe.out());
+        CliTestSupport.Result pmma = run("blend", "--material", "PMMA", "--top", "3");
+        assertFalse(pmma.out().contains("semicrystalline"), "PMMA is amorphous: " + pmma.out());
+    }
+
+    @Test
     void anAcidicDrugGetsNoAmineAndSaysWhy() {
         // Salicylic acid (pKa 2.97, CRC Handbook, dissociation constants; from memory) forms a salt with an amine solvent
         // (common practice, no source): a salt, not a solution. Its structure (solvent-db/material-structures.csv) marks it acidic.

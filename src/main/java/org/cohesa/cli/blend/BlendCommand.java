@@ -73,7 +73,7 @@ public final class BlendCommand extends CohesaSubcommand {
             BlendReport.Target t = new BlendReport.Target(sphere.centre().dD(), sphere.centre().dP(), sphere.centre().dH(), sphere.r0(),
                     material == null ? null : material.name(), material == null ? null : material.source(), null);
             Output.json(out(), new BlendReport.Blends(t, BlendReport.Temperature.of(atTemperature), rankBy.word(), redLimit, options.ranking(r, req.weights()), BlendReport.search(r),
-                    BlendView.appliedLimits(c), BlendReport.suggestions(r, null), BlendView.SCREENING));
+                    options.appliedLimits(c), BlendReport.suggestions(r, null), BlendView.SCREENING));
             return;
         }
         out().println("target: δD " + Output.fmt(sphere.centre().dD(), 1) + ", δP " + Output.fmt(sphere.centre().dP(), 1) + ", δH "

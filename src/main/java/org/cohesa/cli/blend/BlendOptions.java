@@ -206,10 +206,48 @@ public final class BlendOptions {
 
     /** The constraints with the solvents that form a salt with the material left out (unless --allow-salt-formers). */
     BlendConstraints forSolute(BlendConstraints c, org.cohesa.core.target.Material material) {
-        if (material == null || allowSaltFormers) {
+        if (material == null) {
             return c;
         }
-        return c.with(c.more().withSolute(org.cohesa.store.MaterialStructures.characterOf(material)));
+        BlendConstraints out = allowSaltFormers ? c : c.with(c.more().withSolute(org.cohesa.store.MaterialStructures.characterOf(material)));
+        if (material.semicrystalline()) {
+            String clause = semicrystallineNote(material).replaceFirst("(?i)^semicrystalline:?\\s*", "");
+            materialNotes.add("caution: " + material.name() + " is semicrystalline" + (clause.isEmpty() ? "" : " (" + clause + ")")
+                    + ": its crystallites dissolve only near their melting range, so at " + org.cohesa.cli.Output.fmt(kelvin() - 273.15, 0)
+                    + " °C the suggestions may only swell it; dissolve at the temperature you will use and search there with --temperature C");
+        }
+        Solvent water = c.include().stream().filter(WaterMiscibility::isWater).findFirst().orElse(null);
+        boolean asked = water != null || c.fixed().stream().anyMatch(f -> WaterMiscibility.isWater(f.solvent()))
+                || c.more().withWater() == WaterCheck.Need.MISCIBLE;
+        if (!asked && waterEntry != null) {
+            java.util.Optional<String> why = org.cohesa.core.blend.WaterInPolymer.reasonToLeaveOut(material, waterEntry);
+            if (why.isPresent()) {
+                out = out.alsoExcluding(waterEntry);
+                materialNotes.add(why.get());
+            }
+        }
+        return out;
+    }
+
+    /** The note's clause that says how the material dissolves ("semicrystalline: …", up to its first semicolon). */
+    static String semicrystallineNote(org.cohesa.core.target.Material m) {
+        String n = m.note();
+        int at = n.toLowerCase(Locale.ROOT).indexOf(org.cohesa.core.target.Material.SEMICRYSTALLINE);
+        int end = n.indexOf(';', at);
+        return n.substring(at, end < 0 ? n.length() : end).strip();
+    }
+
+    /** The library's water entry, set by {@link #constraints} (null when the library has none). */
+    private Solvent waterEntry;
+
+    /** Lines about what the material's own nature left out (printed with the applied limits, and in JSON among them). */
+    final List<String> materialNotes = new ArrayList<>();
+
+    /** The applied limits as printed and in JSON: the constraints' own lines, then the material's. */
+    List<String> appliedLimits(BlendConstraints c) {
+        List<String> l = new ArrayList<>(BlendView.appliedLimits(c));
+        l.addAll(materialNotes);
+        return l;
     }
 
     /** The preference word shown in the output. */
@@ -226,6 +264,7 @@ public final class BlendOptions {
     /** Builds the constraints with the command line's safety-first defaults; {@code alsoExclude} is left out too (the replaced solvent). */
     BlendConstraints constraints(SolventLibrary lib, Solvent alsoExclude) {
         BlendConstraints base = basicConstraints(lib, alsoExclude);
+        waterEntry = lib.all().stream().filter(WaterMiscibility::isWater).findFirst().orElse(null);
         if (noCmr && allowCmr) {
             throw new InvalidInputException("--allow-cmr", "--no-cmr", "--no-cmr and --allow-cmr contradict each other");
         }

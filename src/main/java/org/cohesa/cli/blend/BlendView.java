@@ -146,7 +146,7 @@ public final class BlendView {
     /** Prints the lines above a table: defaults, limits, cost note. */
     static void header(PrintWriter out, BlendDesigner.Result r, BlendConstraints c, BlendOptions o, Desirability.Weights w) {
         defaultsText(r.pool()).forEach(out::println);
-        appliedLimits(c).forEach(out::println);
+        o.appliedLimits(c).forEach(out::println);
         String cost = costNote(o, r);
         if (cost != null) {
             out.println(cost);

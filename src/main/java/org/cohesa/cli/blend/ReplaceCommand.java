@@ -156,7 +156,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
             BlendReport.Target t = new BlendReport.Target(sphere.centre().dD(), sphere.centre().dP(), sphere.centre().dH(), sphere.r0(),
                     mat == null ? null : mat.name(), mat == null ? null : mat.source(), centred);
             Output.json(out(), new BlendReport.Replacement(o, t, BlendReport.Temperature.of(atTemperature), options.rankBy().word(), options.ranking(r, req.weights()), BlendReport.search(r),
-                    BlendView.appliedLimits(c), BlendReport.suggestions(r, s -> comparison(s.blend().components(), s.blend().point(), original)),
+                    options.appliedLimits(c), BlendReport.suggestions(r, s -> comparison(s.blend().components(), s.blend().point(), original)),
                     BlendView.SCREENING));
             return;
         }

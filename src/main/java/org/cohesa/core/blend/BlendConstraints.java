@@ -107,6 +107,16 @@ public record BlendConstraints(
                 minFlashPointC, maxIchClass, noCmr, maxCost, More.NONE);
     }
 
+    /** A copy that also leaves out this solvent by name. */
+    public BlendConstraints alsoExcluding(Solvent s) {
+        List<Solvent> ex = new java.util.ArrayList<>(exclude);
+        if (!ex.contains(s)) {
+            ex.add(s);
+        }
+        return new BlendConstraints(include, ex, families, excludeFamilies, fixed, minFraction, maxFraction, fractionRanges, boilingMinC,
+                boilingMaxC, minFlashPointC, maxIchClass, noCmr, maxCost, more);
+    }
+
     /** A copy with other further demands. */
     public BlendConstraints with(More m) {
         return new BlendConstraints(include, exclude, families, excludeFamilies, fixed, minFraction, maxFraction, fractionRanges, boilingMinC,

@@ -34,6 +34,17 @@ public record Material(String name, List<String> synonyms, MaterialKind kind, So
     }
 
     /** A copy marked as a user entry or as bundled data. */
+    /** The note phrase that marks a semicrystalline polymer (solvent-db/materials.csv, or a user's note). */
+    public static final String SEMICRYSTALLINE = "semicrystalline";
+
+    /**
+     * True when the note marks the material semicrystalline: its crystallites dissolve only near their melting range, so a
+     * solvent inside the sphere at 25 °C may only swell it (common practice, no source).
+     */
+    public boolean semicrystalline() {
+        return note != null && note.toLowerCase(java.util.Locale.ROOT).contains(SEMICRYSTALLINE);
+    }
+
     public Material withUserEntry(boolean user) {
         return new Material(name, synonyms, kind, sphere, source, note, user);
     }
