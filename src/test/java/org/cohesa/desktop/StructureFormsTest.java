@@ -265,6 +265,120 @@ class StructureFormsTest {
         assertTrue(m.source().contains("estimated from the structure"), m.source());
     }
 
+    @Test
+    void measuredPropertiesMoveValuesToThePropertyRouteWithTheirErrorsAndBadOnesAreRefused(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        // Dimethyl sulfoxide: the group method has no polar increment for S=O, so δP needs the dipole moment.
+        // ρ 1.100 g/cm³, n_D 1.4793, μ 3.96 D, ΔHvap(298 K) 52.9 kJ/mol (CRC Handbook; from memory);
+        // published (18.4, 16.4, 10.2) MPa½ (Hansen handbook 2007, table A.1; from memory).
+        String dmso = "CS(C)=O";
+        SolventEditor ed = openEditor(robot);
+        robot.interact(() -> {
+            ed.field("name").setText("DMSO (my lot)");
+            ed.structure().smilesProperty().set(dmso);
+            ed.structure().estimate();
+        });
+        fx.awaitJobs();
+        assertTrue(text(ed, "#structure-values").contains("not covered by the method"), "without μ the group method gives no δP");
+        assertTrue(text(ed, "#structure-problem").startsWith("SMILES 'CS(C)=O'"), "and the entry cannot be filled: " + text(ed, "#structure-problem"));
+        assertFalse(ed.structure().measuredField("density").getParent().isVisible(), "the library form's own density field is the one used");
+
+        // each measured field is checked at the boundary: one line naming the field and the value, the field outlined
+        for (String[] bad : new String[][] {{"refractive-index", "2.5", "Refractive index n_D '2.5': must lie between 1.2 and 1.9"},
+            {"dipole", "3,96", "Dipole moment (D) '3,96': not a number"}, {"hvap", "-4", "ΔHvap at 25 °C (kJ/mol) '-4': must lie between 5 and 200"}}) {
+            robot.interact(() -> {
+                ed.structure().measuredField(bad[0]).setText(bad[1]);
+                ed.structure().estimate();
+            });
+            fx.awaitJobs();
+            String line = text(ed, "#structure-problem");
+            assertTrue(line.startsWith(bad[2]), line);
+            assertFalse(line.contains("\n"), "one line");
+            assertNull(ed.structure().resultProperty().get(), "nothing estimated from a bad value");
+            assertTrue(ed.structure().measuredField(bad[0]).getStyleClass().contains("field-error"), bad[0] + " is outlined");
+            robot.interact(() -> ed.structure().measuredField(bad[0]).setText(""));
+            assertFalse(ed.structure().measuredField(bad[0]).getStyleClass().contains("field-error"), "the outline goes with the bad text");
+        }
+
+        robot.interact(() -> {
+            ed.field("density").setText("1.100");
+            ed.structure().measuredField("refractive-index").setText("1.4793");
+            ed.structure().measuredField("dipole").setText("3.96");
+            ed.structure().measuredField("hvap").setText("52.9");
+            ed.structure().estimate();
+        });
+        fx.awaitJobs();
+        MeasuredProperties measured = new MeasuredProperties(1.100, 1.4793, 3.96, 52.9);
+        StructureEstimate e = StructureEntries.estimate("SMILES", dmso, measured);
+        String shown = text(ed, "#structure-values");
+        assertTrue(shown.contains("refractive index via molar refraction") && shown.contains("dipole moment (Hansen–Beerbower)")
+                && shown.contains("molar mass / given density") && shown.contains("enthalpy of vaporisation"), "every route is named: " + shown);
+        assertTrue(shown.contains("± 0.7") && shown.contains("± 1.0") && shown.contains("± 0.6"),
+                "the property routes' errors (δD 0.65, δP 1.01, δt 0.60) are shown: " + shown);
+        assertEquals(String.format(java.util.Locale.ROOT, "%.1f", e.dP().value()), ed.field("dP").getText(), "δP filled from μ, as the core gives it");
+        assertEquals(String.format(java.util.Locale.ROOT, "%.1f", e.dD().value()), ed.field("dD").getText());
+        assertTrue(Math.abs(e.dP().value() - 16.4) <= 2.19, "δP within the route's P90 (2.19) of the published 16.4: " + e.dP().value());
+        assertTrue(Math.abs(e.dD().value() - 18.4) <= 1.37, "δD within the route's P90 (1.37) of the published 18.4: " + e.dD().value());
+        assertTrue(text(ed, "#structure-cautions").contains("δP comes from the measured properties instead"), text(ed, "#structure-cautions"));
+        String check = ((Label) ed.dialog().getDialogPane().lookup("#structure-check")).getText();
+        assertTrue(check.contains("against δt") && check.contains("δH as the remainder of δt"), check);
+        shoot1280(robot, ed, "structure-property-route-1280x800");
+
+        // a measured value changed after the estimate must be estimated again before saving
+        boolean[] ok = new boolean[1];
+        robot.interact(() -> {
+            ed.structure().measuredField("dipole").setText("4.1");
+            ok[0] = ed.validate();
+        });
+        assertFalse(ok[0]);
+        robot.interact(() -> {
+            ed.structure().measuredField("dipole").setText("3.96");
+            ed.structure().estimate();
+        });
+        fx.awaitJobs();
+        robot.interact(() -> ok[0] = ed.validate());
+        assertTrue(ok[0], text(ed, "#editor-problems"));
+        Solvent s = ed.result();
+        assertEquals(Double.parseDouble(ed.field("dP").getText()), s.hansen().dP(), 1e-9);
+        assertTrue(s.note().contains("dipole moment (Hansen–Beerbower)"), "the note names the route: " + s.note());
+        assertEquals(52.9, s.hvapKjPerMol(), 1e-9, "the measured ΔHvap is kept with the entry");
+        assertEquals("user", s.sources().get("hvap"));
+        robot.interact(() -> ed.dialog().close());
+
+        // the Material step's structure form has its own density field: the same core estimate gives the centre
+        robot.interact(() -> {
+            fx.workbench.show(Screen.TARGET);
+            robot.lookup("#target-ways").queryAs(TabPane.class).getSelectionModel().select(2);
+        });
+        Parent form = robot.lookup("#target-structure").queryAs(Parent.class);
+        assertTrue(form.lookup("#structure-density").getParent().isVisible());
+        robot.interact(() -> {
+            ((TextField) form.lookup("#structure-target-name")).setText("DMSO-like solute (test)");
+            ((TextField) form.lookup("#structure-smiles")).setText(dmso);
+            ((TextField) form.lookup("#structure-density")).setText("1.100");
+            ((TextField) form.lookup("#structure-dipole")).setText("3.96");
+            ((Button) form.lookup("#structure-estimate")).fire();
+        });
+        fx.awaitJobs();
+        robot.interact(() -> ((Button) form.lookup("#structure-target-apply")).fire());
+        StructureEstimate t = StructureEntries.estimate("SMILES", dmso, new MeasuredProperties(1.100, null, 3.96, null));
+        assertEquals(Math.round(t.dP().value() * 10) / 10.0, fx.session.target().sphere().centre().dP(), 1e-9);
+    }
+
+    /** The dialog as on a 1280×800 screen, when -Dcohesa.screenshots=DIR is set. */
+    private static void shoot1280(FxRobot robot, SolventEditor ed, String name) {
+        String dir = System.getProperty("cohesa.screenshots");
+        if (dir == null || dir.isBlank()) {
+            return;
+        }
+        robot.interact(() -> {
+            ed.dialog().setWidth(1280);
+            ed.dialog().setHeight(800);
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.interact(() -> Snapshots.savePng(ed.dialog().getDialogPane().getScene().snapshot(null), Path.of(dir, name + ".png")));
+    }
+
     private SolventEditor openEditor(FxRobot robot) {
         return openEditor(robot, null);
     }

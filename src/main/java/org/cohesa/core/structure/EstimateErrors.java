@@ -20,6 +20,10 @@ final class EstimateErrors {
     static final double[] GROUP_VOLUME = {0.03, 0.06};
     static final double[] PROPERTY_DD = {0.65, 1.37};
     static final double[] PROPERTY_DP = {1.01, 2.19};
+    /** δH as the remainder √(δt² − δD² − δP²) with all three from measured properties (ΔHvap, n_D, μ, ρ). */
+    static final double[] PROPERTY_DH = {1.94, 5.10};
+    /** δt from ΔHvap and the molar volume, against the published δt. */
+    static final double[] PROPERTY_DT = {0.60, 1.60};
 
     /**
      * Families whose group-contribution error is much worse (more than 1.5 times the overall mean absolute error

@@ -14,7 +14,8 @@ import org.cohesa.core.activity.LleGroups;
  *       group method;</li>
  *   <li>δP: dipole moment and molar volume (Hansen–Beerbower) when known, else the group method;</li>
  *   <li>δH: the group method (on the validation set it beat the remainder √(δt² − δD² − δP²), MAE 1.52 vs
- *       1.94 MPa^½, because the remainder collects the errors of the other three);</li>
+ *       1.94 MPa^½, because the remainder collects the errors of the other three); with ΔHvap, n_D and μ given the
+ *       remainder is offered beside it for comparison ({@link #hydrogenBondingRemainder});</li>
  *   <li>molar volume: M/ρ from a given density, else the group method's increments (marked estimated).</li>
  * </ul>
  * The property route needs the molar volume; with no density it uses the group volume.
@@ -24,6 +25,8 @@ public final class StructureEstimator {
     static final String GROUP = "group contribution (Mathieu 2018)";
     static final String REFRACTIVE = "refractive index via molar refraction (Lorentz–Lorenz, Mathieu 2018 relation)";
     static final String DIPOLE = "dipole moment (Hansen–Beerbower)";
+    static final String REMAINDER = "remainder √(δt² − δD² − δP²), δt from the enthalpy of vaporisation";
+    static final String VAPORISATION = "enthalpy of vaporisation and molar volume (Hildebrand–Scott)";
 
     private StructureEstimator() {
     }
@@ -35,6 +38,37 @@ public final class StructureEstimator {
     public static double[] muchWorseFamilyError(String family) {
         double[] e = EstimateErrors.MUCH_WORSE.get(family);
         return e == null ? null : e.clone();
+    }
+
+    /**
+     * δt from a given enthalpy of vaporisation and the estimate's molar volume ({@link PropertyRoute#totalFromVaporisation}),
+     * with that route's error on the published table; null without ΔHvap or a molar volume. A check on the three
+     * components (√(δD² + δP² + δH²) should fall within its error), and the δt the remainder route starts from.
+     */
+    public static EstimatedValue totalFromVaporisation(StructureEstimate e, MeasuredProperties measured) {
+        return total(measured == null ? MeasuredProperties.NONE : measured, e.molarVolume());
+    }
+
+    /**
+     * δH as the remainder √(δt² − δD² − δP²) of the δt from ΔHvap, with its error on the published table — measured
+     * with δD and δP from the property route as well, so it is given only when the estimate's δD and δP come from
+     * n_D and μ; null otherwise. The estimate keeps the group δH (closer on that table); this is for comparison.
+     */
+    public static EstimatedValue hydrogenBondingRemainder(StructureEstimate e, MeasuredProperties measured) {
+        EstimatedValue t = totalFromVaporisation(e, measured);
+        if (t == null || e.dD() == null || !REFRACTIVE.equals(e.dD().route()) || e.dP() == null || !DIPOLE.equals(e.dP().route())) {
+            return null;
+        }
+        return new EstimatedValue(PropertyRoute.hydrogenBondingRemainder(t.value(), e.dD().value(), e.dP().value()), REMAINDER,
+                EstimateErrors.PROPERTY_DH[0], EstimateErrors.PROPERTY_DH[1], true);
+    }
+
+    private static EstimatedValue total(MeasuredProperties m, EstimatedValue volume) {
+        if (m.hvapKjPerMol() == null || volume == null) {
+            return null;
+        }
+        double t = PropertyRoute.totalFromVaporisation(m.hvapKjPerMol() * 1000, volume.value());
+        return Double.isFinite(t) ? new EstimatedValue(t, VAPORISATION, EstimateErrors.PROPERTY_DT[0], EstimateErrors.PROPERTY_DT[1], true) : null;
     }
 
     public static StructureEstimate estimate(Structure structure, MeasuredProperties measured) {
@@ -70,8 +104,15 @@ public final class StructureEstimator {
                 : new EstimatedValue(group.dH(), GROUP, EstimateErrors.GROUP_DH[0], EstimateErrors.GROUP_DH[1], true);
 
         if (!group.uncovered().isEmpty()) {
+            // say whether the measured properties filled what the group method could not
+            List<String> open = new ArrayList<>();
+            List<String> filled = new ArrayList<>();
+            (group.dD() == null ? (dD == null ? open : filled) : new ArrayList<String>()).add("δD");
+            (group.dP() == null ? (dP == null ? open : filled) : new ArrayList<String>()).add("δP");
+            (group.dH() == null ? (dH == null ? open : filled) : new ArrayList<String>()).add("δH");
             warnings.add("the group method has no published increment for " + String.join(", ", group.uncovered())
-                    + "; components that need it are not estimated");
+                    + (open.isEmpty() && !filled.isEmpty() ? "; " + String.join(" and ", filled) + " come" + (filled.size() == 1 ? "s" : "")
+                            + " from the measured properties instead" : "; components that need it are not estimated"));
         }
         double[] worse = EstimateErrors.MUCH_WORSE.get(family);
         if (worse != null) {

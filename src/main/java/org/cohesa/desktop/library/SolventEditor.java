@@ -52,6 +52,7 @@ public final class SolventEditor {
     private final Label problems = new Label();
     private final Dialog<Solvent> dialog = new Dialog<>();
     private final StructurePane structure;
+    private javafx.scene.control.ScrollPane scroller;
     private final Label filledHint = new Label();
     /** Fields the last estimate filled, with the text it put there (re-estimating replaces them). */
     private final Map<String, String> filledByEstimate = new LinkedHashMap<>();
@@ -90,6 +91,9 @@ public final class SolventEditor {
         ColumnConstraints c2 = new ColumnConstraints();
         ColumnConstraints c3 = new ColumnConstraints(160, 200, Double.MAX_VALUE);
         c3.setHgrow(Priority.ALWAYS);
+        // the labels keep their words whole (the form may scroll, which takes a scroll bar's width)
+        c0.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        c2.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         grid.getColumnConstraints().addAll(c0, c1, c2, c3);
         for (int i = 0; i < FIELDS.length; i++) {
             String col = FIELDS[i][0];
@@ -127,7 +131,7 @@ public final class SolventEditor {
                 if (showingStored) {
                     showingStored = false;
                 } else {
-                    fillFromEstimate(r.estimate());
+                    fillFromEstimate(r.estimate(), r.measured());
                 }
             });
             Label intro = new Label("From a structure (optional): give a SMILES and the empty fields are estimated; values you type stay.");
@@ -147,7 +151,12 @@ public final class SolventEditor {
             showingStored = true;
             structure.estimate();
         }
-        dialog.getDialogPane().setContent(content);
+        // on a small screen the form scrolls, so Save stays in the window
+        scroller = new javafx.scene.control.ScrollPane(content);
+        scroller.setFitToWidth(true);
+        scroller.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
+        dialog.getDialogPane().setContent(scroller);
+        dialog.setOnShown(e -> fitWindow());
         dialog.getDialogPane().setPrefWidth(920);
         dialog.getDialogPane().getButtonTypes().addAll(ButtonType.OK, ButtonType.CANCEL);
         Button ok = (Button) dialog.getDialogPane().lookupButton(ButtonType.OK);
@@ -194,7 +203,7 @@ public final class SolventEditor {
     }
 
     /** Fills the empty fields (and those the previous estimate filled) from a fresh estimate. */
-    private void fillFromEstimate(org.cohesa.core.structure.StructureEstimate e) {
+    private void fillFromEstimate(org.cohesa.core.structure.StructureEstimate e, MeasuredProperties measured) {
         filledByEstimate.forEach((col, text) -> {
             TextField tf = fields.get(col);
             if (text.equals(tf.getText())) {
@@ -217,6 +226,11 @@ public final class SolventEditor {
             structure.showProblem(ErrorText.of(ex));
             showFilled(null);
             return;
+        }
+        // a ΔHvap measured in the structure part is kept with the entry as the user's value, unless the entry has one
+        if (measured != null && measured.hvapKjPerMol() != null && !row.containsKey("hvap_kj_mol")) {
+            row.put("hvap_kj_mol", String.format(java.util.Locale.ROOT, "%s", measured.hvapKjPerMol()));
+            row.put("src_hvap", "user");
         }
         List<String> filled = new ArrayList<>();
         row.forEach((col, value) -> {
@@ -250,6 +264,14 @@ public final class SolventEditor {
 
     /** The dialog grows with what the structure part shows, so Save never moves out of the window. */
     private void fitWindow() {
+        if (scroller == null) {
+            return;
+        }
+        // as tall as the content, but never taller than the screen leaves room for (header and buttons: about 170 px)
+        double limit = javafx.stage.Screen.getPrimary().getVisualBounds().getHeight() - 170;
+        javafx.scene.Node content = scroller.getContent();
+        double width = scroller.getWidth() > 0 ? scroller.getWidth() : 900;
+        scroller.setPrefViewportHeight(Math.max(200, Math.min(content.prefHeight(width), limit)));
         if (dialog.getDialogPane().getScene() != null && dialog.getDialogPane().getScene().getWindow() != null) {
             dialog.getDialogPane().getScene().getWindow().sizeToScene();
         }
@@ -271,6 +293,9 @@ public final class SolventEditor {
         if (smiles.isEmpty()) {
             row.put("smiles", "");
             return null;
+        }
+        if (structure.isStale()) {
+            return "SMILES '" + smiles + "': a measured value changed since the estimate; press Estimate again before saving";
         }
         if (!smiles.equals(estimatedSmiles)) {
             if (smiles.equals(original.getOrDefault("smiles", ""))) {

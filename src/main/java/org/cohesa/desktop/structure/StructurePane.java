@@ -1,5 +1,6 @@
 package org.cohesa.desktop.structure;
 
+import java.util.List;
 import java.util.Locale;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
@@ -40,7 +41,7 @@ import org.cohesa.store.StructureEntries;
 public final class StructurePane {
 
     /** A structure with its estimate and drawing (drawing null when CDK could not lay it out). */
-    public record Result(StructureEstimate estimate, Image drawing, String drawingProblem) {
+    public record Result(StructureEstimate estimate, Image drawing, String drawingProblem, MeasuredProperties measured) {
     }
 
     private final int drawingWidth;
@@ -57,9 +58,20 @@ public final class StructurePane {
     private final GridPane values = new GridPane();
     private final Label groups = new Label();
     private final VBox cautions = new VBox(3);
+    private final Label check = new Label();
     private final VBox root;
+    /** Measured properties typed in the pane (optional), each moving its component to the property route. */
+    private final TextField density = measuredField("structure-density", "e.g. 0.789");
+    private final TextField refractiveIndex = measuredField("structure-refractive-index", "e.g. 1.361");
+    private final TextField dipole = measuredField("structure-dipole", "e.g. 1.69");
+    private final TextField hvap = measuredField("structure-hvap", "e.g. 42.3");
+    private final HBox densityBox;
+    private boolean hostGivesDensity;
+    /** True when a measured value changed after the last estimate (the values shown are no longer this input's). */
+    private boolean stale;
+    static final String STALE = "A measured value changed since the estimate: press Estimate again.";
     private final ReadOnlyObjectWrapper<Result> result = new ReadOnlyObjectWrapper<>();
-    private Supplier<MeasuredProperties> measured = () -> MeasuredProperties.NONE;
+    private Supplier<MeasuredProperties> host = () -> MeasuredProperties.NONE;
     private Consumer<Result> onEstimated = r -> { };
     private Runnable onShown = () -> { };
 
@@ -90,6 +102,26 @@ public final class StructurePane {
         run.setOnAction(e -> estimate());
         HBox input = new HBox(8, label, smiles, run);
         input.setAlignment(Pos.CENTER_LEFT);
+        densityBox = labelled(DENSITY, density);
+        Label measuredTitle = new Label("Measured (optional):");
+        measuredTitle.getStyleClass().add("hint");
+        measuredTitle.setTooltip(new javafx.scene.control.Tooltip("Each measured value moves its component to the property route: "
+                + "n_D → δD (molar refraction), μ → δP (Hansen–Beerbower), density → molar volume (M/ρ), ΔHvap → δt as a check"));
+        javafx.scene.layout.FlowPane measuredRow = new javafx.scene.layout.FlowPane(14, 4, measuredTitle, densityBox,
+                labelled(REFRACTIVE_INDEX, refractiveIndex), labelled(DIPOLE, dipole), labelled(HVAP, hvap));
+        measuredRow.setId("structure-measured");
+        measuredRow.setAlignment(Pos.CENTER_LEFT);
+        // a value changed after the estimate makes it stale, as a changed SMILES does
+        for (TextField f : List.of(density, refractiveIndex, dipole, hvap)) {
+            f.textProperty().addListener((o, a, b) -> {
+                f.getStyleClass().remove("field-error");
+                if (result.get() != null) {
+                    result.set(null);
+                    stale = true;
+                    showProblem(STALE);
+                }
+            });
+        }
 
         problem.setId("structure-problem");
         problem.getStyleClass().add("form-problems");
@@ -125,12 +157,16 @@ public final class StructurePane {
         groups.setId("structure-groups");
         groups.setWrapText(true);
         cautions.setId("structure-cautions");
-        VBox estimate = new VBox(6, facts, values, groups, cautions);
+        check.setId("structure-check");
+        check.setWrapText(true);
+        check.getStyleClass().add("hint");
+        show(check, false);
+        VBox estimate = new VBox(6, facts, values, check, groups, cautions);
         facts.setWrapText(true);
         // drawing beside the values where there is room (the values take the rest of the width), above them in a
         // narrow side panel (the values take the whole width)
         javafx.scene.layout.FlowPane body = new javafx.scene.layout.FlowPane(14, 8, frame, estimate);
-        root = new VBox(8, input, problem, body);
+        root = new VBox(8, input, measuredRow, problem, body);
         body.prefWrapLengthProperty().bind(root.widthProperty());
         estimate.prefWidthProperty().bind(javafx.beans.binding.Bindings.createDoubleBinding(() -> {
             double beside = root.getWidth() - (drawingWidth + 2) - 14 - 1;
@@ -153,9 +189,95 @@ public final class StructurePane {
         return result.getReadOnlyProperty();
     }
 
-    /** Measured properties to pass to the estimate (e.g. a density typed in the same form); may throw to refuse. */
+    /**
+     * The density comes from the form that holds the pane (its own density field; may throw to refuse): the pane's
+     * density field goes, its refractive index, dipole moment and ΔHvap stay.
+     */
     public void setMeasured(Supplier<MeasuredProperties> measured) {
-        this.measured = measured;
+        this.host = measured;
+        hostGivesDensity = true;
+        show(densityBox, false);
+    }
+
+    /** True when a measured value changed after the estimate shown: the form must estimate again before it keeps anything. */
+    public boolean isStale() {
+        return stale;
+    }
+
+    /** The measured field of the pane: "density", "refractive-index", "dipole" or "hvap" (for tests and forms). */
+    public TextField measuredField(String which) {
+        return switch (which) {
+            case "density" -> density;
+            case "refractive-index" -> refractiveIndex;
+            case "dipole" -> dipole;
+            case "hvap" -> hvap;
+            default -> throw new IllegalArgumentException(which);
+        };
+    }
+
+    /** The measured properties the form holds now; a bad field is refused in one line naming it and its value (and outlined). */
+    public MeasuredProperties measured() {
+        MeasuredProperties h = host.get();
+        Double rho = hostGivesDensity ? h.density() : number(DENSITY, density, 0.3, 3.5);
+        Double n = number(REFRACTIVE_INDEX, refractiveIndex, 1.2, 1.9);
+        Double mu = number(DIPOLE, dipole, 0, 12);
+        Double dh = number(HVAP, hvap, 5, 200);
+        return new MeasuredProperties(rho, n, mu, dh);
+    }
+
+    static final String DENSITY = "Density (g/cm³)";
+    static final String REFRACTIVE_INDEX = "Refractive index n_D";
+    static final String DIPOLE = "Dipole moment (D)";
+    static final String HVAP = "ΔHvap at 25 °C (kJ/mol)";
+
+    /**
+     * An optional number in its physical range (the ranges of {@link MeasuredProperties}: liquids at 20–25 °C):
+     * empty → null; anything else wrong → one line naming the field and the value.
+     */
+    private static Double number(String label, TextField f, double min, double max) {
+        String t = f.getText() == null ? "" : f.getText().strip();
+        if (t.isEmpty()) {
+            return null;
+        }
+        double v;
+        try {
+            v = Double.parseDouble(t);
+        } catch (NumberFormatException e) {
+            mark(f);
+            throw new org.cohesa.core.InvalidInputException(label, t, "not a number (use a dot as decimal separator)");
+        }
+        if (!Double.isFinite(v) || v < min || v > max) {
+            mark(f);
+            throw new org.cohesa.core.InvalidInputException(label, t, "must lie between " + plain(min) + " and " + plain(max)
+                    + (label.equals(REFRACTIVE_INDEX) ? " (organic liquids)" : ""));
+        }
+        return v;
+    }
+
+    private static String plain(double v) {
+        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+    }
+
+    private static void mark(TextField f) {
+        if (!f.getStyleClass().contains("field-error")) {
+            f.getStyleClass().add("field-error");
+        }
+    }
+
+    private static TextField measuredField(String id, String prompt) {
+        TextField f = new TextField();
+        f.setId(id);
+        f.setPromptText(prompt);
+        f.setPrefColumnCount(6);
+        return f;
+    }
+
+    private static HBox labelled(String text, TextField f) {
+        Label l = new Label(text);
+        l.setLabelFor(f);
+        HBox h = new HBox(6, l, f);
+        h.setAlignment(Pos.CENTER_LEFT);
+        return h;
     }
 
     /** Called on the FX thread after each successful estimate. */
@@ -184,7 +306,7 @@ public final class StructurePane {
         String text = smiles.getText() == null ? "" : smiles.getText().strip();
         MeasuredProperties m;
         try {
-            m = measured.get();
+            m = measured();
         } catch (RuntimeException ex) {
             fail(ErrorText.of(ex));
             return;
@@ -200,7 +322,7 @@ public final class StructurePane {
             } catch (RuntimeException ex) {
                 why = ErrorText.of(ex);
             }
-            return new Result(e, img, why);
+            return new Result(e, img, why, m);
         }, r -> {
             run.setDisable(false);
             show(r);
@@ -227,9 +349,43 @@ public final class StructurePane {
         values.getChildren().clear();
         groups.setText("");
         cautions.getChildren().clear();
+        show(check, false);
+    }
+
+    /**
+     * With a measured ΔHvap: δt by the property route as its own row, the sum of the three components against it, and
+     * (with n_D and μ as well) δH as the remainder of δt beside the group δH that is kept.
+     */
+    private void showCheck(Result r) {
+        StructureEstimate e = r.estimate();
+        EstimatedValue total = StructureEstimator.totalFromVaporisation(e, r.measured());
+        if (total == null) {
+            show(check, false);
+            return;
+        }
+        row(5, "δt (MPa½)", total);
+        StringBuilder b = new StringBuilder();
+        if (e.hasHansen()) {
+            double sum = Math.sqrt(e.dD().value() * e.dD().value() + e.dP().value() * e.dP().value() + e.dH().value() * e.dH().value());
+            double gap = Math.abs(sum - total.value());
+            b.append(String.format(Locale.ROOT, "Check: √(δD² + δP² + δH²) = %.1f against δt %.1f from ΔHvap, a gap of %.1f MPa½%s.", sum,
+                    total.value(), gap, gap > total.expectedP90() ? " — more than 90 % of that route's errors: one of the values above is likely off"
+                            : " (within 90 % of that route's errors)"));
+        }
+        EstimatedValue rest = StructureEstimator.hydrogenBondingRemainder(e, r.measured());
+        if (rest != null) {
+            b.append(b.length() == 0 ? "" : " ").append(String.format(Locale.ROOT, "δH as the remainder of δt: %.1f (± %.1f, 90 %% within %.1f); "
+                    + "the group δH above is kept, it was closer on the published table (± %.1f).", rest.value(), rest.expectedMae(),
+                    rest.expectedP90(), e.dH() == null ? Double.NaN : e.dH().expectedMae()));
+        } else if (e.dD() != null && e.dP() != null) {
+            b.append(b.length() == 0 ? "" : " ").append("δH as the remainder of δt needs δD and δP from measured values too (give n_D and the dipole moment).");
+        }
+        check.setText(b.toString());
+        show(check, b.length() > 0);
     }
 
     private void show(Result r) {
+        stale = false;
         showProblem(null);
         StructureEstimate e = r.estimate();
         drawing.setImage(r.drawing());
@@ -243,13 +399,14 @@ public final class StructurePane {
         row(2, "δP (MPa½)", e.dP());
         row(3, "δH (MPa½)", e.dH());
         row(4, "Vm (cm³/mol)", e.molarVolume());
+        showCheck(r);
         groups.setText("UNIFAC groups: " + (e.unifac().complete() ? StructureEntries.groupNames(e.unifac().groups())
                 : "none (atoms " + String.join(", ", e.unifac().unplaced()) + " have no group; activity falls back to Flory–Huggins)"));
         cautions.getChildren().clear();
         for (String w : e.warnings()) {
             Label l = new Label("⚠ " + w);
             l.setWrapText(true);
-            l.getStyleClass().add(w.contains("much less well") || w.contains("no published increment") ? "form-problems" : "hint");
+            l.getStyleClass().add(w.contains("much less well") || (w.contains("no published increment") && !w.contains("instead")) ? "form-problems" : "hint");
             cautions.getChildren().add(l);
         }
         result.set(r);

@@ -53,6 +53,9 @@ class HansenEstimateTest {
         assertTrue(validation.of("property δD").all.size() >= 100, validation.summary());
         assertStated("property δD", EstimateErrors.PROPERTY_DD);
         assertStated("property δP", EstimateErrors.PROPERTY_DP);
+        // Inputs as above plus CRC ΔHvap at 298 K: δt against the published δt, and δH as the remainder of it
+        assertStated("property δt", EstimateErrors.PROPERTY_DT);
+        assertStated("property δH", EstimateErrors.PROPERTY_DH);
     }
 
     @Test
@@ -102,6 +105,18 @@ class HansenEstimateTest {
         assertEquals(58.37, prop.molarVolume().value(), 0.05);
         assertTrue(Math.abs(prop.dD().value() - 15.8) <= EstimateErrors.PROPERTY_DD[1]);
         assertTrue(Math.abs(prop.dP().value() - 8.8) <= EstimateErrors.PROPERTY_DP[1]);
+        // ΔHvap(298 K) 42.32 kJ/mol (CRC 2014): δt within the route's P90 of the published √(15.8² + 8.8² + 19.4²) = 26.5,
+        // and δH as its remainder within that route's P90 of 19.4; the estimate itself keeps the group δH
+        MeasuredProperties withHvap = new MeasuredProperties(0.7893, 1.3611, 1.69, 42.32);
+        StructureEstimate all = StructureEstimator.estimate(st, withHvap);
+        EstimatedValue dt = StructureEstimator.totalFromVaporisation(all, withHvap);
+        assertEquals(StructureEstimator.VAPORISATION, dt.route());
+        assertTrue(Math.abs(dt.value() - Math.sqrt(15.8 * 15.8 + 8.8 * 8.8 + 19.4 * 19.4)) <= EstimateErrors.PROPERTY_DT[1], "δt " + dt.value());
+        EstimatedValue rest = StructureEstimator.hydrogenBondingRemainder(all, withHvap);
+        assertTrue(Math.abs(rest.value() - 19.4) <= EstimateErrors.PROPERTY_DH[1], "δH remainder " + rest.value());
+        assertEquals(StructureEstimator.GROUP, all.dH().route());
+        assertEquals(null, StructureEstimator.hydrogenBondingRemainder(group, withHvap), "no remainder from group-route δD and δP");
+        assertEquals(null, StructureEstimator.totalFromVaporisation(prop, prop == null ? null : new MeasuredProperties(0.7893, 1.3611, 1.69, null)));
     }
 
     @Test
