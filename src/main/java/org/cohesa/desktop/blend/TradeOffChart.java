@@ -226,8 +226,8 @@ public final class TradeOffChart {
         double high = hi + pad;
         double step = niceStep((high - low) / 6);
         axis.setAutoRanging(false);
-        // a mark at 0 sits half a step above the axis line, so it is not cut; the axis names no value below 0
-        axis.setLowerBound(fromZero ? -step / 2 : Math.floor(low / step) * step);
+        // a mark at 0 sits a step above the axis line, so it is not cut (ticks stay on whole steps); no value below 0 is named
+        axis.setLowerBound(fromZero ? -step : Math.floor(low / step) * step);
         axis.setUpperBound(Math.ceil(high / step) * step);
         axis.setTickUnit(step);
         axis.setMinorTickVisible(false);
