@@ -75,7 +75,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
     @Option(names = "--because", paramLabel = "REASONS", description = {
             "Why the solvent is replaced (repeat or separate with commas): reprotoxic, carcinogen, mutagen, cmr, organ, toxic, aspiration, health, ozone,",
             "flammable, ich, high-boiling, low-boiling. No candidate is as bad as the original on a named reason.",
-            "Default: every CMR, organ-damage (STOT) and acute-toxicity statement the original carries."})
+            "Default: every CMR, organ-damage (STOT) and acute-toxicity statement the original carries (acute toxicity category 4, 'harmful', alone excepted)."})
     List<String> because = new ArrayList<>();
 
     @Mixin
@@ -167,7 +167,7 @@ public final class ReplaceCommand extends CohesaSubcommand {
             out().println(atTemperature.describe() + (centred ? " (the original's own sphere is centred on its shifted parameters)" : ""));
         }
         out().println(replacedFor.isEmpty()
-                ? "replaced for: nothing named, and " + original.name() + " carries no CMR, organ-damage or acute-toxicity statement; --because says what must improve"
+                ? "replaced for: nothing named, and " + original.name() + " carries no CMR, organ-damage or acute-toxicity statement above category 4 (harmful); --because says what must improve"
                 : "replaced for: " + String.join("; ", replacedFor));
         out().println(BlendView.summary(r));
         if (waterAsOriginal != null) {
