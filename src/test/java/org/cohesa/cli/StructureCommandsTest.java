@@ -67,6 +67,26 @@ class StructureCommandsTest {
     }
 
     @Test
+    void measuredPropertiesGiveTheSameEntryAsTheDesktopForm() {
+        // DMSO: no group δP (S=O); ρ 1.100 g/cm³, n_D 1.4793, μ 3.96 D (CRC Handbook; from memory)
+        CliTestSupport.Result r = CliTestSupport.run(db(), "solvents", "add", "--name", "my dmso", "--smiles", "CS(C)=O", "--set", "density=1.100",
+                "--refractive-index", "1.4793", "--dipole", "3.96", "--json");
+        assertEquals(0, r.exitCode(), r.err());
+        java.util.Map<String, String> row = new java.util.LinkedHashMap<>(java.util.Map.of("name", "my dmso", "density", "1.100"));
+        org.cohesa.store.StructureEntries.fillSolventRow(row, org.cohesa.store.StructureEntries.estimate("SMILES", "CS(C)=O",
+                new org.cohesa.core.structure.MeasuredProperties(1.100, 1.4793, 3.96, null)), new org.cohesa.store.StructureEntries.Fields("", "", "", ""),
+                "CS(C)=O");
+        assertEquals(Double.parseDouble(row.get("dP")), r.json().get("dP").asDouble(), 1e-9, r.out());
+        assertTrue(r.json().toString().contains("dipole moment (Hansen–Beerbower)"), r.out());
+        CliTestSupport.Result bad = CliTestSupport.run(db(), "solvents", "add", "--name", "my dmso 2", "--smiles", "CS(C)=O", "--dipole", "40");
+        assertEquals(2, bad.exitCode());
+        assertTrue(bad.err().startsWith("error: --dipole '40': must be between"), bad.err());
+        CliTestSupport.Result alone = CliTestSupport.run(db(), "solvents", "add", "--name", "my dmso 3", "--dipole", "3.96");
+        assertEquals(2, alone.exitCode());
+        assertTrue(alone.err().contains("--dipole '3.96': is used with --smiles only"), alone.err());
+    }
+
+    @Test
     void aDrugSubstanceByItsStructureGetsTheDefaultRadiusWithACaution() {
         CliTestSupport.Result r = CliTestSupport.run(db(), "materials", "add", "--name", "ibuprofen test", "--smiles", "CC(C)Cc1ccc(cc1)C(C)C(=O)O");
         assertEquals(0, r.exitCode(), r.err());

@@ -151,6 +151,10 @@ public final class SolventsCommand extends CohesaSubcommand {
         @Option(names = "--price", description = "Price per litre, any currency.") String price;
         @Option(names = "--smiles", description = "Structure: formula, molar mass, UNIFAC groups and the Hansen parameters and molar volume"
                 + " you do not give are estimated from it (marked estimated, with route and error in the note).") String smiles;
+        @Option(names = "--refractive-index", paramLabel = "N_D", description = "With --smiles: measured refractive index n_D (δD from the molar refraction, as the desktop form).")
+        String refractiveIndex;
+        @Option(names = "--dipole", paramLabel = "DEBYE", description = "With --smiles: dipole moment, debye (δP by Hansen–Beerbower, as the desktop form).")
+        String dipole;
         @Option(names = "--set", paramLabel = "COLUMN=VALUE", description = "Any other column, e.g. --set hazard_statements=\"H225 H319\".")
         Map<String, String> set = new LinkedHashMap<>();
 
@@ -172,7 +176,12 @@ public final class SolventsCommand extends CohesaSubcommand {
                 }
                 row.put(e.getKey(), e.getValue());
             }
-            List<String> estimated = smiles == null ? List.of() : org.cohesa.cli.structure.SolventFromStructure.fill(row, smiles);
+            if (smiles == null && (refractiveIndex != null || dipole != null)) {
+                throw new InvalidInputException(refractiveIndex != null ? "--refractive-index" : "--dipole",
+                        refractiveIndex != null ? refractiveIndex : dipole, "is used with --smiles only (it moves a structure estimate to the property route)");
+            }
+            List<String> estimated = smiles == null ? List.of()
+                    : org.cohesa.cli.structure.SolventFromStructure.fill(row, smiles, refractiveIndex, dipole);
             List<RowError> errors = new ArrayList<>();
             Solvent s = SolventFields.fromRow(row, 1, true, errors);
             if (s == null) {

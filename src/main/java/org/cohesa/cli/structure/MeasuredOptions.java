@@ -16,6 +16,11 @@ public final class MeasuredOptions {
     @Option(names = "--dipole", paramLabel = "DEBYE", description = "Dipole moment, debye (δP by Hansen–Beerbower).")
     String dipole;
 
+    /** The properties from option texts (null: not given), each checked as its option. */
+    static MeasuredProperties of(String density, String refractiveIndex, String dipole) {
+        return new MeasuredProperties(number("--density", density), number("--refractive-index", refractiveIndex), number("--dipole", dipole), null);
+    }
+
     public MeasuredProperties properties() {
         return new MeasuredProperties(number("--density", density), number("--refractive-index", refractiveIndex), number("--dipole", dipole), null);
     }

@@ -22,8 +22,18 @@ public final class SolventFromStructure {
 
     /** Fills {@code row} in place; returns the lines that say what was estimated. Refuses a bad SMILES (exit 2). */
     public static List<String> fill(Map<String, String> row, String smiles) {
+        return fill(row, smiles, null, null);
+    }
+
+    /**
+     * The same with a measured refractive index and dipole moment (text of --refractive-index and --dipole, null when
+     * not given): δD and δP then come from the property route, as in the desktop's form with the same values.
+     */
+    public static List<String> fill(Map<String, String> row, String smiles, String refractiveIndex, String dipole) {
         Double density = number(row.get("density"));
-        StructureEstimate e = StructureEstimates.estimate("--smiles", smiles, new MeasuredProperties(density, null, null, null));
+        MeasuredProperties given = MeasuredOptions.of(null, refractiveIndex, dipole);
+        StructureEstimate e = StructureEstimates.estimate("--smiles", smiles,
+                new MeasuredProperties(density, given.refractiveIndex(), given.dipoleDebye(), null));
         return StructureEntries.fillSolventRow(row, e, FIELDS, smiles);
     }
 
