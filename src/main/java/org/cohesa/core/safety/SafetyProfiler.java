@@ -9,6 +9,7 @@ import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.activity.ActivityModel;
 import org.cohesa.core.activity.ActivityModels;
 import org.cohesa.core.activity.CoexistingLiquids;
+import org.cohesa.core.activity.CoexistingLiquidsMulti;
 import org.cohesa.core.activity.Composition;
 import org.cohesa.core.safety.SafetyProfile.FlashPoint;
 import org.cohesa.core.safety.SafetyProfile.FlashPointStatus;
@@ -85,6 +86,8 @@ public final class SafetyProfiler {
                 if (n == 2 && !ideal) {
                     // inside the model's own miscibility gap the vapour is that of the coexisting layers
                     model = new CoexistingLiquids(model);
+                } else if (n > 2 && !ideal && x != null && CoexistingLiquidsMulti.splitsNear(model, x)) {
+                    model = new CoexistingLiquidsMulti(model);
                 }
             } catch (IllegalArgumentException e) {
                 modelProblem = e.getMessage();
@@ -161,6 +164,10 @@ public final class SafetyProfiler {
                                         + " coexisting layers, so the estimate is the same throughout the gap (Liaw et al. 2008)",
                                 two.name(), names.get(0), layers.get().x1Lean(), layers.get().x1Rich()));
                     }
+                }
+                if (r.hasFlashPoint() && model instanceof CoexistingLiquidsMulti multi && multi.splitAt(x, r.kelvin()).isPresent()) {
+                    notes.add("two liquid layers predicted at the flash point (" + multi.name()
+                            + "): the vapour is that over the coexisting layers, found by a liquid-liquid flash");
                 }
                 String m = FLASH_METHOD + ", activity model: " + modelName;
                 if (r.hasFlashPoint()) {

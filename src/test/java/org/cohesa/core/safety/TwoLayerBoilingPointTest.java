@@ -49,4 +49,19 @@ class TwoLayerBoilingPointTest {
         }
         System.out.println("two-layer bubble points with water, °C: " + table);
     }
+
+    @Test
+    void aTernaryWithTwoLayersBoilsAboveItsAzeotropeAndFlashesNearItsOrganicLayer() {
+        // toluene + ethanol + water 10/10/80 by volume: two layers. No liquid of these three boils below their
+        // minimum-boiling ternary azeotrope, 74.4 °C (CRC Handbook, "Azeotropic data", from memory); the toluene layer
+        // holds little water, so the blend flashes near toluene's 4 °C (library), a little below it for the ethanol in
+        // it. The one-liquid calculation gave a bubble point of 15.9 °C and a flash point of −51.7 °C.
+        Blend b = new Blend(List.of(new BlendComponent(LIB.resolve("s", "toluene"), 0.1), new BlendComponent(LIB.resolve("s", "ethanol"), 0.1),
+                new BlendComponent(LIB.resolve("s", "water"), 0.8)));
+        SafetyProfile p = SafetyProfiler.profile(b, 298.15);
+        assertTrue(p.initialBoilingPointC() > 74.4 - 1.5 && p.initialBoilingPointC() < 100, "bubble point " + p.initialBoilingPointC());
+        double fp = p.flashPoint().celsius();
+        assertTrue(fp > -10 && fp <= LIB.resolve("s", "toluene").flashPointC() + 0.5, "flash point " + fp);
+        assertTrue(p.flashPoint().detail().stream().anyMatch(d -> d.contains("two liquid layers")), p.flashPoint().detail().toString());
+    }
 }
