@@ -219,7 +219,8 @@ public final class BlendOptions {
         Solvent water = c.include().stream().filter(WaterMiscibility::isWater).findFirst().orElse(null);
         boolean asked = water != null || c.fixed().stream().anyMatch(f -> WaterMiscibility.isWater(f.solvent()))
                 || c.more().withWater() == WaterCheck.Need.MISCIBLE;
-        if (!asked && waterEntry != null) {
+        boolean wouldTakePart = c.include().isEmpty(); // an include list without water leaves it out anyway
+        if (!asked && wouldTakePart && waterEntry != null) {
             java.util.Optional<String> why = org.cohesa.core.blend.WaterInPolymer.reasonToLeaveOut(material, waterEntry);
             if (why.isPresent()) {
                 out = out.alsoExcluding(waterEntry);
