@@ -126,6 +126,7 @@ class CandidateRulesTest {
         }
         assertEquals(names(cli.json().get("blends")), names(rows), "the same candidates, in the same order, as `cohesa blend`");
 
+        assertTrue(m.leftOutBySafety().get(0).startsWith("Salt formers"), "the material's own rule comes first, before the lists every search has");
         // the switch lets them in, as --allow-salt-formers does
         List<BlendModel.Row> allowed = search(robot, () -> robot.lookup("#blend-allow-salt-formers").queryAs(CheckBox.class).setSelected(true));
         assertEquals("true", m.limits().get("allow-salt-formers"), "stored with the case's limits");

@@ -303,8 +303,9 @@ public final class BlendModel {
                         (done, total) -> p.update(total == 0 ? -1 : 0.9 * done / (double) total, null), token);
                 List<Row> out = new ArrayList<>();
                 notes[0] = SearchNotes.summary(r, c);
-                List<String> defaults = new ArrayList<>(SearchNotes.safetyDefaults(r.pool()));
-                defaults.addAll(SearchNotes.saltFormers(r.pool(), target.name(), character, allowed));
+                // the material's own rule first: the safety defaults' lists are the same for every search
+                List<String> defaults = new ArrayList<>(SearchNotes.saltFormers(r.pool(), target.name(), character, allowed));
+                defaults.addAll(SearchNotes.safetyDefaults(r.pool()));
                 notes[1] = defaults;
                 int i = 1;
                 for (BlendSuggestion s : r.suggestions()) {
