@@ -47,6 +47,20 @@ class HansenEstimateTest {
     }
 
     @Test
+    void groupMethodErrorsStandAgainstThePapersOwn() {
+        // Mathieu, ACS Omega 3 (2018) 17049, MAE δD / δP / δH on its external set of 769 Hansen-handbook values,
+        // 0.75 / 2.08 / 1.67 MPa½: second-hand, as tabulated in stanlo229/fluoropolymer_replacement_virtual_screening
+        // hsp/docs/literature_ml_hsp.md (commit 960a8d07), which states it read them from the paper.
+        // Not the same compounds (the paper's per-compound spreadsheet was not reachable). δD and δH must stay at or
+        // below the paper's figures; δP is above it by 0.11 as measured (2.19): the bound 0.12 keeps that shortfall
+        // from growing unnoticed (docs/methods.md, "Against the paper").
+        Assumptions.assumeTrue(validation != null, "reference-data folder not found; skipping the validation");
+        assertTrue(validation.of("group δD").mae() <= 0.75, validation.summary());
+        assertTrue(validation.of("group δH").mae() <= 1.67, validation.summary());
+        assertTrue(validation.of("group δP").mae() - 2.08 <= 0.12, validation.summary());
+    }
+
+    @Test
     void propertyRouteErrorsAreTheStatedOnes() {
         // Inputs: CRC refractive index and density (Haynes 2014), Poling et al. (2000) dipole moments.
         Assumptions.assumeTrue(validation != null, "reference-data folder not found; skipping the validation");
