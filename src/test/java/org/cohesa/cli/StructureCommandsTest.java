@@ -32,6 +32,16 @@ class StructureCommandsTest {
         CliTestSupport.Result table = CliTestSupport.run(db(), "estimate", "CCOC(C)=O", "--density", "0.900", "--dipole", "1.78");
         assertTrue(table.out().contains("dipole moment (Hansen–Beerbower)"), table.out());
         assertTrue(table.out().contains("molar mass / given density"), table.out());
+        // ΔHvap(298 K) 35.6 kJ/mol and n_D 1.3723 for ethyl acetate (CRC Handbook; from memory): δt within the route's P90 (1.60) of the
+        // published √(15.8² + 5.3² + 7.2²) = 18.2, in the table and the JSON, which keeps the estimate's own fields
+        CliTestSupport.Result dt = CliTestSupport.run(db(), "estimate", "CCOC(C)=O", "--density", "0.900", "--refractive-index", "1.3723",
+                "--dipole", "1.78", "--hvap", "35.6", "--json");
+        assertEquals(0, dt.exitCode(), dt.err());
+        assertTrue(Math.abs(dt.json().get("dt").get("value").asDouble() - Math.sqrt(15.8 * 15.8 + 5.3 * 5.3 + 7.2 * 7.2)) <= 1.60, dt.out());
+        assertEquals("C4H8O2", dt.json().get("structure").get("formula").asText());
+        assertTrue(dt.json().get("dH_remainder").get("route").asText().startsWith("remainder"), dt.out());
+        assertTrue(CliTestSupport.run(db(), "estimate", "CCOC(C)=O", "--hvap", "35.6").out().contains("check: √(δD² + δP² + δH²)"));
+        assertEquals(2, CliTestSupport.run(db(), "estimate", "CCOC(C)=O", "--hvap", "2").exitCode());
         CliTestSupport.Result mine = CliTestSupport.run(db(), "solvents", "--mine", "--json");
         assertEquals(0, mine.json().size(), "estimate must not store anything");
     }

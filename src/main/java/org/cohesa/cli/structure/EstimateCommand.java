@@ -22,17 +22,30 @@ public final class EstimateCommand extends CohesaSubcommand {
     @Mixin
     MeasuredOptions measured = new MeasuredOptions();
 
-    @Override
-    protected void execute() {
-        StructureEstimate e = StructureEstimates.estimate("SMILES", smiles, measured.properties());
-        if (json()) {
-            Output.json(out(), e);
-            return;
-        }
-        print(e);
+    /**
+     * The estimate with, when ΔHvap is given, δt from it ({@code dt}) and δH as its remainder ({@code dH_remainder},
+     * only with δD and δP from n_D and μ); both null otherwise.
+     */
+    record Report(@com.fasterxml.jackson.annotation.JsonUnwrapped StructureEstimate estimate,
+            @com.fasterxml.jackson.annotation.JsonProperty("dt") EstimatedValue total,
+            @com.fasterxml.jackson.annotation.JsonProperty("dH_remainder") EstimatedValue remainder) {
     }
 
-    void print(StructureEstimate e) {
+    @Override
+    protected void execute() {
+        var m = measured.properties();
+        StructureEstimate e = StructureEstimates.estimate("SMILES", smiles, m);
+        Report r = new Report(e, org.cohesa.core.structure.StructureEstimator.totalFromVaporisation(e, m),
+                org.cohesa.core.structure.StructureEstimator.hydrogenBondingRemainder(e, m));
+        if (json()) {
+            Output.json(out(), r);
+            return;
+        }
+        print(r);
+    }
+
+    void print(Report r) {
+        StructureEstimate e = r.estimate();
         out().println(e.structure().smiles() + "  " + e.structure().formula() + "  "
                 + Output.fmt(e.structure().molarMass(), 2) + " g/mol  family: " + e.family());
         TextTable t = new TextTable("quantity", "value", "± MAE", "P90", "route");
@@ -40,7 +53,19 @@ public final class EstimateCommand extends CohesaSubcommand {
         row(t, "δP MPa½", e.dP());
         row(t, "δH MPa½", e.dH());
         row(t, "Vm cm³/mol", e.molarVolume());
+        if (r.total() != null) {
+            row(t, "δt MPa½", r.total());
+        }
+        if (r.remainder() != null) {
+            row(t, "δH remainder", r.remainder());
+        }
         t.print(out());
+        if (r.total() != null && e.hasHansen()) {
+            double sum = Math.sqrt(e.dD().value() * e.dD().value() + e.dP().value() * e.dP().value() + e.dH().value() * e.dH().value());
+            out().println("check: √(δD² + δP² + δH²) = " + Output.fmt(sum, 1) + " against δt " + Output.fmt(r.total().value(), 1) + " from ΔHvap"
+                    + (Math.abs(sum - r.total().value()) > r.total().expectedP90() ? ": more than 90 % of that route's errors apart" : ": within that route's P90")
+                    + (r.remainder() != null ? "; the group δH is kept (closer on the published table than the remainder)" : ""));
+        }
         out().println("UNIFAC (original): " + (e.unifac().complete() ? StructureEstimates.groupNames(e.unifac().groups()) : "none (atoms "
                 + String.join(", ", e.unifac().unplaced()) + " have no group)"));
         if (!e.lleGroups().isEmpty()) {

@@ -16,13 +16,18 @@ public final class MeasuredOptions {
     @Option(names = "--dipole", paramLabel = "DEBYE", description = "Dipole moment, debye (δP by Hansen–Beerbower).")
     String dipole;
 
+    @Option(names = "--hvap", paramLabel = "KJ_PER_MOL", description = "Enthalpy of vaporisation at 25 °C, kJ/mol: δt from it and the molar volume, "
+            + "as a check on the three components, and (with --refractive-index and --dipole) δH as the remainder for comparison.")
+    String hvap;
+
     /** The properties from option texts (null: not given), each checked as its option. */
     static MeasuredProperties of(String density, String refractiveIndex, String dipole) {
         return new MeasuredProperties(number("--density", density), number("--refractive-index", refractiveIndex), number("--dipole", dipole), null);
     }
 
     public MeasuredProperties properties() {
-        return new MeasuredProperties(number("--density", density), number("--refractive-index", refractiveIndex), number("--dipole", dipole), null);
+        return new MeasuredProperties(number("--density", density), number("--refractive-index", refractiveIndex), number("--dipole", dipole),
+                number("--hvap", hvap));
     }
 
     public Double density() {
@@ -38,6 +43,7 @@ public final class MeasuredOptions {
             switch (field) {
                 case "--density" -> new MeasuredProperties(v, null, null, null);
                 case "--refractive-index" -> new MeasuredProperties(null, v, null, null);
+                case "--hvap" -> new MeasuredProperties(null, null, null, v);
                 default -> new MeasuredProperties(null, null, v, null);
             }
         } catch (org.cohesa.core.InvalidInputException e) {
