@@ -24,6 +24,7 @@ target="--target=18.5,9,8,8"   # an invented demo sphere
 proposed="--blend=dimethyl phthalate:0.67,decalin:0.13,propylene glycol:0.2"
 # an invented demo case (replace toluene): the first two candidates are chosen and checked
 sized case-material --case=toluene --screen=target "$target"
+sized case-limits --case=toluene --screen=limits "$target" --search=3
 sized case-candidates --case=toluene --screen=blends "$target" --search=3
 sized cases --screen=cases   # the case list: the demo case saved by the two runs above
 sized case-checks --case=toluene --screen=checks "$target" --search=3

@@ -106,7 +106,13 @@ public final class CohesaApp extends Application {
                     var rows = workbench.blendModel().rows();
                     if (opts.caseReplacing() != null && !rows.isEmpty()) {
                         workbench.caseModel().choose(List.copyOf(rows.subList(0, Math.min(2, rows.size()))));
-                        workbench.caseModel().runChecks(() -> finish(opts, scene));
+                        workbench.caseModel().runChecks(() -> {
+                            if (opts.screen() == Screen.RECORD) {
+                                fileDemoRecord(opts, scene);
+                            } else {
+                                finish(opts, scene);
+                            }
+                        });
                     } else {
                         finish(opts, scene);
                     }
@@ -119,6 +125,19 @@ public final class CohesaApp extends Application {
             workbench.dryingModel().blendTextProperty().set(opts.blend());
             workbench.dryingModel().run(() -> finish(opts, scene), () -> finish(opts, scene));
         } else {
+            finish(opts, scene);
+        }
+    }
+
+    /** The demo case's record, filed from its Record step (for the screenshot of that step; the texts say they are invented). */
+    private void fileDemoRecord(StartOptions opts, Scene scene) {
+        var chosen = workbench.caseModel().current().chosen();
+        try {
+            workbench.caseModel().fileRecord(new org.cohesa.desktop.records.RecordsModel.Filing("demo process (invented)",
+                    "demo site (fictional)", opts.caseReplacing(), chosen.get(0).blend(), "invented demo: the Record step of a case",
+                    "R. Formulator (demo)", true), () -> finish(opts, scene));
+        } catch (RuntimeException e) {
+            System.err.println("error: " + ErrorText.of(e));
             finish(opts, scene);
         }
     }

@@ -54,8 +54,11 @@ class Space3DViewTest {
         long withParameters = fx.session.solvents().stream().filter(Solvent::hasHansen).count();
         assertEquals(withParameters, view.pointCount(), "one point per liquid with Hansen parameters");
 
-        // the scene fits its frame: every point and the target's outline inside, with the margin
-        robot.interact(view::resetView);
+        // framed to every liquid, the scene fits its frame: every point and the target's outline inside, with the margin
+        robot.interact(() -> {
+            view.framingProperty().set(Space3DView.Framing.ALL);
+            view.resetView();
+        });
         double w = canvas.getWidth();
         double h = canvas.getHeight();
         assertTrue(w > 300 && h > 200, "the view has room: " + w + "×" + h);
@@ -224,8 +227,11 @@ class Space3DViewTest {
         });
         Space3DView view = fx.workbench.spaceView().view3d();
         Canvas canvas = robot.lookup("#space3d").queryAs(Canvas.class);
+        double[] radius = new double[2];
+        for (Space3DView.Framing framing : Space3DView.Framing.values()) {
         for (double[] turn : new double[][] {{0, 0}, {115, 18}, {-60, 30}, {200, -25}}) {
             robot.interact(() -> {
+                view.framingProperty().set(framing);
                 view.resetView();
                 view.rotateBy(turn[0], turn[1]);
                 view.fitToFrame();
@@ -237,7 +243,7 @@ class Space3DViewTest {
             double minY = Double.MAX_VALUE;
             double maxY = -Double.MAX_VALUE;
             List<double[]> discs = onFx(robot, view::drawnDiscs);
-            for (double[] d : discs) {
+            for (double[] d : onFx(robot, view::framedDiscs)) {
                 minX = Math.min(minX, d[0]);
                 maxX = Math.max(maxX, d[0]);
                 minY = Math.min(minY, d[1]);
@@ -253,8 +259,11 @@ class Space3DViewTest {
             double fill = Math.max((maxX - minX) / (w - 2 * margin), (maxY - minY) / (h - 2 * margin));
             // common practice, no source: a fitted picture touches the margin on its limiting side (2 % for the disc
             // centres against the cage's outline and the mild perspective)
-            assertTrue(fill > 0.9 && fill < 1.02, "the data fill " + fill + " of the frame " + w + "×" + h + " after " + Arrays.toString(turn));
-            assertTrue(minX >= 0 && maxX <= w && minY >= 0 && maxY <= h, "all data inside after " + Arrays.toString(turn));
+            assertTrue(fill > 0.9 && fill < 1.02, framing + ": the data fill " + fill + " of the frame " + w + "×" + h + " after " + Arrays.toString(turn));
+            assertTrue(minX >= 0 && maxX <= w && minY >= 0 && maxY <= h, framing + ": all framing data inside after " + Arrays.toString(turn));
+            if (turn[0] == 0) {
+                radius[framing.ordinal()] = r;
+            }
             List<Space3DView.PlacedLabel> shown = onFx(robot, view::visibleLabels);
             List<Space3DView.PlacedLabel> titles = shown.stream().filter(l -> l.kind().equals("title")).toList();
             assertEquals(3, titles.size());
@@ -276,6 +285,10 @@ class Space3DViewTest {
                 assertTrue(Math.hypot(nx - c.getX(), ny - c.getY()) >= r, t.text() + " covers the target after " + Arrays.toString(turn));
             }
         }
+        }
+        // around the target the sphere is drawn larger than with every liquid (water alone sets the height then)
+        assertTrue(radius[0] > 1.2 * radius[1], "target radius around it " + radius[0] + " against every liquid " + radius[1]);
+        assertEquals(0, onFx(robot, view::pointsOutsideFrame), "framed to every liquid, none lies beyond the frame");
     }
 
     private static <T> T onFx(FxRobot robot, java.util.function.Supplier<T> s) {

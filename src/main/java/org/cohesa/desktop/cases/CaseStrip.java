@@ -123,8 +123,11 @@ public final class CaseStrip {
 
     private void refresh() {
         SubstitutionCase c = model.current();
-        caseLabel.setText(c == null ? "No case open" : c.title() + (c.replaced().isEmpty() ? "" : " · replaces " + c.replaced()));
-        caseLabel.setTooltip(c == null ? null : new javafx.scene.control.Tooltip(c.kind().words() + ": " + caseLabel.getText()
+        // a title that names the liquid already says what the case replaces
+        boolean named = c != null && !c.replaced().isEmpty() && c.title().toLowerCase(java.util.Locale.ROOT).contains(c.replaced().toLowerCase(java.util.Locale.ROOT));
+        caseLabel.setText(c == null ? "No case open" : c.title() + (c.replaced().isEmpty() || named ? "" : " · replaces " + c.replaced()));
+        caseLabel.setTooltip(c == null ? null : new javafx.scene.control.Tooltip(c.kind().words() + ": " + c.title()
+                + (c.replaced().isEmpty() ? "" : "\nreplaces: " + c.replaced())
                 + (c.process().isEmpty() ? "" : "\nprocess: " + c.process())));
         List<CaseProgress.State> states = model.progress();
         for (CaseStep s : CaseStep.values()) {

@@ -80,6 +80,10 @@ public final class LimitsStepView {
         ScrollPane right = new ScrollPane(summary);
         right.setFitToWidth(true);
         right.setId("limits-summary");
+        // the form has the step to itself: wide enough that its choices read whole
+        if (form instanceof Region r) {
+            r.setPrefWidth(480);
+        }
         root.setLeft(form);
         root.setCenter(right);
         Runnable refresh = this::refresh;
@@ -148,6 +152,11 @@ public final class LimitsStepView {
         }
         if (v.equals("true") || v.equals("false")) {
             return v.equals("true") ? "yes" : "no";
+        }
+        if (key.equals("process")) {
+            return java.util.Arrays.stream(org.cohesa.core.blend.ProcessUse.values()).filter(u -> u.word().equals(v)).findFirst()
+                    .map(u -> u == org.cohesa.core.blend.ProcessUse.AS_ORIGINAL ? "as the replaced liquid (its evaporation rate ÷× 3)"
+                            : u.word() + " — " + u.meaning()).orElse(v);
         }
         if (key.equals("rank-by")) {
             return java.util.Arrays.stream(org.cohesa.core.blend.RankBy.values()).filter(r -> r.name().equals(v)).findFirst()

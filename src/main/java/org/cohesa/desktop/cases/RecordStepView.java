@@ -62,7 +62,6 @@ public final class RecordStepView {
         this.model = model;
         root.setId("record-step");
         root.setPadding(new Insets(14));
-        root.setMaxWidth(900);
         Label head = new Label("File the substitution");
         head.getStyleClass().add("headline");
         replaced.setId("record-step-replaced");
@@ -122,7 +121,18 @@ public final class RecordStepView {
         note.setWrapText(true);
         note.getStyleClass().add("hint");
         note.setMinHeight(Region.USE_PREF_SIZE);
-        root.getChildren().addAll(head, filing, unchecked, file, state, new Separator(), decisionPane(), new Separator(), register, note);
+        // two columns: what is filed, and what happens to it; each reads whole at 1280 px
+        VBox filed = new VBox(12, head, filing, unchecked, file, state, new Separator(), register, note);
+        filed.setPrefWidth(600);
+        filed.setMaxWidth(700);
+        Node decide = decisionPane();
+        decision.setPrefWidth(600);
+        decision.setMaxWidth(700);
+        HBox columns = new HBox(28, filed, decide);
+        HBox.setHgrow(filed, Priority.ALWAYS);
+        HBox.setHgrow(decide, Priority.ALWAYS);
+        root.getChildren().add(columns);
+        root.setMaxWidth(1460);
         ScrollPane scroll = new ScrollPane(root);
         scroll.setFitToWidth(true);
         scroll.setId("record-step-scroll");
@@ -263,6 +273,15 @@ public final class RecordStepView {
             return;
         }
         state.setText("Filed as record " + r.id() + " — " + r.status().label().replace('_', ' ') + ".");
+        // the locked form shows what the record holds, not what was typed last
+        replaced.setText(r.content().replaced());
+        replacement.getItems().setAll(r.content().replacement());
+        replacement.setValue(r.content().replacement());
+        process.setText(r.content().process());
+        site.setText(r.content().site() == null ? "" : r.content().site());
+        reason.setText(r.content().reason());
+        author.setText(r.author());
+        withTarget.setSelected(r.content().target() != null);
         for (StatusChange s : r.history()) {
             Label l = new Label(s.seq() + ".  " + LocalTimes.of(s.at()) + "   " + words(s.kind()) + " by " + s.by()
                     + (s.account() == null || s.account().isBlank() ? "" : " (account " + s.account() + ")")

@@ -56,6 +56,66 @@ public final class Space3DView {
 
     static final double DEFAULT_YAW = 38;
     static final double DEFAULT_PITCH = 22;
+    /** How the picture is framed: the target's neighbourhood (RED up to {@link #NEAR_RED}) or every liquid. */
+    public enum Framing {
+        NEAR("around the target (RED ≤ 2)"),
+        ALL("every liquid");
+
+        private final String words;
+
+        Framing(String words) {
+            this.words = words;
+        }
+
+        @Override
+        public String toString() {
+            return words;
+        }
+    }
+
+    /** Liquids up to this RED frame the "around the target" view: twice the sphere's radius, room for the candidates. */
+    static final double NEAR_RED = 2.0;
+
+    private final javafx.beans.property.ObjectProperty<Framing> framing = new javafx.beans.property.SimpleObjectProperty<>(Framing.NEAR);
+
+    /** What the picture is fitted to; a change refits at the current angle. */
+    public javafx.beans.property.ObjectProperty<Framing> framingProperty() {
+        return framing;
+    }
+
+    /** True when point i frames the picture (every point, or those near the target when there is one to be near). */
+    private boolean frames(int i) {
+        if (framing.get() == Framing.ALL || targetRadius <= 0) {
+            return true;
+        }
+        Double red = points.get(i).red();
+        return red != null && red <= NEAR_RED;
+    }
+
+    /** The discs of the points that frame the picture (for tests). */
+    public List<double[]> framedDiscs() {
+        drawIfScheduled();
+        List<double[]> out = new ArrayList<>();
+        for (int i = 0; i < points.size(); i++) {
+            if (frames(i)) {
+                out.add(new double[] {sx[i], sy[i], sr[i]});
+            }
+        }
+        return out;
+    }
+
+    /** How many points lie outside the frame in the last drawing. */
+    public int pointsOutsideFrame() {
+        drawIfScheduled();
+        int n = 0;
+        for (int i = 0; i < points.size(); i++) {
+            if (sx[i] < 0 || sy[i] < 0 || sx[i] > canvas.getWidth() || sy[i] > canvas.getHeight()) {
+                n++;
+            }
+        }
+        return n;
+    }
+
     /** Pixels kept free around the fitted content: room for the tick labels and axis titles. */
     static final double MARGIN = 48;
     private static final int WARM_UP_FRAMES = 5;
@@ -165,6 +225,12 @@ public final class Space3DView {
         model.doubledDdProperty().addListener((o, a, b) -> rebuild());
         canvas.widthProperty().addListener((o, a, b) -> refit());
         canvas.heightProperty().addListener((o, a, b) -> refit());
+        framing.addListener((o, a, b) -> {
+            zoom = 1;
+            shiftX = 0;
+            shiftY = 0;
+            refit();
+        });
         session.selectedSolventProperty().addListener((o, a, b) -> requestDraw());
         session.selectedBlendProperty().addListener((o, a, b) -> requestDraw());
         session.dryingPathProperty().addListener((o, a, b) -> requestDraw());
@@ -561,8 +627,9 @@ public final class Space3DView {
     }
 
     /**
-     * The scale and offset that fit the points and the target into the frame at the current angle, with {@link #MARGIN}
-     * pixels free on each side (the box alone when there is neither).
+     * The scale and offset that fit the framing points (every liquid, or those near the target), the selected blend with
+     * its components and the target into the frame at the current angle, with {@link #MARGIN} pixels free on each side
+     * (the box alone when there is nothing).
      */
     private OrbitProjection.Fit fitFrame() {
         OrbitProjection o = projection();
@@ -571,8 +638,29 @@ public final class Space3DView {
         double k = model.doubledDdProperty().get() ? 2 : 1;
         // the data decide the scale: the points and the target's cage; the box, its grid and the axis titles may reach past
         // the frame (the titles are then placed on the visible part of their axis, see placeTitle)
+        int framed = 0;
         for (int i = 0; i < points.size(); i++) {
-            grow(b, o, pointXyz[3 * i], pointXyz[3 * i + 1], pointXyz[3 * i + 2]);
+            if (frames(i)) {
+                grow(b, o, pointXyz[3 * i], pointXyz[3 * i + 1], pointXyz[3 * i + 2]);
+                framed++;
+            }
+        }
+        if (framed == 0) { // nothing near the target: every liquid
+            for (int i = 0; i < points.size(); i++) {
+                grow(b, o, pointXyz[3 * i], pointXyz[3 * i + 1], pointXyz[3 * i + 2]);
+            }
+        }
+        // the selected blend and its components stay in the picture whatever frames it
+        Blend sb = session.selectedBlendProperty().get();
+        if (sb != null && sb.hasHansen()) {
+            double[] q = relative(sb.hansen());
+            grow(b, o, q[0], q[1], q[2]);
+            for (BlendComponent c : sb.components()) {
+                if (c.solvent().hasHansen()) {
+                    double[] cq = relative(c.solvent().hansen());
+                    grow(b, o, cq[0], cq[1], cq[2]);
+                }
+            }
         }
         for (int i = 0; i < segKind.length; i++) {
             if (segKind[i] == SegmentKind.CAGE) {
@@ -708,6 +796,20 @@ public final class Space3DView {
         drawMarks(px, g);
         pixelBuffer.updateBuffer(b -> null);
         drawLabels(g, o, s, ox, oy, "tick");
+        int outside = 0;
+        for (int i = 0; i < n; i++) {
+            if (sx[i] < 0 || sy[i] < 0 || sx[i] > w || sy[i] > h) {
+                outside++;
+            }
+        }
+        if (outside > 0) {
+            // said, so a liquid past the frame is never mistaken for one missing from the library
+            g.setFont(TICK_FONT);
+            g.setFill(Palette.AXIS);
+            g.setTextAlign(TextAlignment.LEFT);
+            g.setTextBaseline(VPos.BOTTOM);
+            g.fillText(outside + (outside == 1 ? " liquid lies" : " liquids lie") + " beyond the frame (Frame: every liquid shows them)", 8, h - 6);
+        }
     }
 
     private double[] su = new double[0];

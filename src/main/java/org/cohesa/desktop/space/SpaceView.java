@@ -67,7 +67,16 @@ public final class SpaceView {
         HBox.setHgrow(grow, Priority.ALWAYS);
         Label help = new Label("Drag: rotate · wheel: zoom · right- or shift-drag: pan · click a point: select it");
         help.getStyleClass().add("hint");
-        HBox bar = new HBox(10, colourLabel, colourBy, doubled, grow, reset, png);
+        ComboBox<Space3DView.Framing> frame = new ComboBox<>();
+        frame.setId("space3d-framing");
+        frame.getItems().setAll(Space3DView.Framing.values());
+        frame.valueProperty().bindBidirectional(view3d.framingProperty());
+        frame.setTooltip(new javafx.scene.control.Tooltip("What the 3D picture is scaled to: the liquids near the target "
+                + "(RED ≤ 2, with the selected blend), or every liquid (water alone then sets the height)"));
+        Label frameLabel = new Label("_Frame");
+        frameLabel.setMnemonicParsing(true);
+        frameLabel.setLabelFor(frame);
+        HBox bar = new HBox(10, colourLabel, colourBy, doubled, frameLabel, frame, grow, reset, png);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(8, 10, 8, 10));
         bar.getStyleClass().add("toolbar-strip");

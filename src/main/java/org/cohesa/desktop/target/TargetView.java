@@ -185,7 +185,10 @@ public final class TargetView {
             b.setMaxWidth(Double.MAX_VALUE);
             b.setPrefWidth(260);
             b.setMinWidth(150);
-            b.setPrefHeight(54);
+            b.setPrefHeight(58);
+            // the description wraps inside the card (two lines) rather than being cut
+            d.prefWidthProperty().bind(b.widthProperty().subtract(20));
+            d.setMaxHeight(34);
             HBox.setHgrow(b, Priority.ALWAYS);
             int index = i;
             b.setOnAction(e -> {
