@@ -20,8 +20,8 @@ sized() {   # sized NAME ARGS...: the screen at the two sizes the app is judged 
   done
 }
 target="--target=18.5,9,8,8"   # an invented demo sphere
-# a blend the search itself proposes for the demo sphere (top 3-component candidate)
-proposed="--blend=dimethyl phthalate:0.67,decalin:0.13,propylene glycol:0.2"
+# a blend the search itself proposes for the demo sphere (its best blend of two components, #15 of cohesa blend --target 18.5,9,8,8 --max-components 3 --top 30)
+proposed="--blend=cyclopentanone:0.727,2-butanol:0.273"
 # an invented demo case (replace toluene): the first two candidates are chosen and checked
 sized case-material --case=toluene --screen=target "$target"
 sized case-limits --case=toluene --screen=limits "$target" --search=3

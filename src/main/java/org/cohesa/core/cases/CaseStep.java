@@ -6,7 +6,7 @@ public enum CaseStep {
     LIMITS("Limits", "what the liquid may not be"),
     CANDIDATES("Candidates", "what qualifies, and which to try"),
     CHECKS("Checks", "safety, drying, phases of the chosen ones"),
-    RECORD("Record", "the substitution filed for review");
+    RECORD("Record", "the substitution filed, reviewed, decided");
 
     private final String title;
     private final String question;

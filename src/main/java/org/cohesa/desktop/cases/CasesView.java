@@ -106,8 +106,11 @@ public final class CasesView {
         head.getStyleClass().add("headline");
         TableView<CaseRepository.Summary> table = new TableView<>(model.saved());
         table.setId("case-list");
-        table.getColumns().add(Columns.text("Case", CaseRepository.Summary::title, 260));
-        table.getColumns().add(Columns.text("Job", s -> s.kind().words(), 110));
+        table.getColumns().add(Columns.text("Case", CaseRepository.Summary::title, 290));
+        table.getColumns().add(Columns.text("Job", s -> s.kind() == org.cohesa.core.cases.SubstitutionCase.Kind.REPLACE ? "replace" : "find", 70));
+        // the title reads whole at 1280 px: the other columns give way first
+        table.getColumns().get(0).setMinWidth(270);
+        table.getColumns().get(1).setMinWidth(62);
         table.getColumns().add(Columns.text("Replaces", CaseRepository.Summary::replaced, 150));
         table.getColumns().add(Columns.text("Material", s -> s.material() == null ? "not chosen yet" : s.material(), 150));
         table.getColumns().add(Columns.text("Last saved", s -> LocalTimes.of(s.updated().toString()), 150));

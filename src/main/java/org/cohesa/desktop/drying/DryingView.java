@@ -75,7 +75,7 @@ public final class DryingView {
         bar.getStyleClass().add("toolbar-strip");
 
         redChart = chart("RED to the target", "drying-red-chart");
-        compositionChart = chart("Volume fraction of the liquid left", "drying-composition-chart");
+        compositionChart = chart("Volume fraction left", "drying-composition-chart");
         ((NumberAxis) compositionChart.getYAxis()).setAutoRanging(false);
         ((NumberAxis) compositionChart.getYAxis()).setUpperBound(1);
         ((NumberAxis) compositionChart.getYAxis()).setTickUnit(0.2);
