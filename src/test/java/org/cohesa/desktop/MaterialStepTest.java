@@ -24,7 +24,8 @@ import org.testfx.framework.junit5.Start;
 /**
  * The Material step as one step of the case (issue 16): it says whether the case has its material, offers the four ways
  * to one as cards (library, fit from a test table, structure, typed in), and the fit's tests are a table — rows pasted
- * from a spreadsheet, names with commas quoted in the CSV the fit reads, a loaded series shown as rows. The series is
+ * from a spreadsheet, names with commas quoted in the CSV the fit reads, a loaded series shown as rows. With
+ * {@code -Dcohesa.screenshots=DIR} it writes the fit pane's screenshot there. The series is
  * the repository's invented demo (demo-blends/resin-k17-tests.csv says so).
  */
 @ExtendWith(ApplicationExtension.class)
@@ -89,6 +90,22 @@ class MaterialStepTest {
         assertTrue(robot.lookup("#target-current").queryAs(Label.class).getText().startsWith("✓ Resin K-17 (invented)"));
         assertTrue(fx.workbench.caseStrip().text(CaseStep.MATERIAL).startsWith("✓ Resin K-17 (invented) · R0"),
                 fx.workbench.caseStrip().text(CaseStep.MATERIAL));
+
+        String dir = System.getProperty("cohesa.screenshots");
+        if (dir != null && !dir.isBlank()) {
+            org.testfx.util.WaitForAsyncUtils.waitForFxEvents();
+            robot.interact(() -> Snapshots.savePng(robot.lookup("#target-ways").query().getScene().snapshot(null),
+                    java.nio.file.Path.of(dir, "case-material-fit-1280x800.png")));
+        }
+        // the ICH column says "class 2", never a bare digit beside the flash point (the issue's "86 2")
+        @SuppressWarnings("unchecked")
+        TableView<org.cohesa.desktop.target.TargetModel.Ranked> ranking = robot.lookup("#target-ranking").queryAs(TableView.class);
+        var ich = ranking.getColumns().get(ranking.getColumns().size() - 1);
+        assertEquals("ICH Q3C", ich.getText());
+        for (var row : ranking.getItems()) {
+            Object cell = ich.getCellData(row);
+            assertTrue(String.valueOf(cell).startsWith("class ") || "not listed".equals(cell), String.valueOf(cell));
+        }
 
         // a series with columns the table has no place for stays text, and says so
         robot.interact(() -> csv.setText("liquid,score,temperature_c\nacetone,1,40\n"));

@@ -122,7 +122,8 @@ public final class TargetView {
                 Columns.text("Inside", r -> r.red() < 1 ? "yes" : "", 60),
                 Columns.number("bp (°C)", r -> r.solvent().boilingPointC(), 70, 0),
                 Columns.number("Flash pt (°C)", r -> r.solvent().flashPointC(), 108, 0),
-                Columns.text("ICH", r -> r.solvent().ichClass() == null ? "" : r.solvent().ichClass().toString(), 50)));
+                // "class 2", not a bare digit beside the right-aligned flash point ("86 2" read as one number)
+                Columns.text("ICH Q3C", r -> r.solvent().ichClass() == null ? "not listed" : "class " + r.solvent().ichClass(), 80)));
         table.setPlaceholder(new Label("Set a target to rank the library's liquids by RED."));
         TableTools.equip(table, this::exportCsv);
         table.getSelectionModel().selectedItemProperty().addListener((o, a, r) -> {
@@ -185,9 +186,12 @@ public final class TargetView {
             b.setMaxWidth(Double.MAX_VALUE);
             b.setPrefWidth(260);
             b.setMinWidth(150);
-            b.setPrefHeight(58);
+            b.setPrefHeight(66);
+            b.setMinHeight(66);
+            b.setWrapText(true);
             // the description wraps inside the card (two lines) rather than being cut
             d.prefWidthProperty().bind(b.widthProperty().subtract(20));
+            d.setMinHeight(30);
             d.setMaxHeight(34);
             HBox.setHgrow(b, Priority.ALWAYS);
             int index = i;

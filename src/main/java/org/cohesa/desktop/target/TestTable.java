@@ -86,25 +86,25 @@ public final class TestTable {
         table.setId("fit-tests");
         table.setEditable(true);
         table.getSelectionModel().setSelectionMode(javafx.scene.control.SelectionMode.MULTIPLE);
-        TableColumn<Row, String> liquid = column("Liquid", r -> r.liquid, 190);
+        TableColumn<Row, String> liquid = column("Liquid", r -> r.liquid, 165);
         liquid.setCellFactory(c -> {
             ComboBoxTableCell<Row, String> cell = new ComboBoxTableCell<>(liquids);
             cell.setComboBoxEditable(true);
             return cell;
         });
-        TableColumn<Row, String> score = column("Score", r -> r.score, 90);
+        TableColumn<Row, String> score = column("Score", r -> r.score, 64);
         score.setCellFactory(c -> {
             ComboBoxTableCell<Row, String> cell = new ComboBoxTableCell<>(FXCollections.observableArrayList("1", "0.5", "0"));
             cell.setComboBoxEditable(true);
             return cell;
         });
-        TableColumn<Row, String> dD = column("δD", r -> r.dD, 52);
-        TableColumn<Row, String> dP = column("δP", r -> r.dP, 52);
-        TableColumn<Row, String> dH = column("δH", r -> r.dH, 52);
+        TableColumn<Row, String> dD = column("δD", r -> r.dD, 46);
+        TableColumn<Row, String> dP = column("δP", r -> r.dP, 46);
+        TableColumn<Row, String> dH = column("δH", r -> r.dH, 46);
         for (TableColumn<Row, String> t : List.of(dD, dP, dH)) {
             t.setCellFactory(TextFieldTableCell.forTableColumn());
         }
-        TableColumn<Row, String> remark = column("Note", r -> r.note, 160);
+        TableColumn<Row, String> remark = column("Note", r -> r.note, 120);
         remark.setCellFactory(TextFieldTableCell.forTableColumn());
         table.getColumns().addAll(List.of(liquid, score, dD, dP, dH, remark));
         table.setPlaceholder(new Label("No tests yet: Add a row, or paste rows from a spreadsheet (Ctrl+V)."));
