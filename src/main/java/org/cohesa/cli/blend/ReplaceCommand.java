@@ -208,13 +208,8 @@ public final class ReplaceCommand extends CohesaSubcommand {
         return Desirability.DEFAULT.withProcess(ProcessUse.AS_ORIGINAL, ProcessUse.rate(original)).withComponents(REPLACE_COMPONENTS);
     }
 
-    /**
-     * Weight of each component beyond the first when a single liquid is replaced and the user names no preference: 3, as much
-     * as a Category 1 flammability (blend's default 2). A process that ran on one liquid must recover and recycle it: a blend
-     * fractionates on distillation, so the recovered solvent is not the fresh one, and it needs its own specification and
-     * analytics (common practice in process chemistry, no source). Blends are still offered, after singles of similar merit.
-     */
-    public static final double REPLACE_COMPONENTS = 3;
+    /** The extra-component weight of a replacement ({@link Desirability#REPLACE_COMPONENTS}, its reason there). */
+    public static final double REPLACE_COMPONENTS = Desirability.REPLACE_COMPONENTS;
 
     static Desirability.Weights replaceWeights(BlendOptions o, Solvent original) {
         Desirability.Weights w = o.weights(ProcessUse.AS_ORIGINAL, original);

@@ -139,6 +139,15 @@ public final class Desirability {
     public static final Weights DEFAULT = Preference.BALANCED.weights();
 
     /**
+     * Weight of each component beyond the first when a single liquid in use is replaced and no preference is named: 3, as
+     * much as a Category 1 flammability (a new blend's default is 2). A process that ran on one liquid must recover and
+     * recycle it: a blend fractionates on distillation, so the recovered solvent is not the fresh one, and it needs its own
+     * specification and analytics (common practice in process chemistry, no source). Used by {@code cohesa replace} and by
+     * the desktop's replacement cases alike.
+     */
+    public static final double REPLACE_COMPONENTS = 3;
+
+    /**
      * Parses "hazard=1,components=2" over a base set of weights (weights not named keep their base value).
      *
      * @throws InvalidInputException naming the field and the bad part

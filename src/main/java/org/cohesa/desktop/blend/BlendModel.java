@@ -22,6 +22,7 @@ import org.cohesa.core.blend.RankBy;
 import org.cohesa.core.blend.ReactiveFlag;
 import org.cohesa.core.blend.SoluteCharacter;
 import org.cohesa.core.blend.WaterCheck;
+import org.cohesa.core.blend.WaterInPolymer;
 import org.cohesa.core.activity.WaterMiscibility;
 import org.cohesa.core.activity.WaterSolubilityTable;
 import org.cohesa.store.WaterMiscibilityCsv;
@@ -243,7 +244,8 @@ public final class BlendModel {
         org.cohesa.core.solvent.Solvent original = replacedMainComponent(lib);
         org.cohesa.core.blend.ProcessUse.Rate rate = original == null ? null : org.cohesa.core.blend.ProcessUse.rate(original);
         return rate == null ? org.cohesa.core.blend.Desirability.DEFAULT.withProcess(org.cohesa.core.blend.ProcessUse.GENERAL, null)
-                : org.cohesa.core.blend.Desirability.DEFAULT.withProcess(use, rate);
+                : org.cohesa.core.blend.Desirability.DEFAULT.withProcess(use, rate)
+                        .withComponents(org.cohesa.core.blend.Desirability.REPLACE_COMPONENTS);
     }
 
     private org.cohesa.core.solvent.Solvent replacedMainComponent(SolventLibrary lib) {
@@ -269,13 +271,14 @@ public final class BlendModel {
         }
         SolventLibrary lib = new SolventLibrary(List.copyOf(session.solvents()));
         Set<SoluteCharacter> character = soluteCharacter();
-        BlendConstraints c = forSolute(constraints(lib), character);
+        double kelvin = number("temperature", temperatureC.get(), 25.0) + 273.15;
+        List<String> waterRules = new ArrayList<>();
+        BlendConstraints c = waterRules(lib, forSolute(constraints(lib), character), kelvin, waterRules);
         int k = maxComponents.get();
         if (c.fixed().size() >= k) {
             throw new InvalidInputException("most components", String.valueOf(k), "must exceed the number of fixed components");
         }
         double limit = positive("RED limit", redLimit.get(), 1.0);
-        double kelvin = number("temperature", temperatureC.get(), 25.0) + 273.15;
         BlendDesigner.Request req = new BlendDesigner.Request(target.sphere(), c, k, top.get(), rankBy.get(), limit, false, kelvin,
                 processWeights(lib));
         CancellationToken token = new CancellationToken();
@@ -305,6 +308,7 @@ public final class BlendModel {
                 notes[0] = SearchNotes.summary(r, c);
                 // the material's own rule first: the safety defaults' lists are the same for every search
                 List<String> defaults = new ArrayList<>(SearchNotes.saltFormers(r.pool(), target.name(), character, allowed));
+                defaults.addAll(waterRules);
                 defaults.addAll(SearchNotes.safetyDefaults(r.pool()));
                 notes[1] = defaults;
                 int i = 1;
@@ -356,6 +360,53 @@ public final class BlendModel {
      */
     BlendConstraints forSolute(BlendConstraints c, Set<SoluteCharacter> character) {
         return allowSaltFormers.get() || character.isEmpty() ? c : c.with(c.more().withSolute(character));
+    }
+
+    /**
+     * The command line's two water rules, from the same core code: water is no component for a polymer or resin it does
+     * not dissolve ({@link WaterInPolymer}) unless the user names it (Include only, Fixed) or asks for a blend that mixes
+     * with water; and a case that replaces a liquid under "as the replaced liquid" asks every candidate to behave with
+     * water as that liquid does (separate for an extraction, mix for a water-miscible process), unless "With water" is set.
+     * Each rule applied adds its line to {@code notes}.
+     */
+    BlendConstraints waterRules(SolventLibrary lib, BlendConstraints c, double kelvin, List<String> notes) {
+        Solvent water = lib.all().stream().filter(WaterMiscibility::isWater).findFirst().orElse(null);
+        TargetChoice t = session.target();
+        if (water == null || t == null) {
+            return c;
+        }
+        boolean asked = c.include().stream().anyMatch(WaterMiscibility::isWater)
+                || c.fixed().stream().anyMatch(f -> WaterMiscibility.isWater(f.solvent()))
+                || c.more().withWater() == WaterCheck.Need.MISCIBLE;
+        BlendConstraints out = c;
+        if (!asked) {
+            java.util.Optional<String> why = WaterInPolymer.reasonToLeaveOut(TargetStructure.materialOf(t, List.copyOf(session.materials())), water);
+            if (why.isPresent()) {
+                out = out.alsoExcluding(water);
+                notes.add(why.get().replaceFirst("\\(docs/methods\\.md;.*\\)$",
+                        "(docs/methods.md; naming water under Include only or Fixed, or With water: " + WATER_MIXES + ", keeps it)"));
+            }
+        }
+        Solvent original = process.get() == org.cohesa.core.blend.ProcessUse.AS_ORIGINAL ? replacedMainComponent(lib) : null;
+        if (out.more().withWater() == null && original != null && !WaterMiscibility.isWater(original)) {
+            org.cohesa.core.activity.WaterBehaviour wb;
+            try {
+                wb = WaterMiscibility.withWater(List.of(original), new double[] {1.0}, water, kelvin, WaterMiscibilityCsv.bundled());
+            } catch (IllegalArgumentException e) {
+                wb = null; // no judgement possible for the replaced liquid: no water demand
+            }
+            WaterCheck.Need need = wb == null ? null : switch (wb.kind()) {
+                case IMMISCIBLE -> WaterCheck.Need.IMMISCIBLE;
+                case MISCIBLE -> WaterCheck.Need.MISCIBLE;
+                case PARTLY_MISCIBLE -> null;
+            };
+            if (need != null) {
+                out = out.with(out.more().withWater(need));
+                notes.add("with water as the replaced liquid: " + original.name() + " is " + wb.kind().label() + " with water (" + wb.detail()
+                        + "), so every candidate must be too (set With water to choose otherwise, or Leaves the process by another use)");
+            }
+        }
+        return out;
     }
 
     /** The two-phase test: published mutual solubilities with water first, the activity model elsewhere (as the command line). */
