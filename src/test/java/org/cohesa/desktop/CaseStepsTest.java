@@ -29,6 +29,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * has done or misses, a limit changed after the search opens the Limits step again; and the record is taken from draft
  * to approved on the case's Record step, with the register's four-eyes rule refusing the author and the reviewer
  * (operating-system accounts, as the local register compares them; docs/records.md). The case is an invented demo.
+ * With {@code -Dcohesa.screenshots=DIR} it writes the approved Record step's screenshot there.
  */
 @ExtendWith(ApplicationExtension.class)
 class CaseStepsTest {
@@ -166,6 +167,12 @@ class CaseStepsTest {
         assertTrue(approved.contains("approved by M. Manager (account carol) — trials passed"), approved);
         assertTrue(robot.lookup("#record-step-approve").queryAs(Button.class).isDisabled()
                 && robot.lookup("#record-step-reject").queryAs(Button.class).isDisabled(), "a decision is final");
+        String dir = System.getProperty("cohesa.screenshots");
+        if (dir != null && !dir.isBlank()) {
+            WaitForAsyncUtils.waitForFxEvents();
+            robot.interact(() -> Snapshots.savePng(robot.lookup("#record-step").query().getScene().snapshot(null),
+                    java.nio.file.Path.of(dir, "case-record-approved-1280x800.png")));
+        }
         // the register, as reference, holds the same
         assertEquals(RecordStatus.APPROVED, fx.workbench.recordsModel().records().stream().filter(r -> r.id() == id).findFirst()
                 .orElseThrow().status());

@@ -296,6 +296,12 @@ public final class RecordStepView {
             case APPROVED -> "✓ Approved: the substitution is decided. A new decision needs a new record (a new case).";
             case REJECTED -> "✓ Rejected: the decision is final. Start a new case for another replacement.";
         });
+        // the register does not hold the case's checks; whoever decides should know which are missing
+        long open = c.chosen().stream().filter(x -> x.checksDone() < 3).count();
+        if (open > 0 && (r.status() == RecordStatus.DRAFT || r.status() == RecordStatus.IN_REVIEW)) {
+            next.setText(next.getText() + " Before deciding: " + open + " chosen candidate" + (open == 1 ? " still misses" : "s still miss")
+                    + " checks (Checks step).");
+        }
     }
 
     private static String words(String kind) {
