@@ -1,6 +1,7 @@
 package org.cohesa.store;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -251,12 +252,28 @@ class LibraryCurationTest {
         assertTrue(bad.isEmpty(), String.join("\n", bad));
         // Checked against stored copies (SOURCES.md, clp-annex-vi-checked): formamide Repr. 1B H360D (ECHA C&L
         // Inventory, Annex VI index 616-052-00-8); NMP harmonised as toxic for reproduction (European Coatings Journal
-        // 2020); DMF Repr. 1B (Intertek 2021, Merck SDS 2020); 2-butoxyethanol H302 H312 H332 H315 H319 (ECHA CLH registry).
+        // 2020); DMF Repr. 1B (Intertek 2021, Merck SDS 2020).
         assertEquals("H360D", solvent("75-12-7").get("hazard_statements"));
         assertEquals("clp-annex-vi-checked", solvent("75-12-7").get("src_hazard_statements"));
         assertTrue(solvent("872-50-4").get("hazard_statements").contains("H360D"));
         assertTrue(solvent("68-12-2").get("hazard_statements").contains("H360D"));
-        assertEquals(Set.of("H302", "H312", "H332", "H315", "H319"), Set.of(solvent("111-76-2").get("hazard_statements").split(" ")));
+        // CLP Annex VI Table 3 as consolidated in 02008R1272-20260701, read from a stored copy (SOURCES.md,
+        // clp-annex-vi-checked): 2-butoxyethanol 603-014-00-0 H331 H302 H315 H319 (the adopted RAC opinion: Acute Tox. 3
+        // by inhalation; the recalled dermal H312 is kept as a supplier's addition, named in the note); cumene
+        // 601-024-00-X Carc. 1B H350; d-limonene 601-096-00-2 Aquatic Chronic 3 H412 (not H410); PGME 603-064-00-3
+        // H226 H336; o-xylene 601-022-00-9 H226 H312 H315 H332 (its recalled H304 is not in the entry).
+        Set<String> butoxyethanol = Set.of(solvent("111-76-2").get("hazard_statements").split(" "));
+        assertTrue(butoxyethanol.containsAll(Set.of("H331", "H302", "H315", "H319")), butoxyethanol.toString());
+        assertFalse(butoxyethanol.contains("H332"), butoxyethanol.toString());
+        assertTrue(solvent("98-82-8").get("hazard_statements").contains("H350"));
+        assertTrue(solvent("5989-27-5").get("hazard_statements").contains("H412"));
+        assertFalse(solvent("5989-27-5").get("hazard_statements").contains("H410"));
+        assertEquals("H226 H336", solvent("107-98-2").get("hazard_statements"));
+        for (String cas : List.of("98-82-8", "5989-27-5", "107-98-2", "95-47-6", "106-42-3", "111-76-2")) {
+            assertEquals("clp-annex-vi-checked", solvent(cas).get("src_hazard_statements"), cas);
+            assertTrue(solvent(cas).get("note").contains("checked against CLP Annex VI"), cas);
+        }
+        assertTrue(solvent("95-47-6").get("note").contains("H304 not in the harmonised entry"));
         // International Chemical Safety Cards (ILO/WHO), UN GHS criteria, read from stored copies: ICSC 0459 DMSO
         // (November 2023) "Warning, Combustible liquid" = H227; ICSC 0321 propylene glycol (April 2014) "No hazard
         // classification according to GHS criteria", flash point 101 °C c.c.
