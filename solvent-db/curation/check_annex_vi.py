@@ -13,8 +13,10 @@ TABLE is a copy of Table 3 that this repository does not ship, either
   * JSON with an "entries" list whose items carry "index_no", "name", "cas" (a list; "[n]" suffixes and
     several numbers in one string are allowed) and "h_codes" (the layout of the table3.json built from the
     consolidated act, e.g. 02008R1272-20260701), or
-  * TSV with the columns index_no, cas (";"-separated), name, h_codes (space-separated), for entries
-    transcribed from such a copy.
+  * TSV with the columns index_no, cas (";"-separated), name, h_codes (space-separated) and optionally
+    minimum (the codes of classes the entry marks with "*"), for entries transcribed from such a copy.
+An entry's class marked "*" is a minimum classification (Annex VI, 1.2.1): a recalled more severe category of
+it (H330 beside the entry's H332) is kept and named in the note rather than replaced.
 Only the entries the copy holds are compared: a solvent absent from a partial copy is reported as
 "not in this copy", never as "not listed".
 
@@ -60,45 +62,64 @@ def hazard_class(code):
     return code  # a class of its own (H304, H317, H335, H336, H400, H420 ...)
 
 
+def minimum_codes(hazard_classes, codes):
+    """The codes of classes the entry marks with '*' (a minimum classification, CLP Annex VI 1.2.1): a supplier
+    with data for a more severe category must use it. Acute toxicity and STOT RE are the classes so marked."""
+    starred = " ".join(c for c in hazard_classes if "*" in c)
+    families = set()
+    if "Acute Tox" in starred:
+        families |= {"acute oral", "acute dermal", "acute inhalation"}
+    if "STOT RE" in starred:
+        families.add("STOT RE")
+    return [c for c in codes if hazard_class(c) in families]
+
+
 def load_table(path):
-    """Maps CAS number -> (index_no, name, [h_codes]) from a JSON or TSV copy of Table 3."""
+    """Maps CAS number -> (index_no, name, [h_codes], [minimum-classification codes]) from a copy of Table 3."""
     text = Path(path).read_text(encoding="utf-8")
     by_cas = {}
     if path.endswith(".json"):
         for e in json.loads(text)["entries"]:
             codes = [c for c in e.get("h_codes", []) if H_RE.match(c)]
+            minimum = minimum_codes(e.get("hazard_classes", []), codes)
             for field in e.get("cas", []):
                 for cas in CAS_RE.findall(field):
-                    by_cas.setdefault(cas, (e["index_no"], e["name"], codes))
+                    by_cas.setdefault(cas, (e["index_no"], e["name"], codes, minimum))
     else:
         rows = csv.DictReader(text.splitlines(), delimiter="\t")
         for r in rows:
             codes = [c for c in r["h_codes"].split() if H_RE.match(c)]
+            minimum = (r.get("minimum") or "").split()
             for cas in r["cas"].split(";"):
-                by_cas.setdefault(cas.strip(), (r["index_no"], r["name"], codes))
+                by_cas.setdefault(cas.strip(), (r["index_no"], r["name"], codes, minimum))
     return by_cas
 
 
-def compare(recalled, entry):
-    """Returns (new list, added, replaced [(old, new)], kept extras)."""
+def compare(recalled, entry, minimum=()):
+    """Returns (new list, added, replaced [(old, new)], kept extras, kept more severe [(recalled, entry)])."""
     entry_classes = {hazard_class(c): c for c in entry}
     if "H314" in entry:  # skin corrosion 1 implies serious eye damage; H318 is not labelled beside H314
         entry_classes.setdefault("eye", "H314")
     added = [c for c in entry if c not in recalled]
-    replaced, extras = [], []
+    replaced, extras, severer = [], [], []
     for c in recalled:
         if c in entry:
             continue
         cls = hazard_class(c)
         if cls in entry_classes:
-            replaced.append((c, entry_classes[cls]))
+            e = entry_classes[cls]
+            if e in minimum and int(c[1:4]) < int(e[1:4]):
+                severer.append((c, e))  # a minimum classification: the recalled more severe category may be right
+            else:
+                replaced.append((c, e))
         else:
             extras.append(c)
-    new = sorted(set(entry) | set(extras), key=lambda c: (int(c[1:4]), c))
-    return new, [c for c in added if c not in {n for _, n in replaced}], replaced, extras
+    dropped = {e for _, e in severer}
+    new = sorted((set(entry) - dropped) | set(extras) | {c for c, _ in severer}, key=lambda c: (int(c[1:4]), c))
+    return new, [c for c in added if c not in {n for _, n in replaced} | dropped], replaced, extras, severer
 
 
-def note_text(index_no, added, replaced, extras):
+def note_text(index_no, added, replaced, extras, severer=()):
     parts = [f"{NOTE_MARK} (index {index_no}, key clp-annex-vi-checked, read from a stored copy)"]
     if added or replaced:
         fix = [f"added {' '.join(added)}"] if added else []
@@ -106,6 +127,9 @@ def note_text(index_no, added, replaced, extras):
         parts.append("corrected: " + ", ".join(fix))
     else:
         parts.append("confirmed")
+    for c, e in severer:
+        parts.append(f"{c} kept instead of the entry's {e}: the entry is a minimum classification (marked *), "
+                     f"suppliers classify more severely where their data say so, check the SDS")
     if extras:
         parts.append(f"{' '.join(extras)} not in the harmonised entry: kept as recalled from memory of suppliers' "
                      f"classifications (Annex VI lists only the harmonised classes; suppliers and registrants "
@@ -129,14 +153,15 @@ def main(argv):
         hit = table.get(r["cas"])
         if hit is None:
             continue
-        index_no, _, entry = hit
+        index_no, _, entry, minimum = hit
         recalled = r["hazard_statements"].split()
         basis = r["hazard_basis"].strip()
-        new, added, replaced, extras = compare(recalled, entry)
+        new, added, replaced, extras, severer = compare(recalled, entry, minimum)
         verdict = "corrected" if (added or replaced) else "confirmed"
         print(f"{r['cas']:>11} {r['name'][:34]:34} {basis:18} {index_no}  {verdict}"
               + (f"  +{' '.join(added)}" if added else "")
               + "".join(f"  {o}->{n}" for o, n in replaced)
+              + "".join(f"  {c} kept (minimum {e})" for c, e in severer)
               + (f"  extra {' '.join(extras)}" if extras else ""))
         if basis not in REWRITTEN_BASES and not replaced:
             counts["reported only"] += 1
@@ -148,7 +173,7 @@ def main(argv):
             r["hazard_statements"] = " ".join(new)
             r["hazard_basis"] = "harmonised-checked"
             kept = [p for p in r["note"].split("; ") if p and not p.startswith(NOTE_MARK)] if r["note"] else []
-            r["note"] = "; ".join(kept + [note_text(index_no, added, replaced, extras)])
+            r["note"] = "; ".join(kept + [note_text(index_no, added, replaced, extras, severer)])
     print(f"{sum(1 for r in rows if r['cas'] in table)} solvents with an entry in this copy: "
           + ", ".join(f"{v} {k}" for k, v in counts.items()))
     if apply:

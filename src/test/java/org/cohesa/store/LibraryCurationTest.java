@@ -274,6 +274,11 @@ class LibraryCurationTest {
             assertTrue(solvent(cas).get("note").contains("checked against CLP Annex VI"), cas);
         }
         assertTrue(solvent("95-47-6").get("note").contains("H304 not in the harmonised entry"));
+        // Same copy: methyl isobutyl ketone 606-004-00-4 now Carc. 2 H351 and STOT SE 3 H336; acetic anhydride
+        // 607-008-00-9 Acute Tox. 4 * H332 is a minimum classification, so the recalled more severe H330 stays.
+        assertTrue(solvent("108-10-1").get("hazard_statements").contains("H351"));
+        assertTrue(solvent("108-24-7").get("hazard_statements").contains("H330"));
+        assertTrue(solvent("108-24-7").get("note").contains("minimum classification"));
         // International Chemical Safety Cards (ILO/WHO), UN GHS criteria, read from stored copies: ICSC 0459 DMSO
         // (November 2023) "Warning, Combustible liquid" = H227; ICSC 0321 propylene glycol (April 2014) "No hazard
         // classification according to GHS criteria", flash point 101 °C c.c.
@@ -289,7 +294,7 @@ class LibraryCurationTest {
         assertEquals("supplier-sds-checked", solvent("3470-98-2").get("src_hazard_statements"));
         // Annex VI entries read from stored copies (SOURCES.md, clp-annex-vi-checked): ethanol Flam. Liq. 2 H225 only
         // (ECHA C&L Inventory, index 603-002-00-5); acetone, ethyl acetate and MEK H225 H336 H319; n-butyl acetate H226 H336; propylene carbonate H319;
-        // acetonitrile H225 H302 H312 H332 H319 (ECHA Brief Profile); MIBK H225 H332 H319 H335 (GisChem); THF H225 H319 H351 H335 (GisChem); methanol H225 H301 H311 H331 H370 (BGN).
+        // acetonitrile H225 H302 H312 H332 H319 (ECHA Brief Profile); MIBK H225 H332 H319 H335 (GisChem) and, by the consolidated Annex VI Table 3 (02008R1272-20260701, index 606-004-00-4), also Carc. 2 H351 and STOT SE 3 H336; THF H225 H319 H351 H335 (GisChem); methanol H225 H301 H311 H331 H370 (BGN).
         Map<String, Set<String>> annexVi = Map.of(
                 "64-17-5", Set.of("H225"),
                 "67-64-1", Set.of("H225", "H336", "H319"),
@@ -298,7 +303,7 @@ class LibraryCurationTest {
                 "78-93-3", Set.of("H225", "H336", "H319"),
                 "75-05-8", Set.of("H225", "H302", "H312", "H332", "H319"),
                 "108-32-7", Set.of("H319"),
-                "108-10-1", Set.of("H225", "H332", "H319", "H335"),
+                "108-10-1", Set.of("H225", "H332", "H319", "H335", "H351", "H336"),
                 "109-99-9", Set.of("H225", "H319", "H351", "H335"),
                 "67-56-1", Set.of("H225", "H301", "H311", "H331", "H370"));
         // Self-classifications read in the REACH registrants' dossiers (ECHA registration dossiers 13699 and 15807,
