@@ -109,12 +109,17 @@ class CoverageCommandTest {
     @Test
     void oneSolventShowsForEachValueWhetherMeasuredEstimatedOrRecalled() {
         // tert-butyl acetate: Hansen parameters from Alshehri et al. 2022 (measured), vapour pressure estimated from Tb and
-        // the CRC ΔHvap (no published correlation passes the boiling-point check), GHS statements recalled from memory
+        // the CRC ΔHvap (no published correlation passes the boiling-point check), GHS statements checked against its CLP
+        // Annex VI entry 607-026-00-7 (solvent-db/SOURCES.md, clp-annex-vi-checked)
         JsonNode j = CliTestSupport.run(dir.resolve("c.db"), "solvent", "tert-butyl acetate", "--json").json();
         JsonNode src = j.get("sources");
         assertEquals(Provenance.of(src.get("hsp").get("key").asText(), false).label(), src.get("hsp").get("basis").asText());
         assertEquals("estimated", src.get("vapour_pressure").get("basis").asText());
-        assertEquals("from memory", src.get("hazard_statements").get("basis").asText());
+        assertEquals("measured", src.get("hazard_statements").get("basis").asText());
+        assertEquals("clp-annex-vi-checked", src.get("hazard_statements").get("key").asText());
+        // tetrahydropyran: its GHS statements are a supplier self-classification recalled from memory, and say so
+        JsonNode thp = CliTestSupport.run(dir.resolve("c.db"), "solvent", "tetrahydropyran", "--json").json().get("sources");
+        assertEquals("from memory", thp.get("hazard_statements").get("basis").asText());
         assertEquals("estimate", j.get("vapour_pressure_at_25c").get("kind").asText());
         // N-methyl-2-pyrrolidone: the Landolt–Börnstein Antoine set starts at 336 K, so 25 °C is an extrapolation, said so
         Result nmp = CliTestSupport.run(dir.resolve("c.db"), "solvent", "NMP");
