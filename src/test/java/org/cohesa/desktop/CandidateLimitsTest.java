@@ -45,13 +45,7 @@ class CandidateLimitsTest {
     }
 
     private List<BlendModel.Row> search(FxRobot robot, Runnable form) throws Exception {
-        robot.interact(() -> {
-            fx.workbench.show(Screen.BLENDS);
-            form.run();
-            robot.lookup("#blend-search").queryAs(Button.class).fire();
-        });
-        fx.awaitJobs();
-        return List.copyOf(fx.workbench.blendModel().rows());
+        return fx.searchCandidates(robot, form);
     }
 
     private static boolean any(List<BlendModel.Row> rows, java.util.function.Predicate<Solvent> p) {

@@ -12,7 +12,6 @@ import java.util.List;
 import java.util.Set;
 import java.util.TreeSet;
 import javafx.scene.chart.NumberAxis;
-import javafx.scene.control.Button;
 import javafx.scene.control.CheckBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListView;
@@ -57,31 +56,15 @@ class CandidateRulesTest {
     }
 
     private List<BlendModel.Row> search(FxRobot robot, Runnable form) throws Exception {
-        robot.interact(() -> {
-            fx.workbench.show(Screen.BLENDS);
-            form.run();
-            robot.lookup("#blend-search").queryAs(Button.class).fire();
-        });
-        fx.awaitJobs();
-        return List.copyOf(fx.workbench.blendModel().rows());
+        return fx.searchCandidates(robot, form);
     }
 
     private static List<String> names(List<BlendModel.Row> rows) {
-        List<String> out = new ArrayList<>();
-        for (BlendModel.Row r : rows) {
-            out.add(String.join(" + ", r.blend().components().stream().map(c -> c.solvent().name()).toList()));
-        }
-        return out;
+        return DesktopFixture.names(rows);
     }
 
     private static List<String> names(JsonNode blends) {
-        List<String> out = new ArrayList<>();
-        for (JsonNode b : blends) {
-            List<String> parts = new ArrayList<>();
-            b.get("components").forEach(c -> parts.add(c.get("name").asText()));
-            out.add(String.join(" + ", parts));
-        }
-        return out;
+        return DesktopFixture.names(blends);
     }
 
     @Test

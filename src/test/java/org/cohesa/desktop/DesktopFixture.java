@@ -50,4 +50,31 @@ final class DesktopFixture {
         WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> !session.jobs().runningProperty().get());
         WaitForAsyncUtils.waitForFxEvents();
     }
+
+    /** Fills the candidate form with {@code form} on the FX thread, runs the search and waits for it: the rows found. */
+    java.util.List<org.cohesa.desktop.blend.BlendModel.Row> searchCandidates(org.testfx.api.FxRobot robot, Runnable form) throws Exception {
+        robot.interact(() -> {
+            workbench.show(Screen.BLENDS);
+            form.run();
+            robot.lookup("#blend-search").queryAs(javafx.scene.control.Button.class).fire();
+        });
+        awaitJobs();
+        return java.util.List.copyOf(workbench.blendModel().rows());
+    }
+
+    /** Each row's components joined by " + ", in rank order (to compare with the command line's list). */
+    static java.util.List<String> names(java.util.List<org.cohesa.desktop.blend.BlendModel.Row> rows) {
+        return rows.stream().map(r -> String.join(" + ", r.blend().components().stream().map(c -> c.solvent().name()).toList())).toList();
+    }
+
+    /** The same for the {@code blends} array of {@code cohesa blend --json}. */
+    static java.util.List<String> names(com.fasterxml.jackson.databind.JsonNode blends) {
+        java.util.List<String> out = new java.util.ArrayList<>();
+        for (com.fasterxml.jackson.databind.JsonNode b : blends) {
+            java.util.List<String> parts = new java.util.ArrayList<>();
+            b.get("components").forEach(c -> parts.add(c.get("name").asText()));
+            out.add(String.join(" + ", parts));
+        }
+        return out;
+    }
 }
