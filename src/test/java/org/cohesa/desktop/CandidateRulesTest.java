@@ -55,18 +55,6 @@ class CandidateRulesTest {
         fx = new DesktopFixture(stage, shared);
     }
 
-    private List<BlendModel.Row> search(FxRobot robot, Runnable form) throws Exception {
-        return fx.searchCandidates(robot, form);
-    }
-
-    private static List<String> names(List<BlendModel.Row> rows) {
-        return DesktopFixture.names(rows);
-    }
-
-    private static List<String> names(JsonNode blends) {
-        return DesktopFixture.names(blends);
-    }
-
     @Test
     void anAcidicMaterialGetsNoAmineAsOnTheCommandLine(FxRobot robot) throws Exception {
         fx.awaitLibrary();
@@ -80,14 +68,14 @@ class CandidateRulesTest {
         String said = robot.lookup("#blend-solute-character").queryAs(Label.class).getText();
         assertTrue(said.contains("salicylic acid is acidic") && said.contains("amine"), said);
 
-        List<BlendModel.Row> rows = search(robot, () -> {
+        List<BlendModel.Row> rows = fx.searchCandidates(robot, () -> {
             m.maxComponents.set(2);
             m.top.set(15);
         });
         assertFalse(rows.isEmpty());
         for (BlendModel.Row r : rows) {
             for (BlendComponent c : r.blend().components()) {
-                assertFalse(ReactiveFlag.AMINE.applies(c.solvent()), "an amine for an acid: " + names(List.of(r)));
+                assertFalse(ReactiveFlag.AMINE.applies(c.solvent()), "an amine for an acid: " + DesktopFixture.names(List.of(r)));
             }
             assertTrue(String.join("; ", r.suggestion().why()).contains("solute acidic: no amine"), r.suggestion().why().toString());
         }
@@ -107,17 +95,17 @@ class CandidateRulesTest {
         for (String n : cliNames) {
             assertTrue(text.contains(n), n + " is left out on the command line and must be named on the screen: " + text);
         }
-        assertEquals(names(cli.json().get("blends")), names(rows), "the same candidates, in the same order, as `cohesa blend`");
+        assertEquals(DesktopFixture.names(cli.json().get("blends")), DesktopFixture.names(rows), "the same candidates, in the same order, as `cohesa blend`");
 
         assertTrue(m.leftOutBySafety().get(0).startsWith("Salt formers"), "the material's own rule comes first, before the lists every search has");
         // the switch lets them in, as --allow-salt-formers does
-        List<BlendModel.Row> allowed = search(robot, () -> robot.lookup("#blend-allow-salt-formers").queryAs(CheckBox.class).setSelected(true));
+        List<BlendModel.Row> allowed = fx.searchCandidates(robot, () -> robot.lookup("#blend-allow-salt-formers").queryAs(CheckBox.class).setSelected(true));
         assertEquals("true", m.limits().get("allow-salt-formers"), "stored with the case's limits");
         assertTrue(allowed.stream().noneMatch(r -> String.join("; ", r.suggestion().why()).contains("solute acidic")));
         assertTrue(fx.workbench.blendModel().leftOutBySafety().stream().anyMatch(l -> l.contains("take part because “Allow salt formers” is ticked")));
         CliTestSupport.Result cliAllowed = CliTestSupport.run(fx.folder.resolve("cohesa.db"), "blend", "--material", "salicylic acid",
                 "--max-components", "2", "--top", "15", "--allow-salt-formers", "--json");
-        assertEquals(names(cliAllowed.json().get("blends")), names(allowed), "the same candidates as `cohesa blend --allow-salt-formers`");
+        assertEquals(DesktopFixture.names(cliAllowed.json().get("blends")), DesktopFixture.names(allowed), "the same candidates as `cohesa blend --allow-salt-formers`");
         assertFalse(cliAllowed.json().get("search").get("left_out_names").has(CandidatePool.saltWith(SoluteCharacter.ACIDIC)));
         robot.interact(() -> m.allowSaltFormers.set(false));
 
@@ -135,7 +123,7 @@ class CandidateRulesTest {
             m.allowSaltFormers.set(false);
             fx.session.targetProperty().set(new TargetChoice("demo resin (invented)", SolubilitySphere.of(18.5, 9, 8, 8), "typed in"));
         });
-        List<BlendModel.Row> rows = search(robot, () -> {
+        List<BlendModel.Row> rows = fx.searchCandidates(robot, () -> {
             m.maxComponents.set(3);
             m.top.set(20);
         });
@@ -215,7 +203,7 @@ class CandidateRulesTest {
             priced.add(s.withPricePerLitre(2.0 + (i++ % 7)));
         }
         robot.interact(() -> fx.session.solvents().setAll(priced));
-        List<BlendModel.Row> withPrices = search(robot, () -> { });
+        List<BlendModel.Row> withPrices = fx.searchCandidates(robot, () -> { });
         assertTrue(chart.costChart().isVisible());
         assertTrue(((NumberAxis) chart.costChart().getYAxis()).getLabel().startsWith("Cost per litre"));
         List<ParetoFront.Point> front3 = ParetoFront.of(withPrices.stream().map(r -> r.suggestion().blend()).toList());

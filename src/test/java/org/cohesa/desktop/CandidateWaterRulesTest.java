@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import com.fasterxml.jackson.databind.JsonNode;
 import java.nio.file.Path;
 import java.util.List;
 import javafx.stage.Stage;
@@ -44,18 +43,6 @@ class CandidateWaterRulesTest {
         fx = new DesktopFixture(stage, shared);
     }
 
-    private List<BlendModel.Row> search(FxRobot robot, Runnable form) throws Exception {
-        return fx.searchCandidates(robot, form);
-    }
-
-    private static List<String> names(List<BlendModel.Row> rows) {
-        return DesktopFixture.names(rows);
-    }
-
-    private static List<String> names(JsonNode blends) {
-        return DesktopFixture.names(blends);
-    }
-
     @Test
     void noWaterInAPvdfSolutionAsOnTheCommandLine(FxRobot robot) throws Exception {
         fx.awaitLibrary();
@@ -65,14 +52,14 @@ class CandidateWaterRulesTest {
         robot.interact(() -> fx.session.targetProperty().set(new TargetChoice(pvdf.name(), pvdf.sphere(),
                 "material library, source: " + pvdf.source())));
         BlendModel m = fx.workbench.blendModel();
-        List<BlendModel.Row> rows = search(robot, () -> {
+        List<BlendModel.Row> rows = fx.searchCandidates(robot, () -> {
             m.maxComponents.set(2);
             m.top.set(10);
         });
         assertFalse(rows.isEmpty());
         for (BlendModel.Row r : rows) {
             for (BlendComponent c : r.blend().components()) {
-                assertFalse(WaterMiscibility.isWater(c.solvent()), "water in a PVDF solution: " + names(List.of(r)));
+                assertFalse(WaterMiscibility.isWater(c.solvent()), "water in a PVDF solution: " + DesktopFixture.names(List.of(r)));
             }
         }
         assertTrue(m.leftOutBySafety().stream().anyMatch(l -> l.startsWith("water left out") && l.contains("Include only")),
@@ -80,7 +67,7 @@ class CandidateWaterRulesTest {
         CliTestSupport.Result cli = CliTestSupport.run(fx.folder.resolve("cohesa.db"), "blend", "--material", pvdf.name(),
                 "--max-components", "2", "--top", "10", "--json");
         assertEquals(0, cli.exitCode(), cli.err());
-        assertEquals(names(cli.json().get("blends")), names(rows), "the same candidates, in the same order, as `cohesa blend`");
+        assertEquals(DesktopFixture.names(cli.json().get("blends")), DesktopFixture.names(rows), "the same candidates, in the same order, as `cohesa blend`");
     }
 
     @Test
@@ -96,7 +83,7 @@ class CandidateWaterRulesTest {
                     dcm.hansen().dP(), dcm.hansen().dH(), 4), "typed in"));
         });
         assertEquals(ProcessUse.AS_ORIGINAL, m.process.get(), "a replacement case ranks as the replaced liquid");
-        List<BlendModel.Row> rows = search(robot, () -> {
+        List<BlendModel.Row> rows = fx.searchCandidates(robot, () -> {
             m.maxComponents.set(2);
             m.top.set(10);
         });
@@ -107,10 +94,10 @@ class CandidateWaterRulesTest {
             List<Solvent> comps = r.blend().components().stream().map(BlendComponent::solvent).toList();
             double[] f = r.blend().components().stream().mapToDouble(BlendComponent::fraction).toArray();
             WaterBehaviour wb = WaterMiscibility.withWater(comps, f, water, 298.15, WaterMiscibilityCsv.bundled());
-            assertEquals(WaterBehaviour.Kind.IMMISCIBLE, wb.kind(), names(List.of(r)) + " must separate from water: " + wb.detail());
+            assertEquals(WaterBehaviour.Kind.IMMISCIBLE, wb.kind(), DesktopFixture.names(List.of(r)) + " must separate from water: " + wb.detail());
         }
         // 1,3-dioxolane mixes with water (it led the list before the rule): not a candidate here
-        assertTrue(names(rows).stream().noneMatch(n -> n.contains("1,3-dioxolane")), names(rows).toString());
+        assertTrue(DesktopFixture.names(rows).stream().noneMatch(n -> n.contains("1,3-dioxolane")), DesktopFixture.names(rows).toString());
         robot.interact(() -> fx.session.replacingProperty().set(""));
     }
 }
