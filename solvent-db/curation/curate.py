@@ -215,6 +215,37 @@ def related_boiling_point(cas, phys):
     return tb, text
 
 
+# Solvents without a density of their own in the CRC table whose liquid it lists under another CAS: the same liquid
+# (an enantiomer or the racemate) or, for an isomer mixture, its main isomer (the one its vapour-pressure curve uses):
+# cas -> (CAS of the CRC row, reason). Decalin is left out on purpose: its cis and trans isomers differ by 3.5 % in
+# density (0.8965 and 0.8659 g/cm³), so neither stands for the mixture (its recalled value lies between them).
+DENSITY_PROXIES = {
+    "138-86-3": ("5989-27-5", "dipentene (racemic limonene): the CRC table lists (R)-(+)-limonene 5989-27-5, the same "
+                 "liquid as an enantiomer (enantiomers have the same density)"),
+    "123-96-6": ("4128-31-8", "2-octanol: the CRC table lists (±)-2-octanol under CAS 4128-31-8"),
+    "138-22-7": ("34451-18-8", "n-butyl lactate: the CRC table lists 'Butyl lactate' under CAS 34451-18-8"),
+    "98-55-5": ("2438-12-2", "alpha-terpineol: the CRC table lists 'α-Terpineol' under CAS 2438-12-2 (melting point "
+                "35 °C, the racemate's)"),
+    "1330-20-7": ("108-38-3", "mixed xylene: density of m-xylene 108-38-3, its main isomer"),
+}
+
+
+def related_density(cas, phys, recalled):
+    """(density in g/cm³, note) from the CRC row of DENSITY_PROXIES, with the isomers' range for an isomer mixture."""
+    proxy = DENSITY_PROXIES.get(cas)
+    if proxy is None or proxy[0] not in phys or num(phys[proxy[0]][4]) is None:
+        return None
+    other, reason = proxy
+    rho = sig(num(phys[other][4]) / 1000.0, 4)
+    text = f"density of {other} in the CRC table ({reason})" + (
+        f" (replaces {recalled} g/cm³ recalled from memory)" if recalled else "")
+    if cas in ISOMER_RANGE:
+        rhos = [num(phys[c][4]) / 1000.0 for c in ISOMER_RANGE[cas] if c in phys and num(phys[c][4]) is not None]
+        text += (f"; the components range from {min(rhos):.4f} to {max(rhos):.4f} g/cm³ (CRC, CAS "
+                 f"{', '.join(ISOMER_RANGE[cas])}): a grade's density depends on its composition")
+    return rho, text
+
+
 def recalled_bp_replaced(m):
     return f" (replaces {m['boiling_point_c']} °C recalled from memory)" if m.get("boiling_point_c") else ""
 
@@ -434,6 +465,11 @@ def main(argv):
             rho = sig(num(phys[cas][4]) / 1000.0, 4)
             r["density"] = fmt_sig(rho, 4)
             r["src_density"] = "crc-physical-constants"
+        elif (related := related_density(cas, phys, m["density"])) is not None:
+            rho, text = related
+            r["density"] = fmt_sig(rho, 4)
+            r["src_density"] = "crc-physical-constants-related"
+            notes.append(text)
         elif m["density"]:
             # kept as written in manual.csv: the number of digits states its precision
             rho = float(m["density"])

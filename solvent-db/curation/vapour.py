@@ -159,16 +159,20 @@ PROXIES = {
     "1330-20-7": ("108-38-3", "mixed xylene: curve of m-xylene 108-38-3, its main isomer"),
     "91-17-8": ("493-02-7", "decalin (cis/trans mixture): curve of trans-decalin 493-02-7, the more volatile isomer"),
     "25498-49-1": ("20324-33-8", "tripropylene glycol methyl ether (isomer mixture): curve of the isomer 20324-33-8"),
+    "98-55-5": ("10482-56-1", "alpha-terpineol: curve of the Landolt–Börnstein entry p-menth-1-en-8-ol, CAS 10482-56-1 ((−)-alpha-terpineol; "
+                "enantiomers and their racemic liquid have the same vapour pressure)"),
 }
 
 # PROXIES that are the same liquid under another CAS entry (an enantiomer or the racemate, not an isomer of a mixture):
 # where no CRC table has a boiling point, the proxy's own published fit may give it (curate.py, tb-from-vapour-fit).
-SAME_LIQUID_PROXIES = {"138-86-3", "97-64-3", "547-64-8"}
+SAME_LIQUID_PROXIES = {"138-86-3", "97-64-3", "547-64-8", "98-55-5"}
 
 # Solvents without a boiling point of their own whose liquid the CRC table lists under another CAS: that boiling point
 # is the check of the vapour-pressure fit (written into the note): cas -> (CAS of the CRC row, reason).
 TB_PROXIES = {
     "123-96-6": ("4128-31-8", "2-octanol: the CRC table lists (±)-2-octanol under CAS 4128-31-8"),
+    "98-55-5": ("2438-12-2", "alpha-terpineol: the CRC table lists 'α-Terpineol' under CAS 2438-12-2 (melting point "
+                "35 °C, the racemate's)"),
 }
 
 # A boiling point read off a published correlation may lie this far above the fit's upper limit (K): Landolt sets often

@@ -424,6 +424,43 @@ class BundledDataCrossCheckTest {
     }
 
     @Test
+    void densitiesOfARelatedCrcEntryEqualThatEntry() throws IOException {
+        // CRC Handbook, 95th ed. (2014), "Physical Constants of Organic Compounds", density (kg/m³) of the entry the note
+        // names (key crc-physical-constants-related, SOURCES.md): d-limonene 5989-27-5 841.12 for dipentene, (±)-2-octanol
+        // 4128-31-8 819.32, "Butyl lactate" 34451-18-8 974.427 for n-butyl lactate, "α-Terpineol" 2438-12-2 933.72 for
+        // alpha-terpineol 98-55-5, m-xylene 108-38-3 859.825 for mixed xylene; rounded to 4 significant figures.
+        Map<String, List<String>> phys = byCas("physical-constants-of-organic-compounds.csv");
+        Pattern named = Pattern.compile("density of (\\d{2,7}-\\d{2}-\\d) in the CRC table");
+        List<String> bad = new ArrayList<>();
+        int n = 0;
+        for (Map<String, String> r : rows) {
+            if (!r.get("src_density").equals("crc-physical-constants-related")) {
+                continue;
+            }
+            n++;
+            Matcher m = named.matcher(r.get("note"));
+            if (!m.find()) {
+                bad.add(r.get("name") + ": the note does not name the CRC entry of its density");
+                continue;
+            }
+            List<String> p = phys.get(m.group(1));
+            if (phys.containsKey(r.get("cas")) && has(phys.get(r.get("cas")), 4)) {
+                bad.add(r.get("name") + ": the CRC table has a density under the solvent's own CAS");
+            } else if (!has(p, 4)) {
+                bad.add(r.get("name") + ": the CRC entry " + m.group(1) + " has no density");
+            } else {
+                double expected = Double.parseDouble(p.get(4)) / 1000.0;
+                double halfUnitOf4thDigit = 0.5 * Math.pow(10, Math.floor(Math.log10(expected)) - 3);
+                if (Math.abs(num(r, "density") - expected) > halfUnitOf4thDigit + 1e-12) {
+                    bad.add(r.get("name") + " density " + r.get("density") + " vs " + expected + " of " + m.group(1));
+                }
+            }
+        }
+        assertTrue(n >= 5, "only " + n + " densities from a related CRC entry");
+        assertTrue(bad.isEmpty(), String.join("\n", bad));
+    }
+
+    @Test
     void flashPointAutoignitionAndFlammabilityLimitsEqualTheCitedTable() throws IOException {
         // IEC 60079-20-1:2010, NFPA 497 (2008), Serat et al. Fluid Phase Equilib. 449 (2017) 52 (DIPPR values):
         // temperatures in K (−273.15 -> °C, kept to 0.1 °C), limits as volume fractions (×100 -> vol %).
