@@ -69,4 +69,22 @@ class BenchCommandTest {
         assertEquals(2, code);
         assertTrue(err.toString().startsWith("error: --liquids 'not-a-liquid': no such solvent"), err.toString());
     }
+
+    @Test
+    void fitChecksLimitsReportEachVariantPerScenarioAndSphere() throws Exception {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = CohesaCommand.run(new String[] {"--db", dir.resolve("t.db").toString(), "bench", "fit-checks", "--limits", "--trials", "5",
+                "--json"}, new PrintWriter(out), new PrintWriter(err));
+        assertEquals(0, code, err.toString());
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertEquals("fit-checks --limits", j.get("benchmark").asText());
+        assertEquals(4, j.get("scenarios").size(), "15, 20, 30 clean and 30 with two flips");
+        JsonNode thirty = j.get("scenarios").get(2);
+        assertEquals(30, thirty.get("liquids").asInt());
+        assertEquals(6, thirty.get("lines").size());
+        assertEquals(5, thirty.get("per_sphere").size(), "the five spheres of issue 14");
+        assertEquals(0, thirty.get("fit_worse_than_truth").asInt());
+        assertTrue(j.get("library_spheres").asInt() > 20, "the published non-drug spheres of the bundled table");
+    }
 }

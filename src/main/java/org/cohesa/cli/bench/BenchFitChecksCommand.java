@@ -17,6 +17,7 @@ import org.cohesa.core.structure.MeasuredProperties;
 import org.cohesa.core.structure.StructureEstimate;
 import org.cohesa.core.target.CentrePrior;
 import org.cohesa.core.target.CommonTestLiquids;
+import org.cohesa.core.target.FitLimits;
 import org.cohesa.core.target.MaterialKind;
 import org.cohesa.core.target.FitValidation;
 import org.cohesa.core.target.Material;
@@ -63,6 +64,11 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
             + "usable series (3 inside, 3 outside, the flips and partial results near the surface) are left out.")
     Path liquids;
 
+    @Option(names = "--limits", description = "Instead of the figures above, measure what limits the centre error: the same series fitted "
+            + "with more starts, with R0 fixed at the truth, with the whole list scored, with a sharper softness and with a leave-one-out "
+            + "prior from the library's other published spheres; per-axis errors and each sphere's own error.")
+    boolean limits;
+
     record Row(int liquids, int flips, @JsonProperty("scored_half") int scoredHalf, int trials, @JsonProperty("centre_error_median") double centreMedian,
                @JsonProperty("centre_error_max") double centreMax, @JsonProperty("r0_error_median") double r0Median,
                @JsonProperty("region_coverage") double regionCoverage, @JsonProperty("box_coverage") double boxCoverage,
@@ -81,6 +87,19 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
                     @JsonProperty("centre_error_median_with_prior") double priorCentre, @JsonProperty("r0_error_median") double plainR0,
                     @JsonProperty("r0_error_median_with_prior") double priorR0, @JsonProperty("prior_centre_error_median") double guess,
                     @JsonProperty("region_coverage") double plainCoverage, @JsonProperty("region_coverage_with_prior") double priorCoverage) {
+    }
+
+    record LimitsScenario(int liquids, int flips, int trials, List<FitLimits.Line> lines,
+                          @JsonProperty("log_likelihood_gap_median") double gap, @JsonProperty("fit_worse_than_truth") int worse,
+                          @JsonProperty("per_sphere") List<SphereLine> perSphere) {
+    }
+
+    record SphereLine(String material, int trials, @JsonProperty("centre_error_median") double centreMedian,
+                      @JsonProperty("mean_offset") double[] meanOffset) {
+    }
+
+    record LimitsReport(String benchmark, String spheres, @JsonProperty("liquid_list") String liquidList, long seed,
+                        @JsonProperty("library_spheres") int librarySpheres, List<LimitsScenario> scenarios, double seconds) {
     }
 
     record Report(String benchmark, String spheres, @JsonProperty("liquid_list") String liquidList, long seed,
@@ -157,6 +176,10 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
         }
         if (truths.isEmpty()) {
             throw new InvalidInputException("--liquids", String.valueOf(liquids), "none of the " + spheres + " spheres can be tested with these liquids");
+        }
+        if (limits) {
+            limits(truths, pool, start);
+            return;
         }
         List<Row> rows = new ArrayList<>();
         for (int size : new int[] {15, 20, 30}) {
@@ -242,6 +265,58 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
         }
         q.print(out());
         out().printf(Locale.ROOT, "%.1f s on %d cores%n", seconds, Runtime.getRuntime().availableProcessors());
+    }
+
+    /** The published library spheres a leave-one-out prior may use: every bundled material but the drug substances (default radii). */
+    private List<SolubilitySphere> librarySpheres() {
+        return ctx().materials().library().all().stream().filter(m -> !m.userEntry() && m.kind() != MaterialKind.DRUG).map(Material::sphere).toList();
+    }
+
+    private String materialName(SolubilitySphere s) {
+        return ctx().materials().library().all().stream().filter(m -> !m.userEntry() && m.sphere().equals(s)).map(Material::name).findFirst()
+                .orElse(s.toString());
+    }
+
+    private void limits(List<SolubilitySphere> truths, List<NamedPoint> pool, long start) {
+        List<SolubilitySphere> library = librarySpheres();
+        List<LimitsScenario> out = new ArrayList<>();
+        for (int[] sf : new int[][] {{15, 0}, {20, 0}, {30, 0}, {30, 2}}) {
+            FitLimits.Figures f = FitLimits.run(truths, library, pool, new FitValidation.Scenario(sf[0], sf[1], 0), trials,
+                    seed * 1000 + 900 + sf[0] + sf[1]);
+            List<FitLimits.Line> lines = f.lines().stream().map(l -> new FitLimits.Line(l.what(), Output.round(l.centreMedian(), 3),
+                    Output.round(l.centreMean(), 3), Output.round(l.r0Median(), 3), Output.round(l.dDMedian(), 3), Output.round(l.dPMedian(), 3),
+                    Output.round(l.dHMedian(), 3))).toList();
+            List<SphereLine> per = f.perSphere().stream().map(p -> new SphereLine(materialName(p.truth()), p.trials(), Output.round(p.centreMedian(), 3),
+                    new double[] {Output.round(p.meanOffsetDD(), 2), Output.round(p.meanOffsetDP(), 2), Output.round(p.meanOffsetDH(), 2),
+                            Output.round(p.meanOffsetR0(), 2)})).toList();
+            out.add(new LimitsScenario(sf[0], sf[1], f.trials(), lines, Output.round(f.logLikelihoodGapMedian(), 3), f.fitWorseThanTruth(), per));
+        }
+        LimitsReport report = new LimitsReport("fit-checks --limits", spheres + " (" + truths.size() + " spheres)",
+                liquids == null ? "the 35 common test liquids" : liquids.toString(), seed, library.size(), out,
+                Output.round((System.nanoTime() - start) / 1e9, 1));
+        if (json()) {
+            Output.json(out(), report);
+            return;
+        }
+        out().printf(Locale.ROOT, "what limits the centre error: %s, %d trials per scenario, seed %d, series drawn from %s; median errors in MPa^½%n",
+                report.spheres(), trials, seed, report.liquidList());
+        for (LimitsScenario x : out) {
+            out().printf(Locale.ROOT, "%n%d liquids, %d flips (%d trials); fitted minus true log-likelihood: median %.2f nats, below 0 in %d trials%n",
+                    x.liquids(), x.flips(), x.trials(), x.gap(), x.worse());
+            TextTable t = new TextTable("fit", "centre med", "centre mean", "R0 med", "|ΔδD| med", "|ΔδP| med", "|ΔδH| med");
+            for (FitLimits.Line l : x.lines()) {
+                t.row(l.what(), Output.fmt(l.centreMedian(), 2), Output.fmt(l.centreMean(), 2), Output.fmt(l.r0Median(), 2), Output.fmt(l.dDMedian(), 2),
+                        Output.fmt(l.dPMedian(), 2), Output.fmt(l.dHMedian(), 2));
+            }
+            t.print(out());
+            TextTable p = new TextTable("sphere", "trials", "centre med", "mean ΔδD", "mean ΔδP", "mean ΔδH", "mean ΔR0");
+            for (SphereLine s : x.perSphere()) {
+                p.row(s.material(), s.trials(), Output.fmt(s.centreMedian(), 2), Output.fmt(s.meanOffset()[0], 2), Output.fmt(s.meanOffset()[1], 2),
+                        Output.fmt(s.meanOffset()[2], 2), Output.fmt(s.meanOffset()[3], 2));
+            }
+            p.print(out());
+        }
+        out().printf(Locale.ROOT, "%.1f s on %d cores%n", report.seconds(), Runtime.getRuntime().availableProcessors());
     }
 
     private List<PriorRow> priorRows(List<FitValidation.PriorCase> cases, List<NamedPoint> pool, long base) {
