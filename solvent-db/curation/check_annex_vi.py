@@ -15,6 +15,8 @@ TABLE is a copy of Table 3 that this repository does not ship, either
     consolidated act, e.g. 02008R1272-20260701), or
   * TSV with the columns index_no, cas (";"-separated), name, h_codes (space-separated) and optionally
     minimum (the codes of classes the entry marks with "*"), for entries transcribed from such a copy.
+    solvent-db/curation/annex-vi-table3-excerpt.tsv is that transcription for the entries compared so far
+    (only those; the full table is not shipped).
 An entry's class marked "*" is a minimum classification (Annex VI, 1.2.1): a recalled more severe category of
 it (H330 beside the entry's H332) is kept and named in the note rather than replaced.
 Only the entries the copy holds are compared: a solvent absent from a partial copy is reported as

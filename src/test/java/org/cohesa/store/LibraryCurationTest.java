@@ -332,6 +332,53 @@ class LibraryCurationTest {
     }
 
     @Test
+    void everyAnnexViCheckedListHoldsItsEntry() throws IOException {
+        // CLP Regulation (EC) No 1272/2008, Annex VI, Table 3 as consolidated in 02008R1272-20260701: the entries read
+        // from a stored copy (SOURCES.md, clp-annex-vi-checked) are transcribed with their index numbers in
+        // solvent-db/curation/annex-vi-table3-excerpt.tsv. Every bundled solvent whose CAS number is in that excerpt
+        // and whose list rests on clp-annex-vi-checked carries every hazard statement of its entry, except a recalled
+        // more severe category of a minimum classification (marked *, Annex VI 1.2.1), which its note names.
+        Map<String, String[]> entries = new HashMap<>();
+        for (String line : Files.readAllLines(Path.of("solvent-db", "curation", "annex-vi-table3-excerpt.tsv"))) {
+            String[] f = line.split("\t", -1);
+            if (f[0].equals("index_no")) {
+                continue;
+            }
+            for (String cas : f[1].split(";")) {
+                entries.putIfAbsent(cas.trim(), f);
+            }
+        }
+        List<String> bad = new ArrayList<>();
+        int checked = 0;
+        for (Map<String, String> r : byCas.values()) {
+            String[] e = entries.get(r.get("cas"));
+            if (e == null || !r.get("src_hazard_statements").equals("clp-annex-vi-checked")) {
+                continue;
+            }
+            checked++;
+            Set<String> list = Set.of(r.get("hazard_statements").split(" "));
+            if (!r.get("note").contains("index " + e[0])) {
+                bad.add(r.get("name") + ": note does not name index " + e[0]);
+            }
+            for (String code : e[3].split(" ")) {
+                if (!list.contains(code) && !r.get("note").contains("kept instead of the entry's " + code)) {
+                    bad.add(r.get("name") + " (" + e[0] + "): lacks " + code);
+                }
+            }
+        }
+        assertTrue(bad.isEmpty(), String.join("\n", bad));
+        assertTrue(checked >= 120, "only " + checked + " lists compared");
+        // Corrected by this comparison (same source): diethylene glycol monomethyl ether 603-107-00-6 Repr. 1B H360D
+        // (recalled as H361d); 2-phenoxyethanol 603-098-00-9 Eye Dam. 1 H318 and STOT SE 3 H335 (recalled H319);
+        // 2-hexyloxyethanol 603-178-00-3 H312 H302 H314 (recalled with none); 1,2-diethoxyethane 603-208-00-5 adds H319.
+        assertTrue(solvent("111-77-3").get("hazard_statements").contains("H360D"));
+        assertFalse(solvent("111-77-3").get("hazard_statements").contains("H361"));
+        assertEquals(Set.of("H302", "H318", "H335"), Set.of(solvent("122-99-6").get("hazard_statements").split(" ")));
+        assertEquals(Set.of("H302", "H312", "H314"), Set.of(solvent("112-25-4").get("hazard_statements").split(" ")));
+        assertTrue(solvent("629-14-1").get("hazard_statements").contains("H319"));
+    }
+
+    @Test
     void curatedSmilesHaveTheHeavyAtomsOfTheFormula() {
         // Consistency of the curated structures (curation/structures.csv) with the formula: every heavy atom of the
         // Hill formula appears in the SMILES as often (hydrogens are implicit in SMILES and not counted).
