@@ -215,6 +215,10 @@ def related_boiling_point(cas, phys):
     return tb, text
 
 
+# Source key of the molar mass of a technical mixture taken from its representative main component (an estimate).
+REPRESENTATIVE_MM_KEY = "estimate-representative-molar-mass"
+
+
 # Solvents without a density of their own in the CRC table whose liquid it lists under another CAS: the same liquid
 # (an enantiomer or the racemate) or, for an isomer mixture, its main isomer (the one its vapour-pressure curve uses):
 # cas -> (CAS of the CRC row, reason). Decalin is left out on purpose: its cis and trans isomers differ by 3.5 % in
@@ -458,6 +462,16 @@ def main(argv):
         if mm is not None:
             r["molar_mass"] = fmt(round(mm, 3), 3)
             r["src_molar_mass"] = "computed"
+        elif (rep := (m.get("hsp_component") or "").strip()) and rep in ids:
+            # a technical mixture without a formula: the molar mass of its named main component stands for the grade's
+            # mean molar mass (an estimate; SOURCES.md, estimate-representative-molar-mass), so that mole fractions,
+            # molar volume and evaporation can be computed
+            mm = molar_mass(hill(parse_formula(ids[rep][2])))
+            r["molar_mass"] = fmt(round(mm, 3), 3)
+            r["src_molar_mass"] = REPRESENTATIVE_MM_KEY
+            notes.append(f"molar mass: that of the representative main component {manual[rep]['name'] if rep in manual else rep} "
+                         f"({rep}), an estimate of the grade's mean molar mass (its components' molar masses differ by "
+                         "up to about 15 %)")
 
         # density (g/cm3)
         rho = None

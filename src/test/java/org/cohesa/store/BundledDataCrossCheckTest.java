@@ -88,7 +88,9 @@ class BundledDataCrossCheckTest {
             // checked by VapourPressureAtBoilingPointTest against the solvent's own published fit
             "tb-from-vapour-fit",
             // checked by EstimatedHansenTableTest against the structure estimator (Mathieu 2018)
-            "estimate-structure-mathieu-2018");
+            "estimate-structure-mathieu-2018",
+            // checked below against PubChem's molecular weight of the named component (representativeMolarMass...)
+            "estimate-representative-molar-mass");
 
     /** Source group -> the value column whose presence the source key must match. */
     private static final Map<String, String> GROUP_PRIMARY = new LinkedHashMap<>();
@@ -864,6 +866,41 @@ class BundledDataCrossCheckTest {
                 bad.add(r.get("name") + ": ICH source '" + r.get("src_ich") + "', expected " + expectedKey);
             }
         }
+        assertTrue(bad.isEmpty(), String.join("\n", bad));
+    }
+
+    @Test
+    void representativeMolarMassIsThePubChemMolecularWeightOfTheNamedMainComponent() throws IOException {
+        // Key estimate-representative-molar-mass (SOURCES.md): a technical mixture without a formula takes the molar mass
+        // of the main component its note names (the same component as its representative Hansen parameters); PubChem
+        // compound records (identifiers table) give that component's molecular weight; 2e-4 relative as in the identity
+        // check below. The molar volume then follows from the grade's own density.
+        Map<String, List<String>> ids = new HashMap<>();
+        for (List<String> row : table("chemical-identifiers-pubchem-small.tsv", false)) {
+            if (row.size() > 6) {
+                ids.putIfAbsent(row.get(1), row);
+            }
+        }
+        Pattern named = Pattern.compile("molar mass: that of the representative main component [^(]*\\((\\d{2,7}-\\d{2}-\\d)\\)");
+        List<String> bad = new ArrayList<>();
+        int n = 0;
+        for (Map<String, String> r : rows) {
+            if (!r.get("src_molar_mass").equals("estimate-representative-molar-mass")) {
+                continue;
+            }
+            n++;
+            Matcher m = named.matcher(r.get("note"));
+            if (!r.get("formula").isEmpty() || !r.get("src_hsp").equals("alshehri-2022-representative") || !m.find()) {
+                bad.add(r.get("name") + ": a representative molar mass needs no formula, representative HSP and the component in the note");
+                continue;
+            }
+            List<String> pub = ids.get(m.group(1));
+            double mw = Double.parseDouble(pub.get(3));
+            if (Math.abs(num(r, "molar_mass") - mw) > 2e-4 * mw) {
+                bad.add(r.get("name") + ": molar mass " + r.get("molar_mass") + " vs PubChem " + mw + " of " + m.group(1));
+            }
+        }
+        assertTrue(n >= 2, "only " + n + " representative molar masses");
         assertTrue(bad.isEmpty(), String.join("\n", bad));
     }
 
