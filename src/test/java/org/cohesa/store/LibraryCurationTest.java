@@ -376,6 +376,14 @@ class LibraryCurationTest {
         assertEquals(Set.of("H302", "H318", "H335"), Set.of(solvent("122-99-6").get("hazard_statements").split(" ")));
         assertEquals(Set.of("H302", "H312", "H314"), Set.of(solvent("112-25-4").get("hazard_statements").split(" ")));
         assertTrue(solvent("629-14-1").get("hazard_statements").contains("H319"));
+        // Same source: nitrobenzene 609-003-00-7 Aquatic Chronic 3 H412 (recalled H411); triethylamine 612-004-00-5
+        // Acute Tox. 3 by all routes (H301, recalled H302) and Eye Dam. 1 H318; di-n-butylamine 612-049-00-0 Acute Tox. 2
+        // by inhalation H330 and Acute Tox. 3 oral H301 (recalled H331, H302), Eye Dam. 1 H318.
+        assertTrue(solvent("98-95-3").get("hazard_statements").contains("H412"));
+        assertFalse(solvent("98-95-3").get("hazard_statements").contains("H411"));
+        assertTrue(Set.of(solvent("121-44-8").get("hazard_statements").split(" ")).containsAll(Set.of("H301", "H311", "H331", "H318")));
+        assertFalse(solvent("121-44-8").get("hazard_statements").contains("H302"));
+        assertEquals(Set.of("H226", "H301", "H311", "H314", "H318", "H330"), Set.of(solvent("111-92-2").get("hazard_statements").split(" ")));
     }
 
     @Test
