@@ -82,7 +82,7 @@ class BenchCommandTest {
         assertEquals(4, j.get("scenarios").size(), "15, 20, 30 clean and 30 with two flips");
         JsonNode thirty = j.get("scenarios").get(2);
         assertEquals(30, thirty.get("liquids").asInt());
-        assertEquals(6, thirty.get("lines").size());
+        assertEquals(8, thirty.get("lines").size());
         assertEquals(5, thirty.get("per_sphere").size(), "the five spheres of issue 14");
         assertEquals(0, thirty.get("fit_worse_than_truth").asInt());
         assertTrue(j.get("library_spheres").asInt() > 20, "the published non-drug spheres of the bundled table");
