@@ -136,6 +136,7 @@ public final class LikelihoodFitter {
         List<ResultProbability> probabilities = probabilities(results, sphere, model);
         List<NextTest> next = InformationAdvisor.suggest(best, data, cloud, untested, model, prior, options.nextTests());
         List<String> notes = notes(probabilities, model, prior);
+        RadiusCentreTradeOff.of(inside).filter(RadiusCentreTradeOff::matters).ifPresent(t -> notes.add(t.note()));
         return new FitResult(sphere, SphereFitter.quality(results, sphere), confidence, next, results.size(), FitMethod.LIKELIHOOD,
                 probabilities, region, prior, notes);
     }

@@ -61,7 +61,8 @@ class FitChecksTest {
         FitValidation.Figures f = RUNS.get("30/0");
         // issue 14 asks for a centre error median ≤ 0.8; measured 0.98 over 30 trials (bench fit-checks), so the
         // check holds the measured level and docs/methods.md reports the shortfall: the 35 liquids leave the
-        // high-δD side of polystyrene and polycarbonate open, and no estimator can place the centre there
+        // high-δD side of polystyrene open (and cellulose acetate butyrate loosely fixed): scoring all 35 gives 0.76, and no
+        // estimator tried did better (bench fit-checks --limits)
         assertTrue(f.centreMedian() <= 1.2, "centre error median " + f.centreMedian());
         assertTrue(f.r0Median() <= 0.8, "R0 error median " + f.r0Median());
     }
