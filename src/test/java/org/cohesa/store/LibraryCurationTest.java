@@ -384,6 +384,12 @@ class LibraryCurationTest {
         assertTrue(Set.of(solvent("121-44-8").get("hazard_statements").split(" ")).containsAll(Set.of("H301", "H311", "H331", "H318")));
         assertFalse(solvent("121-44-8").get("hazard_statements").contains("H302"));
         assertEquals(Set.of("H226", "H301", "H311", "H314", "H318", "H330"), Set.of(solvent("111-92-2").get("hazard_statements").split(" ")));
+        // Same source: formic acid 607-001-00-0 Met. Corr. 1 H290 and Eye Dam. 1 H318 beside Acute Tox. 3 H331 and
+        // Skin Corr. 1A H314; 1,2,4-trichlorobenzene 602-087-00-6 Aquatic Acute 1 H400; benzotrifluoride 602-056-00-7
+        // Aquatic Chronic 2 H411 (recalled as a self-classification with H225 only).
+        assertTrue(Set.of(solvent("64-18-6").get("hazard_statements").split(" ")).containsAll(Set.of("H290", "H318", "H331", "H314")));
+        assertTrue(solvent("120-82-1").get("hazard_statements").contains("H400"));
+        assertEquals("H225 H411", solvent("98-08-8").get("hazard_statements"));
     }
 
     @Test
