@@ -231,7 +231,8 @@ public final class LikelihoodFitter {
             return "not bounded: no liquid failed to dissolve the material, so nothing closes the sphere from outside";
         }
         List<String> open = new ArrayList<>();
-        if (lo[0] <= LocalSearch.LOWER[0] + 0.5 || hi[0] >= LocalSearch.UPPER[0] - 0.5) {
+        // within 1 MPa^½ of an edge counts as reaching it: a finite chain comes close to an open edge without touching it
+        if (lo[0] <= LocalSearch.LOWER[0] + 1 || hi[0] >= LocalSearch.UPPER[0] - 1) {
             open.add("δD");
         }
         if (hi[1] >= LocalSearch.UPPER[1] - 1) {
