@@ -48,11 +48,21 @@ class WorkflowTest {
         String report = robot.lookup("#fit-report").queryAs(TextArea.class).getText();
         assertTrue(report.startsWith("Fitted sphere: δD"), report);
         assertTrue(report.contains("Good liquids inside:"), report);
+        // the likelihood fit's own findings, as the command line prints them: its region with whether the data bound
+        // it, the likely misfits (or none) and the model note
+        assertTrue(report.contains("95 % likelihood region: centres up to Ra"), report);
+        assertTrue(report.contains("Likely misfits"), report);
+        assertTrue(report.contains("Note: model: P(dissolves)"), report);
+        assertFalse(report.contains("resamples)"), "the likelihood fit has no bootstrap: " + report);
         // the findings as rows: misfits and next tests; a next test goes into the test table with one click
         @SuppressWarnings("unchecked")
         javafx.scene.control.TableView<Object> findings = robot.lookup("#fit-findings").queryAs(javafx.scene.control.TableView.class);
         var fit = fx.workbench.targetView();
         assertFalse(findings.getItems().isEmpty(), "the fit lists its misfits and next tests");
+        // the likelihood fit gives each result on its unexpected side its probability (demo series: chloroform did not
+        // dissolve although inside, 1,4-dioxane did although outside)
+        assertTrue(findings.getItems().stream().map(Object::toString).anyMatch(x -> x.contains("probability of this result")),
+                findings.getItems().toString());
         int next = -1;
         for (int i = 0; i < findings.getItems().size(); i++) {
             if (findings.getItems().get(i).toString().contains("next test")) {

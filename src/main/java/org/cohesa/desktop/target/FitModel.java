@@ -18,6 +18,7 @@ import org.cohesa.core.target.MaterialKind;
 import org.cohesa.core.target.Misfit;
 import org.cohesa.core.target.NamedPoint;
 import org.cohesa.core.target.NextTest;
+import org.cohesa.core.target.ResultProbability;
 import org.cohesa.core.target.SphereFitter;
 import org.cohesa.core.target.TestResult;
 import org.cohesa.desktop.common.Numbers;
@@ -95,7 +96,7 @@ public final class FitModel {
         session.jobs().run("Fitting the sphere", p -> {
             List<TestResult> results = TestSeriesCsv.read("test results", new StringReader(text), library);
             List<NamedPoint> candidates = library.searchable().stream().map(s -> new NamedPoint(s.name(), s.hansen())).toList();
-            p.update(0.2, "Fitting " + results.size() + " test results (with bootstrap confidence)…");
+            p.update(0.2, "Fitting " + results.size() + " test results (likelihood fit and its 95 % region)…");
             return new Outcome(SphereFitter.fit(results, candidates, FitOptions.defaults(FitOptions.DEFAULT_SEED)), results);
         }, outcome -> {
             FitResult r = outcome.fit();
@@ -171,7 +172,27 @@ public final class FitModel {
         var q = r.quality();
         b.append(String.format(Locale.ROOT, "Good liquids inside: %d of %d · bad liquids outside: %d of %d%n", q.goodInside(), q.goodTotal(),
                 q.badOutside(), q.badTotal()));
-        if (q.misfits().isEmpty()) {
+        var region = r.region();
+        if (region != null) {
+            // the likelihood fit: its region, the results least likely under it, and the notes (as the command line prints them)
+            b.append(String.format(Locale.ROOT, "%.0f %% likelihood region: centres up to Ra %.1f MPa½ from the fitted one, R0 %s; %s%n",
+                    region.level() * 100, region.centreRadius(), range(region.r0()), region.boundedNote()));
+            var misfits = r.likelyMisfits();
+            if (misfits.isEmpty()) {
+                b.append("Likely misfits: none (no result has a probability below 0.10 under the fit).\n");
+            } else {
+                b.append("Likely misfits (check these results first):\n");
+                for (ResultProbability m : misfits) {
+                    b.append("  ").append(m.name()).append(": score ").append(Numbers.two(m.score())).append(", RED ").append(Numbers.two(m.red()))
+                            .append(", probability of this result ").append(String.format(Locale.ROOT, "%.3f", m.probability())).append('\n');
+                }
+            }
+            var near = r.probabilities().stream().filter(x -> x.nearSurface() && x.probability() < 0.5).toList();
+            if (!near.isEmpty()) {
+                b.append("Near the surface on the unexpected side (cannot be told from noise): ")
+                        .append(String.join(", ", near.stream().map(ResultProbability::name).toList())).append('\n');
+            }
+        } else if (q.misfits().isEmpty()) {
             b.append("No misfits: every result is on its expected side.\n");
         } else {
             b.append("Misfits (on the wrong side of the surface):\n");
@@ -182,11 +203,19 @@ public final class FitModel {
         }
         var conf = r.confidence();
         if (conf != null) {
-            b.append(String.format(Locale.ROOT, "%.0f %% confidence (%d resamples): δD %s, δP %s, δH %s, R0 %s%n", conf.level() * 100,
-                    conf.resamples(), range(conf.dD()), range(conf.dP()), range(conf.dH()), range(conf.r0())));
+            if (region == null) {
+                b.append(String.format(Locale.ROOT, "%.0f %% confidence (%d resamples): δD %s, δP %s, δH %s, R0 %s%n", conf.level() * 100,
+                        conf.resamples(), range(conf.dD()), range(conf.dP()), range(conf.dH()), range(conf.r0())));
+            } else {
+                b.append(String.format(Locale.ROOT, "Region extent: δD %s, δP %s, δH %s, R0 %s%n", range(conf.dD()), range(conf.dP()),
+                        range(conf.dH()), range(conf.r0())));
+            }
             for (String w : conf.warnings()) {
                 b.append("Warning: ").append(w).append('\n');
             }
+        }
+        for (String n : r.notes()) {
+            b.append("Note: ").append(n).append('\n');
         }
         if (!r.nextTests().isEmpty()) {
             b.append("Next tests that would tighten the fit most:\n");

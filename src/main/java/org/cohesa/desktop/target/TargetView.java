@@ -228,15 +228,29 @@ public final class TargetView {
                 Columns.number("Score", Finding::score, 60, 2),
                 Columns.number("RED", Finding::red, 60, 2),
                 Columns.text("Why", Finding::note, 320)));
-        t.setPlaceholder(new Label("After a fit: misfits and the next tests to run, one row each."));
+        t.setPlaceholder(new Label("After a fit: results on their unexpected side and the next tests to run, one row each."));
         t.setPrefHeight(200);
         TableTools.equip(t, () -> { });
         fitModel.resultProperty().addListener((o, a, r) -> {
             java.util.List<Finding> rows = new java.util.ArrayList<>();
             if (r != null) {
-                for (var m : r.quality().misfits()) {
-                    rows.add(new Finding("misfit", m.name(), m.score(), m.red(), m.score() >= org.cohesa.core.target.TestResult.GOOD_THRESHOLD
-                            ? "dissolved, but outside the sphere: retest, or check its parameters" : "did not dissolve, but inside the sphere: retest, or check its parameters"));
+                if (r.region() != null) {
+                    // the likelihood fit: every result on its unexpected side, least likely first, with its probability
+                    for (var p : r.probabilities()) {
+                        if (p.probability() >= 0.5) {
+                            continue;
+                        }
+                        String why = p.nearSurface() ? "near the surface: cannot be told from noise, either way"
+                                : p.score() >= org.cohesa.core.target.TestResult.GOOD_THRESHOLD ? "dissolved, but outside the sphere: retest, or check its parameters"
+                                : "did not dissolve, but inside the sphere: retest, or check its parameters";
+                        rows.add(new Finding(p.likelyMisfit() ? "likely misfit" : "wrong side", p.name(), p.score(), p.red(),
+                                String.format(java.util.Locale.ROOT, "probability of this result %.2f; %s", p.probability(), why)));
+                    }
+                } else {
+                    for (var m : r.quality().misfits()) {
+                        rows.add(new Finding("misfit", m.name(), m.score(), m.red(), m.score() >= org.cohesa.core.target.TestResult.GOOD_THRESHOLD
+                                ? "dissolved, but outside the sphere: retest, or check its parameters" : "did not dissolve, but inside the sphere: retest, or check its parameters"));
+                    }
                 }
                 for (var n : r.nextTests()) {
                     rows.add(new Finding("next test", n.name(), null, n.red(), n.reason()));
