@@ -23,8 +23,14 @@ import org.cohesa.core.structure.UnifacGrouper;
  */
 public final class StructureEntries {
 
-    /** Source key of values estimated from a structure (the "estimate-" prefix marks an estimate everywhere). */
-    public static final String HSP_SOURCE = "estimate-structure-mathieu-2018";
+    /**
+     * Source key of Hansen values a user's solvent gets from its structure by the default group route (Mathieu 2018
+     * and Stefanis–Panayiotou, per component; the note names each component's route). The "estimate-" prefix marks an
+     * estimate everywhere.
+     */
+    public static final String HSP_SOURCE = "estimate-structure-groups";
+    /** The key the same entries carried while the group route was Mathieu 2018 alone (still in older databases). */
+    public static final String HSP_SOURCE_MATHIEU = "estimate-structure-mathieu-2018";
     public static final String UNIFAC_SOURCE = "estimate-unifac-smarts";
 
     /**
@@ -54,14 +60,20 @@ public final class StructureEntries {
     }
 
     private static final String ESTIMATED_FROM = "estimated from the structure ";
-    private static final String ESTIMATED_BY = " (Mathieu 2018 group contribution)";
+    private static final String ESTIMATED_BY = " (group contribution: Mathieu 2018 and Stefanis–Panayiotou)";
+    /** The suffix of centres estimated while the group route was Mathieu 2018 alone (still in older databases). */
+    private static final String ESTIMATED_BY_MATHIEU = " (Mathieu 2018 group contribution)";
 
     /** The SMILES of a material whose centre {@link #materialCentre} estimated (its source says so), or null for any other source. */
     public static String estimatedFrom(String source) {
-        if (source == null || !source.startsWith(ESTIMATED_FROM) || !source.endsWith(ESTIMATED_BY)) {
+        if (source == null || !source.startsWith(ESTIMATED_FROM)) {
             return null;
         }
-        String smiles = source.substring(ESTIMATED_FROM.length(), source.length() - ESTIMATED_BY.length()).strip();
+        String suffix = source.endsWith(ESTIMATED_BY) ? ESTIMATED_BY : source.endsWith(ESTIMATED_BY_MATHIEU) ? ESTIMATED_BY_MATHIEU : null;
+        if (suffix == null) {
+            return null;
+        }
+        String smiles = source.substring(ESTIMATED_FROM.length(), source.length() - suffix.length()).strip();
         return smiles.isEmpty() || smiles.contains(" ") ? null : smiles;
     }
 

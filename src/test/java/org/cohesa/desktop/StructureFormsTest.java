@@ -90,8 +90,10 @@ class StructureFormsTest {
         assertTrue(ed.field("dD").getStyleClass().contains("field-estimated"), "an estimated field is marked");
         assertFalse(ed.field("boiling_point_c").getStyleClass().contains("field-estimated"), "a typed value is not");
         String shown = text(ed, "#structure-values");
-        assertTrue(shown.contains("group contribution (Mathieu 2018)"), "the route is named: " + shown);
-        assertTrue(shown.contains("± 0.7") && shown.contains("± 2.2") && shown.contains("± 1.5"), "the expected errors are shown: " + shown);
+        assertTrue(shown.contains("mean of Mathieu 2018 and Stefanis–Panayiotou"), "the route is named: " + shown);
+        assertTrue(shown.contains(String.format(java.util.Locale.ROOT, "± %.1f", e.dD().expectedMae()))
+                && shown.contains(String.format(java.util.Locale.ROOT, "± %.1f", e.dP().expectedMae()))
+                && shown.contains(String.format(java.util.Locale.ROOT, "± %.1f", e.dH().expectedMae())), "the expected errors are shown: " + shown);
         assertTrue(text(ed, "#structure-groups").contains("CH3"), text(ed, "#structure-groups"));
 
         shoot(robot, ed.dialog().getDialogPane(), "structure-solvent-form");

@@ -276,7 +276,9 @@ class VapourPressureAtBoilingPointTest {
                 continue;
             }
             var e = org.cohesa.core.structure.StructureEstimator.estimate(
-                    org.cohesa.core.structure.StructureParser.parse("smiles", s.smiles()), org.cohesa.core.structure.MeasuredProperties.NONE);
+                    org.cohesa.core.structure.StructureParser.parse("smiles", s.smiles()), org.cohesa.core.structure.MeasuredProperties.NONE,
+                    // the route of the bundled estimated sets this chain stands for (estimate-structure-mathieu-2018)
+                    org.cohesa.core.structure.StructureEstimator.GroupRoute.MATHIEU);
             if (!e.hasHansen()) {
                 continue;
             }

@@ -76,7 +76,7 @@ public final class FitCommand extends CohesaSubcommand {
     String prior;
 
     @Option(names = "--prior-smiles", paramLabel = "SMILES", description = "Likelihood fit only: pull the centre towards the centre estimated "
-            + "from the material's own structure (a drug substance, an additive; Mathieu 2018 group contribution), each component by its "
+            + "from the material's own structure (a drug substance, an additive; group contribution: mean of Mathieu 2018 and Stefanis–Panayiotou where both cover it), each component by its "
             + "measured error (the output says so).")
     String priorSmiles;
 

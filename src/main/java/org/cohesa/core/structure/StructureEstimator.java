@@ -10,19 +10,36 @@ import org.cohesa.core.activity.LleGroups;
  * From a structure (and whatever liquid properties are measured) to Hansen parameters, molar volume and UNIFAC
  * groups, each with its route and expected error. Route per component:
  * <ul>
- *   <li>δD: refractive index and molar volume ({@link PropertyRoute}) when both are known, else the Mathieu
- *       group method;</li>
- *   <li>δP: dipole moment and molar volume (Hansen–Beerbower) when known, else the group method;</li>
- *   <li>δH: the group method (on the validation set it beat the remainder √(δt² − δD² − δP²), MAE 1.52 vs
- *       1.94 MPa^½, because the remainder collects the errors of the other three); with ΔHvap, n_D and μ given the
- *       remainder is offered beside it for comparison ({@link #hydrogenBondingRemainder});</li>
+ *   <li>δD: refractive index and molar volume ({@link PropertyRoute}) when both are known, else the group
+ *       route;</li>
+ *   <li>δP: dipole moment and molar volume (Hansen–Beerbower) when known, else the group route;</li>
+ *   <li>δH: the group route (on the validation set the Mathieu groups beat the remainder √(δt² − δD² − δP²), MAE
+ *       1.52 vs 1.94 MPa^½, because the remainder collects the errors of the other three); with ΔHvap, n_D and μ
+ *       given the remainder is offered beside it for comparison ({@link #hydrogenBondingRemainder});</li>
  *   <li>molar volume: M/ρ from a given density, else the group method's increments (marked estimated).</li>
  * </ul>
  * The property route needs the molar volume; with no density it uses the group volume.
+ *
+ * <p>The group route ({@link GroupRoute#COMBINED}, the default) is, per component, the mean of the two published
+ * group methods where both cover the structure — Mathieu 2018 ({@link MathieuMethod}) and Stefanis–Panayiotou
+ * ({@link StefanisPanayiotouMethod}) — and the one that covers it otherwise. The mean of independent estimators is
+ * the usual way to combine them; it was chosen on half of the validation table (CAS check digit even) and confirmed on
+ * the other half, where it beat either method alone in every component (docs/methods.md). {@link GroupRoute#MATHIEU}
+ * keeps the Mathieu groups alone (the bundled table's estimated sets, source key estimate-structure-mathieu-2018).
  */
 public final class StructureEstimator {
 
     static final String GROUP = "group contribution (Mathieu 2018)";
+    static final String GROUP_SP = "group contribution (Stefanis–Panayiotou 2008/2012)";
+    static final String GROUP_MEAN = "group contribution (mean of Mathieu 2018 and Stefanis–Panayiotou 2008/2012)";
+
+    /** Which group methods the group route uses. */
+    public enum GroupRoute {
+        /** Mean of Mathieu 2018 and Stefanis–Panayiotou where both cover a component, else the one that does. */
+        COMBINED,
+        /** Mathieu 2018 alone. */
+        MATHIEU
+    }
     static final String REFRACTIVE = "refractive index via molar refraction (Lorentz–Lorenz, Mathieu 2018 relation)";
     static final String DIPOLE = "dipole moment (Hansen–Beerbower)";
     static final String REMAINDER = "remainder √(δt² − δD² − δP²), δt from the enthalpy of vaporisation";
@@ -36,7 +53,12 @@ public final class StructureEstimator {
      * worse than average on the published table (the families the estimate warns about), else null.
      */
     public static double[] muchWorseFamilyError(String family) {
-        double[] e = EstimateErrors.MUCH_WORSE.get(family);
+        return muchWorseFamilyError(family, GroupRoute.COMBINED);
+    }
+
+    /** As {@link #muchWorseFamilyError(String)} for the given group route. */
+    public static double[] muchWorseFamilyError(String family, GroupRoute route) {
+        double[] e = (route == GroupRoute.MATHIEU ? EstimateErrors.MUCH_WORSE_MATHIEU : EstimateErrors.MUCH_WORSE).get(family);
         return e == null ? null : e.clone();
     }
 
@@ -71,9 +93,36 @@ public final class StructureEstimator {
         return Double.isFinite(t) ? new EstimatedValue(t, VAPORISATION, EstimateErrors.PROPERTY_DT[0], EstimateErrors.PROPERTY_DT[1], true) : null;
     }
 
+    /** The estimate by the default group route ({@link GroupRoute#COMBINED}). */
     public static StructureEstimate estimate(Structure structure, MeasuredProperties measured) {
+        return estimate(structure, measured, GroupRoute.COMBINED);
+    }
+
+    /**
+     * One group component: the mean where both methods give it (COMBINED), else the one that does, each with the
+     * error that case showed on the published table; null when neither does.
+     */
+    private static EstimatedValue groupComponent(Double mathieu, Double sp, int k, GroupRoute route) {
+        if (route == GroupRoute.MATHIEU || sp == null) {
+            if (mathieu == null) {
+                return null;
+            }
+            double[] e = route == GroupRoute.MATHIEU ? EstimateErrors.GROUP[k] : EstimateErrors.MATHIEU_ALONE[k];
+            return new EstimatedValue(mathieu, GROUP, e[0], e[1], true);
+        }
+        if (mathieu == null) {
+            return new EstimatedValue(sp, GROUP_SP, EstimateErrors.SP_ALONE[k][0], EstimateErrors.SP_ALONE[k][1], true);
+        }
+        return new EstimatedValue((mathieu + sp) / 2, GROUP_MEAN, EstimateErrors.MEAN[k][0], EstimateErrors.MEAN[k][1], true);
+    }
+
+    public static StructureEstimate estimate(Structure structure, MeasuredProperties measured, GroupRoute route) {
         MeasuredProperties m = measured == null ? MeasuredProperties.NONE : measured;
         MathieuEstimate group = MathieuMethod.estimate(structure);
+        StefanisPanayiotouEstimate sp = route == GroupRoute.MATHIEU ? null : StefanisPanayiotouMethod.estimate(structure);
+        EstimatedValue groupD = groupComponent(group.dD(), sp == null ? null : sp.dD(), 0, route);
+        EstimatedValue groupP = groupComponent(group.dP(), sp == null ? null : sp.dP(), 1, route);
+        EstimatedValue groupH = groupComponent(group.dH(), sp == null ? null : sp.dH(), 2, route);
         String family = StructureFamily.of(structure);
         List<String> warnings = new ArrayList<>();
 
@@ -90,20 +139,19 @@ public final class StructureEstimator {
         if (m.refractiveIndex() != null && volume != null) {
             dD = new EstimatedValue(PropertyRoute.dispersionFromRefractiveIndex(m.refractiveIndex(), volume.value()), REFRACTIVE,
                     EstimateErrors.PROPERTY_DD[0], EstimateErrors.PROPERTY_DD[1], true);
-        } else if (group.dD() != null) {
-            dD = new EstimatedValue(group.dD(), GROUP, EstimateErrors.GROUP_DD[0], EstimateErrors.GROUP_DD[1], true);
+        } else {
+            dD = groupD;
         }
         EstimatedValue dP = null;
         if (m.dipoleDebye() != null && volume != null) {
             dP = new EstimatedValue(PropertyRoute.polarFromDipole(m.dipoleDebye(), volume.value()), DIPOLE,
                     EstimateErrors.PROPERTY_DP[0], EstimateErrors.PROPERTY_DP[1], true);
-        } else if (group.dP() != null) {
-            dP = new EstimatedValue(group.dP(), GROUP, EstimateErrors.GROUP_DP[0], EstimateErrors.GROUP_DP[1], true);
+        } else {
+            dP = groupP;
         }
-        EstimatedValue dH = group.dH() == null ? null
-                : new EstimatedValue(group.dH(), GROUP, EstimateErrors.GROUP_DH[0], EstimateErrors.GROUP_DH[1], true);
+        EstimatedValue dH = groupH;
 
-        if (!group.uncovered().isEmpty()) {
+        if (route == GroupRoute.MATHIEU && !group.uncovered().isEmpty()) {
             // say whether the measured properties filled what the group method could not
             List<String> open = new ArrayList<>();
             List<String> filled = new ArrayList<>();
@@ -113,8 +161,31 @@ public final class StructureEstimator {
             warnings.add("the group method has no published increment for " + String.join(", ", group.uncovered())
                     + (open.isEmpty() && !filled.isEmpty() ? "; " + String.join(" and ", filled) + " come" + (filled.size() == 1 ? "s" : "")
                             + " from the measured properties instead" : "; components that need it are not estimated"));
+        } else if (route == GroupRoute.COMBINED && !group.uncovered().isEmpty()) {
+            List<String> bySp = new ArrayList<>();
+            List<String> byMeasured = new ArrayList<>();
+            List<String> open = new ArrayList<>();
+            String[] names = {"δD", "δP", "δH"};
+            Double[] mathieu = {group.dD(), group.dP(), group.dH()};
+            EstimatedValue[] chosen = {dD, dP, dH};
+            for (int k = 0; k < 3; k++) {
+                if (mathieu[k] != null) {
+                    continue;
+                }
+                (chosen[k] == null ? open : GROUP_SP.equals(chosen[k].route()) ? bySp : byMeasured).add(names[k]);
+            }
+            warnings.add("Mathieu 2018 has no published increment for " + String.join(", ", group.uncovered())
+                    + (bySp.isEmpty() ? "" : "; " + String.join(" and ", bySp) + (bySp.size() == 1 ? " comes" : " come")
+                            + " from the Stefanis–Panayiotou groups alone")
+                    + (byMeasured.isEmpty() ? "" : "; " + String.join(" and ", byMeasured) + (byMeasured.size() == 1 ? " comes" : " come")
+                            + " from the measured properties instead")
+                    + (open.isEmpty() ? "" : "; " + String.join(" and ", open) + " not estimated (no group method covers it)"));
         }
-        double[] worse = EstimateErrors.MUCH_WORSE.get(family);
+        if (sp != null && !sp.complete()) {
+            warnings.add((sp.dD() != null || sp.dP() != null || sp.dH() != null ? "the Stefanis–Panayiotou tables leave out a component"
+                    : "Stefanis–Panayiotou groups not used") + ": " + String.join("; ", sp.uncovered()));
+        }
+        double[] worse = (route == GroupRoute.MATHIEU ? EstimateErrors.MUCH_WORSE_MATHIEU : EstimateErrors.MUCH_WORSE).get(family);
         if (worse != null) {
             warnings.add(String.format(Locale.ROOT, "%s structures are estimated much less well than average by the group method "
                     + "(mean error δD %.1f, δP %.1f, δH %.1f MPa½ on the published table): measure, or treat the values as rough",

@@ -28,7 +28,7 @@ public record CentrePrior(HansenParameters centre, double sdD, double sdP, doubl
     public enum Kind {
         /** The published sphere of a related material: one spread in the Ra metric. */
         RELATED_MATERIAL,
-        /** The centre estimated from the material's own structure (Mathieu 2018 group contribution): spreads from the route's measured error. */
+        /** The centre estimated from the material's own structure (the estimator's group route): spreads from the route's measured error. */
         STRUCTURE
     }
 

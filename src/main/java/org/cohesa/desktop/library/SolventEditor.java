@@ -306,7 +306,7 @@ public final class SolventEditor {
         row.putAll(structureColumns);
         boolean hspEdited = List.of("dD", "dP", "dH").stream()
                 .anyMatch(c -> filledByEstimate.containsKey(c) && !filledByEstimate.get(c).equals(row.get(c).strip()));
-        if (hspEdited && StructureEntries.HSP_SOURCE.equals(row.get("src_hsp"))) {
+        if (hspEdited && (StructureEntries.HSP_SOURCE.equals(row.get("src_hsp")) || StructureEntries.HSP_SOURCE_MATHIEU.equals(row.get("src_hsp")))) {
             row.put("src_hsp", "user");
         }
         if (structureNote != null) {

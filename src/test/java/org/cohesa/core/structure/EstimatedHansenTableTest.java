@@ -59,7 +59,7 @@ class EstimatedHansenTableTest {
             }
             estimated++;
             StructureEstimate e = StructureEstimator.estimate(StructureParser.parse("smiles", r.get("smiles")),
-                    MeasuredProperties.NONE);
+                    MeasuredProperties.NONE, StructureEstimator.GroupRoute.MATHIEU);
             if (!e.hasHansen()) {
                 bad.add(r.get("name") + ": the estimator gives no full set today");
                 continue;

@@ -47,17 +47,60 @@ class HansenEstimateTest {
     }
 
     @Test
-    void groupMethodErrorsStandAgainstThePapersOwn() {
-        // Mathieu, ACS Omega 3 (2018) 17049, MAE δD / δP / δH on its external set of 769 Hansen-handbook values,
-        // 0.75 / 2.08 / 1.67 MPa½: second-hand, as tabulated in stanlo229/fluoropolymer_replacement_virtual_screening
-        // hsp/docs/literature_ml_hsp.md (commit 960a8d07), which states it read them from the paper.
-        // Not the same compounds (the paper's per-compound spreadsheet was not reachable). δD and δH must stay at or
-        // below the paper's figures; δP is above it by 0.11 as measured (2.19): the bound 0.12 keeps that shortfall
-        // from growing unnoticed (docs/methods.md, "Against the paper").
+    void stefanisPanayiotouAndTheCombinedRouteErrorsAreTheStatedOnes() {
+        // Same table and join. S–P: Stefanis & Panayiotou, Int. J. Pharm. 426 (2012) 29, Appendix A, as transcribed by a
+        // third party (StefanisPanayiotouTables: not checked against the paper here).
         Assumptions.assumeTrue(validation != null, "reference-data folder not found; skipping the validation");
+        String[] c = {"δD", "δP", "δH"};
+        for (int k = 0; k < 3; k++) {
+            assertStated("S–P " + c[k], EstimateErrors.SP[k]);
+            assertStated("combined " + c[k], EstimateErrors.COMBINED[k]);
+            assertStated("combined on Mathieu's set " + c[k], EstimateErrors.COMBINED_ON_MATHIEU_SET[k]);
+            assertStated("combined mean " + c[k], EstimateErrors.MEAN[k]);
+            assertStated("combined Mathieu alone " + c[k], EstimateErrors.MATHIEU_ALONE[k]);
+        }
+        assertStated("combined S–P alone δP", EstimateErrors.SP_ALONE[1]);
+        // no compound of the table takes δD or δH from S–P alone, so those carry the method's overall figures
+        assertTrue(validation.of("combined S–P alone δD").all.isEmpty() && validation.of("combined S–P alone δH").all.isEmpty(), validation.summary());
+        assertEquals(EstimateErrors.SP[0][0], EstimateErrors.SP_ALONE[0][0]);
+        assertEquals(EstimateErrors.SP[2][0], EstimateErrors.SP_ALONE[2][0]);
+        assertTrue(validation.spCovered >= 100, validation.summary());
+    }
+
+    @Test
+    void theMeanWasChosenOnOneHalfAndHoldsOnTheOther() {
+        // Common practice, no source: combine estimators on a development half, confirm on a held-out half. Halves by the
+        // parity of the CAS check digit. On the compounds both methods cover, the mean must beat each method alone in every
+        // component on the development half (the choice) and on the validation half (the check).
+        Assumptions.assumeTrue(validation != null, "reference-data folder not found; skipping the validation");
+        for (String half : new String[] {"dev", "validation"}) {
+            for (String c : new String[] {"δD", "δP", "δH"}) {
+                double mean = validation.of(half + " mean " + c).mae();
+                assertTrue(mean < validation.of(half + " Mathieu " + c).mae() && mean < validation.of(half + " S–P " + c).mae(),
+                        half + " " + c + "\n" + validation.summary());
+            }
+        }
+    }
+
+    @Test
+    void groupRouteErrorsStandAgainstThePapersOwn() {
+        // Mathieu, ACS Omega 3 (2018) 17049, MAE δD / δP / δH on its external set of 769 Hansen-handbook values,
+        // 0.75 / 2.08 / 1.67 MPa½, and leave-one-out on 174 experimental values 0.68 / 2.00 / 1.55: second-hand, as
+        // tabulated in stanlo229/fluoropolymer_replacement_virtual_screening hsp/docs/literature_ml_hsp.md (commit
+        // 960a8d07), which states it read them from the paper. Not the same compounds.
+        Assumptions.assumeTrue(validation != null, "reference-data folder not found; skipping the validation");
+        // The Mathieu groups alone: δD and δH at or below the paper's external figures, δP above by 0.11 (2.19): the
+        // bound 0.12 keeps that shortfall from growing unnoticed.
         assertTrue(validation.of("group δD").mae() <= 0.75, validation.summary());
         assertTrue(validation.of("group δH").mae() <= 1.67, validation.summary());
         assertTrue(validation.of("group δP").mae() - 2.08 <= 0.12, validation.summary());
+        // The default combined route on the same 407 compounds: at or below both of the paper's figure sets in every component.
+        double[] loo = {0.68, 2.00, 1.55};
+        String[] c = {"δD", "δP", "δH"};
+        for (int k = 0; k < 3; k++) {
+            assertTrue(validation.of("combined on Mathieu's set " + c[k]).mae() <= loo[k], c[k] + "\n" + validation.summary());
+            assertTrue(validation.of("combined on Mathieu's set " + c[k]).mae() < validation.of("group " + c[k]).mae(), validation.summary());
+        }
     }
 
     @Test
@@ -74,10 +117,19 @@ class HansenEstimateTest {
 
     @Test
     void theFamiliesThatGetAWarningAreTheMuchWorseOnes() {
-        // Rule: a family (at least 5 compounds) whose group-method MAE exceeds 1.5 times the overall MAE in any
+        // Rule: a family (at least 5 compounds) whose group-route MAE exceeds 1.5 times the overall MAE in any
         // component is much worse; exactly those carry a warning, with their measured figures.
+        assertMuchWorse(new String[] {"combined δD", "combined δP", "combined δH"}, EstimateErrors.MUCH_WORSE);
+    }
+
+    @Test
+    void theFamiliesThatGetAWarningOnTheMathieuRouteAreItsMuchWorseOnes() {
+        // the same rule for the Mathieu groups alone (the route of the bundled table's estimated sets)
+        assertMuchWorse(new String[] {"group δD", "group δP", "group δH"}, EstimateErrors.MUCH_WORSE_MATHIEU);
+    }
+
+    private static void assertMuchWorse(String[] keys, Map<String, double[]> stated) {
         Assumptions.assumeTrue(validation != null, "reference-data folder not found; skipping the validation");
-        String[] keys = {"group δD", "group δP", "group δH"};
         Map<String, double[]> worse = new TreeMap<>();
         for (String family : validation.of("group δD").byFamily.keySet()) {
             double[] mae = new double[3];
@@ -92,10 +144,11 @@ class HansenEstimateTest {
                 worse.put(family, mae);
             }
         }
-        assertEquals(worse.keySet(), new java.util.TreeSet<>(EstimateErrors.MUCH_WORSE.keySet()));
+        worse.forEach((f, mae) -> System.out.printf(java.util.Locale.ROOT, "much worse (%s): %s %.2f %.2f %.2f%n", keys[0], f, mae[0], mae[1], mae[2]));
+        assertEquals(worse.keySet(), new java.util.TreeSet<>(stated.keySet()));
         worse.forEach((f, mae) -> {
             for (int c = 0; c < 3; c++) {
-                assertEquals(mae[c], EstimateErrors.MUCH_WORSE.get(f)[c], 0.0051, f + " " + keys[c]);
+                assertEquals(mae[c], stated.get(f)[c], 0.0051, f + " " + keys[c]);
             }
         });
     }
@@ -105,12 +158,14 @@ class HansenEstimateTest {
         // Ethanol: published (15.8, 8.8, 19.4) MPa½ (Alshehri 2022 table); n_D 1.3611, ρ 0.7893 g/cm³ (CRC 2014),
         // μ 1.69 D (Poling 2000). Each component must fall within its route's P90.
         Structure st = StructureParser.parse("smiles", "CCO");
+        // Two carbons: outside the Stefanis–Panayiotou range (three or more), so the Mathieu groups alone.
         StructureEstimate group = StructureEstimator.estimate(st, MeasuredProperties.NONE);
-        assertTrue(Math.abs(group.dD().value() - 15.8) <= EstimateErrors.GROUP_DD[1]);
-        assertTrue(Math.abs(group.dP().value() - 8.8) <= EstimateErrors.GROUP_DP[1]);
-        assertTrue(Math.abs(group.dH().value() - 19.4) <= EstimateErrors.GROUP_DH[1]);
+        assertTrue(Math.abs(group.dD().value() - 15.8) <= group.dD().expectedP90());
+        assertTrue(Math.abs(group.dP().value() - 8.8) <= group.dP().expectedP90());
+        assertTrue(Math.abs(group.dH().value() - 19.4) <= group.dH().expectedP90());
         assertTrue(group.molarVolume().estimated());
         assertEquals(StructureEstimator.GROUP, group.dD().route());
+        assertEquals(EstimateErrors.MATHIEU_ALONE[0][0], group.dD().expectedMae());
 
         StructureEstimate prop = StructureEstimator.estimate(st, new MeasuredProperties(0.7893, 1.3611, 1.69, null));
         assertEquals(StructureEstimator.REFRACTIVE, prop.dD().route());
@@ -135,14 +190,26 @@ class HansenEstimateTest {
 
     @Test
     void warnsForAMuchWorseFamilyAndForWhatTheTablesDoNotCover() {
-        StructureEstimate acid = StructureEstimator.estimate(StructureParser.parse("smiles", "CC(=O)O"), MeasuredProperties.NONE);
-        assertEquals("acid", acid.family());
+        StructureEstimate amide = StructureEstimator.estimate(StructureParser.parse("smiles", "CN(C)C(C)=O"), MeasuredProperties.NONE);
+        assertEquals("amide", amide.family());
+        assertTrue(amide.warnings().stream().anyMatch(w -> w.startsWith("amide structures are estimated much less well")), amide.warnings().toString());
+        // On the Mathieu route alone acids are a much-worse family (they are not on the combined route).
+        StructureEstimate acid = StructureEstimator.estimate(StructureParser.parse("smiles", "CC(=O)O"), MeasuredProperties.NONE,
+                StructureEstimator.GroupRoute.MATHIEU);
         assertTrue(acid.warnings().stream().anyMatch(w -> w.startsWith("acid structures are estimated much less well")), acid.warnings().toString());
-        // Pyridine's aromatic C–N bond has no published polar increment: no δP, said so, δD and δH still given.
+        // Pyridine's aromatic C–N bond has no Mathieu polar increment: on the Mathieu route no δP, said so, δD and δH given;
+        // on the default route the Stefanis–Panayiotou groups (Kekulé form, pyridine second-order group) give δP alone.
+        StructureEstimate mathieu = StructureEstimator.estimate(StructureParser.parse("smiles", "c1ccncc1"), MeasuredProperties.NONE,
+                StructureEstimator.GroupRoute.MATHIEU);
+        assertNotNull(mathieu.dD());
+        assertTrue(mathieu.dP() == null && !mathieu.hasHansen());
+        assertTrue(mathieu.warnings().stream().anyMatch(w -> w.contains("C~N")), mathieu.warnings().toString());
         StructureEstimate pyridine = StructureEstimator.estimate(StructureParser.parse("smiles", "c1ccncc1"), MeasuredProperties.NONE);
-        assertNotNull(pyridine.dD());
-        assertTrue(pyridine.dP() == null && !pyridine.hasHansen());
-        assertTrue(pyridine.warnings().stream().anyMatch(w -> w.contains("C~N")), pyridine.warnings().toString());
+        assertTrue(pyridine.hasHansen());
+        assertEquals(StructureEstimator.GROUP_SP, pyridine.dP().route());
+        assertEquals(StructureEstimator.GROUP_MEAN, pyridine.dD().route());
+        assertTrue(pyridine.warnings().stream().anyMatch(w -> w.contains("C~N") && w.contains("δP comes from the Stefanis–Panayiotou groups alone")),
+                pyridine.warnings().toString());
         // its UNIFAC groups are still found (C5H5N)
         assertEquals(Map.of(37, 1), pyridine.unifac().groups());
     }
