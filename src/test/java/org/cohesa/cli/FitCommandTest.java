@@ -123,7 +123,7 @@ class FitCommandTest {
 
     @Test
     void priorFromTheStructureIsNamedInTheOutput() throws Exception {
-        // aspirin, PubChem CID 2244 (SMILES from memory); the estimate and its errors come from the Mathieu 2018 group method
+        // aspirin, PubChem CID 2244 (SMILES from memory); the estimate and its errors come from the default group route (mean of Mathieu 2018 and Stefanis–Panayiotou)
         Run r = run("fit", demo().toString(), "--json", "--prior-smiles", "CC(=O)Oc1ccccc1C(=O)O");
         assertEquals(0, r.code(), r.err());
         JsonNode p = new ObjectMapper().readTree(r.out()).get("prior");
