@@ -32,6 +32,13 @@ class StructureCommandsTest {
             assertTrue(Math.abs(j.get(c).get("value").asDouble() - published) <= j.get(c).get("expectedP90").asDouble(), j.toString());
         }
         assertEquals(1, j.get("unifac").get("groups").get("21").asInt());
+        // each group method's own values are shown beside the mean, with the Stefanis–Panayiotou groups found
+        // (ethyl acetate: CH3COO + CH2 + CH3, from the group names of Stefanis & Panayiotou's Table A.1)
+        JsonNode methods = j.get("groupMethods");
+        assertEquals("Mathieu 2018", methods.get(0).get("method").asText());
+        assertEquals(1, methods.get(1).get("firstOrder").get("CH3COO").asInt());
+        assertEquals((methods.get(0).get("dP").asDouble() + methods.get(1).get("dP").asDouble()) / 2, j.get("dP").get("value").asDouble(), 1e-9);
+        assertTrue(CliTestSupport.run(db(), "estimate", "CCOC(C)=O").out().contains("group method Stefanis–Panayiotou 2008/2012: δD"));
         assertTrue(j.get("molarVolume").get("estimated").asBoolean());
         CliTestSupport.Result table = CliTestSupport.run(db(), "estimate", "CCOC(C)=O", "--density", "0.900", "--dipole", "1.78");
         assertTrue(table.out().contains("dipole moment (Hansen–Beerbower)"), table.out());

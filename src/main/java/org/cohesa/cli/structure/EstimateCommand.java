@@ -66,6 +66,11 @@ public final class EstimateCommand extends CohesaSubcommand {
                     + (Math.abs(sum - r.total().value()) > r.total().expectedP90() ? ": more than 90 % of that route's errors apart" : ": within that route's P90")
                     + (r.remainder() != null ? "; the group δH is kept (closer on the published table than the remainder)" : ""));
         }
+        for (org.cohesa.core.structure.GroupMethodValues g : e.groupMethods()) {
+            out().println("group method " + g.method() + ": δD " + one(g.dD()) + ", δP " + one(g.dP()) + ", δH " + one(g.dH())
+                    + (g.firstOrder().isEmpty() ? "" : "  groups " + counts(g.firstOrder())
+                            + (g.secondOrder().isEmpty() ? "" : "; second order " + counts(g.secondOrder()))));
+        }
         out().println("UNIFAC (original): " + (e.unifac().complete() ? StructureEstimates.groupNames(e.unifac().groups()) : "none (atoms "
                 + String.join(", ", e.unifac().unplaced()) + " have no group)"));
         if (!e.lleGroups().isEmpty()) {
@@ -85,7 +90,17 @@ public final class EstimateCommand extends CohesaSubcommand {
                 v.route() + (v.estimated() ? "" : ""));
     }
 
-    private static String format(Map<Integer, Integer> groups) {
+    private static String one(Double v) {
+        return v == null ? "—" : Output.fmt(v, 1);
+    }
+
+    private static String counts(Map<String, Integer> groups) {
+        StringBuilder sb = new StringBuilder();
+        new java.util.TreeMap<>(groups).forEach((g, n) -> sb.append(sb.length() == 0 ? "" : ", ").append(g).append(" ×").append(n));
+        return sb.toString();
+    }
+
+        private static String format(Map<Integer, Integer> groups) {
         StringBuilder sb = new StringBuilder();
         groups.entrySet().stream().sorted(Map.Entry.comparingByKey())
                 .forEach(g -> sb.append(sb.length() == 0 ? "" : " ").append(String.format(Locale.ROOT, "%d:%d", g.getKey(), g.getValue())));

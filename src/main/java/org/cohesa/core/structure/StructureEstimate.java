@@ -16,13 +16,17 @@ import org.cohesa.core.hsp.HansenParameters;
  * @param unifac        original-UNIFAC subgroups found (empty when an atom has no group)
  * @param lleGroups     the same in the liquid–liquid set's numbering, or empty when a subgroup has no counterpart
  * @param warnings      cautions to show beside the values (family much worse than average, parts not covered)
+ * @param groupMethods  what each group method gave before they were combined (Mathieu 2018, then Stefanis–Panayiotou
+ *                      on the default route)
  */
 public record StructureEstimate(StructureFacts structure, String family, EstimatedValue dD, EstimatedValue dP, EstimatedValue dH,
-        EstimatedValue molarVolume, UnifacGrouping unifac, Map<Integer, Integer> lleGroups, List<String> warnings) {
+        EstimatedValue molarVolume, UnifacGrouping unifac, Map<Integer, Integer> lleGroups, List<String> warnings,
+        List<GroupMethodValues> groupMethods) {
 
     public StructureEstimate {
         lleGroups = Map.copyOf(lleGroups);
         warnings = List.copyOf(warnings);
+        groupMethods = List.copyOf(groupMethods);
     }
 
     /** True when all three Hansen components have a value. */

@@ -205,6 +205,8 @@ public final class StructureEstimator {
         if (dD != null || dP != null || dH != null) {
             warnings.add("estimates are screening values: confirm solubility by a laboratory test before relying on them");
         }
-        return new StructureEstimate(structure.facts(), family, dD, dP, dH, volume, unifac, lle, warnings);
+        List<GroupMethodValues> methods = sp == null ? List.of(GroupMethodValues.of(group))
+                : List.of(GroupMethodValues.of(group), GroupMethodValues.of(sp));
+        return new StructureEstimate(structure.facts(), family, dD, dP, dH, volume, unifac, lle, warnings, methods);
     }
 }
