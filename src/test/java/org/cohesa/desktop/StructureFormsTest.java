@@ -95,6 +95,10 @@ class StructureFormsTest {
                 && shown.contains(String.format(java.util.Locale.ROOT, "± %.1f", e.dP().expectedMae()))
                 && shown.contains(String.format(java.util.Locale.ROOT, "± %.1f", e.dH().expectedMae())), "the expected errors are shown: " + shown);
         assertTrue(text(ed, "#structure-groups").contains("CH3"), text(ed, "#structure-groups"));
+        // both group methods' own values are shown beside the combined ones
+        String methods = ((Label) ed.dialog().getDialogPane().lookup("#structure-methods")).getText();
+        assertTrue(methods.contains("Mathieu 2018: δD " + String.format(java.util.Locale.ROOT, "%.1f", e.groupMethods().get(0).dD()))
+                && methods.contains("Stefanis–Panayiotou 2008/2012: δD"), methods);
 
         shoot(robot, ed.dialog().getDialogPane(), "structure-solvent-form");
         robot.interact(() -> ed.field("dP").setText(ed.field("dP").getText()));

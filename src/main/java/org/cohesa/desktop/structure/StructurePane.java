@@ -57,6 +57,8 @@ public final class StructurePane {
     private final Label facts = new Label();
     private final GridPane values = new GridPane();
     private final Label groups = new Label();
+    /** Each group method's own values before they were combined. */
+    private final Label methods = new Label();
     private final VBox cautions = new VBox(3);
     private final Label check = new Label();
     private final VBox root;
@@ -156,12 +158,15 @@ public final class StructurePane {
         values.getColumnConstraints().add(routeColumn);
         groups.setId("structure-groups");
         groups.setWrapText(true);
+        methods.setId("structure-methods");
+        methods.setWrapText(true);
+        methods.getStyleClass().add("hint");
         cautions.setId("structure-cautions");
         check.setId("structure-check");
         check.setWrapText(true);
         check.getStyleClass().add("hint");
         show(check, false);
-        VBox estimate = new VBox(6, facts, values, check, groups, cautions);
+        VBox estimate = new VBox(6, facts, values, methods, check, groups, cautions);
         facts.setWrapText(true);
         // drawing beside the values where there is room (the values take the rest of the width), above them in a
         // narrow side panel (the values take the whole width)
@@ -384,6 +389,10 @@ public final class StructurePane {
         show(check, b.length() > 0);
     }
 
+    private static String one(Double v) {
+        return v == null ? "—" : String.format(Locale.ROOT, "%.1f", v);
+    }
+
     private void show(Result r) {
         stale = false;
         showProblem(null);
@@ -399,6 +408,13 @@ public final class StructurePane {
         row(2, "δP (MPa½)", e.dP());
         row(3, "δH (MPa½)", e.dH());
         row(4, "Vm (cm³/mol)", e.molarVolume());
+        StringBuilder m = new StringBuilder("Group methods before combining —");
+        for (org.cohesa.core.structure.GroupMethodValues g : e.groupMethods()) {
+            m.append(m.charAt(m.length() - 1) == '—' ? " " : " · ").append(g.method()).append(": ")
+                    .append(g.dD() == null && g.dP() == null && g.dH() == null ? "not applicable (" + g.uncovered().get(0) + ")"
+                            : "δD " + one(g.dD()) + ", δP " + one(g.dP()) + ", δH " + one(g.dH()));
+        }
+        methods.setText(m.toString());
         showCheck(r);
         groups.setText("UNIFAC groups: " + (e.unifac().complete() ? StructureEntries.groupNames(e.unifac().groups())
                 : "none (atoms " + String.join(", ", e.unifac().unplaced()) + " have no group; activity falls back to Flory–Huggins)"));
