@@ -1,5 +1,9 @@
 package org.cohesa.core.activity;
 
+import java.util.Arrays;
+import java.util.Map;
+import java.util.NavigableMap;
+import java.util.TreeMap;
 import java.util.Optional;
 
 /**
@@ -22,7 +26,14 @@ public final class CoexistingLiquidsMulti implements ActivityModel {
 
     private static final int MAX_ITERATIONS = 500;
 
+    /** Answers already found for one composition, by temperature: a cache for repeated questions, not a result. */
+    private static final int MAX_ANSWERS = 64;
+    /** How far (K) the layers found at one temperature serve as the start at another. */
+    private static final double WARM_START_KELVIN = 30;
+
     private final ActivityModel inner;
+    private final NavigableMap<Double, Optional<Layers>> answers = new TreeMap<>();
+    private double[] answersFor;
 
     public CoexistingLiquidsMulti(ActivityModel inner) {
         this.inner = inner;
@@ -72,16 +83,53 @@ public final class CoexistingLiquidsMulti implements ActivityModel {
     /** The two layers at {@code kelvin}, or empty when {@code z} is one stable liquid (or the flash finds no split). */
     public Optional<Layers> splitAt(double[] z, double kelvin) {
         double[] zp = positive(z);
+        synchronized (answers) {
+            if (!Arrays.equals(answersFor, zp)) {
+                answers.clear();
+                answersFor = zp;
+            }
+            Optional<Layers> known = answers.get(kelvin);
+            if (known != null) {
+                return known;
+            }
+            Optional<Layers> layers = warmSplit(zp, kelvin).or(() -> coldSplit(zp, kelvin));
+            if (answers.size() >= MAX_ANSWERS) {
+                answers.pollFirstEntry();
+            }
+            answers.put(kelvin, layers);
+            return layers;
+        }
+    }
+
+    /**
+     * A flash started from the layers found at the nearest temperature already asked (the flash point and boiling
+     * searches ask the same blend at many nearby temperatures); a flash that ends in two distinct layers is an
+     * equilibrium, so the stability test is skipped. Empty when no split is known or the flash collapses.
+     */
+    private Optional<Layers> warmSplit(double[] zp, double kelvin) {
+        Layers nearest = null;
+        double gap = WARM_START_KELVIN;
+        for (Map.Entry<Double, Optional<Layers>> e : answers.entrySet()) {
+            double d = Math.abs(e.getKey() - kelvin);
+            if (e.getValue().isPresent() && d <= gap) {
+                gap = d;
+                nearest = e.getValue().get();
+            }
+        }
+        return nearest == null ? Optional.empty() : flash(zp, nearest.second(), kelvin, nearest.first());
+    }
+
+    private Optional<Layers> coldSplit(double[] zp, double kelvin) {
         Miscibility.Stationary trial = Miscibility.mostNegativeTpd(inner, zp, kelvin);
         if (trial == null || trial.tpd() >= -Miscibility.TPD_TOLERANCE) {
             return Optional.empty();
         }
-        return flash(zp, trial.w(), kelvin);
+        return flash(zp, trial.w(), kelvin, zp);
     }
 
-    private Optional<Layers> flash(double[] z, double[] w, double kelvin) {
+    private Optional<Layers> flash(double[] z, double[] w, double kelvin, double[] start) {
         int n = z.length;
-        double[] x1 = z.clone();
+        double[] x1 = start.clone();
         double[] x2 = w.clone();
         double[] k = new double[n];
         double beta = 0.5;
@@ -128,22 +176,42 @@ public final class CoexistingLiquidsMulti implements ActivityModel {
         return Optional.of(new Layers(x1.clone(), x2.clone(), beta));
     }
 
-    /** β in (0, 1) with Σ zᵢ(Kᵢ − 1)/(1 + β(Kᵢ − 1)) = 0 (bisection; the sum falls with β), or null outside. */
+    /**
+     * β in (0, 1) with Σ zᵢ(Kᵢ − 1)/(1 + β(Kᵢ − 1)) = 0, or null outside. The sum falls strictly with β, so Newton steps
+     * are kept inside a shrinking bracket and a step that leaves it is replaced by bisection (Michelsen and Mollerup,
+     * ch. 10, from memory); the loop ends when the bracket or the step is below 1e-14.
+     */
     private static Double rachfordRice(double[] z, double[] k) {
         double lo = 0;
         double hi = 1;
         if (rr(z, k, lo) <= 0 || rr(z, k, hi) >= 0) {
             return null;
         }
-        for (int it = 0; it < 200; it++) {
-            double mid = 0.5 * (lo + hi);
-            if (rr(z, k, mid) > 0) {
-                lo = mid;
-            } else {
-                hi = mid;
+        double beta = 0.5;
+        for (int it = 0; it < 100 && hi - lo > 1e-14; it++) {
+            double f = 0;
+            double slope = 0;
+            for (int i = 0; i < z.length; i++) {
+                double c = k[i] - 1;
+                double d = 1 + beta * c;
+                f += z[i] * c / d;
+                slope -= z[i] * c * c / (d * d);
             }
+            if (f > 0) {
+                lo = beta;
+            } else {
+                hi = beta;
+            }
+            double next = slope < 0 ? beta - f / slope : Double.NaN;
+            if (!(next > lo && next < hi)) {
+                next = 0.5 * (lo + hi);
+            }
+            if (Math.abs(next - beta) < 1e-14) {
+                return next;
+            }
+            beta = next;
         }
-        return 0.5 * (lo + hi);
+        return beta;
     }
 
     private static double rr(double[] z, double[] k, double beta) {

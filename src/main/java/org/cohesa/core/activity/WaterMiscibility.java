@@ -1,7 +1,9 @@
 package org.cohesa.core.activity;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Locale;
 import java.util.Optional;
 import org.cohesa.core.hsp.VolumeMixing;
@@ -53,6 +55,12 @@ public final class WaterMiscibility {
      * @param data            published mutual solubilities with water ({@link WaterSolubilityTable#NONE} for the model alone)
      */
     public static WaterJudgement judge(List<Solvent> components, double[] volumeFractions, double kelvin, WaterSolubilityTable data) {
+        return judge(components, volumeFractions, kelvin, data, new HashMap<>());
+    }
+
+    /** As {@link #judge(List, double[], double, WaterSolubilityTable)}, with the solvent pairs' model verdicts shared across calls. */
+    private static WaterJudgement judge(List<Solvent> components, double[] volumeFractions, double kelvin, WaterSolubilityTable data,
+                                        Map<List<Solvent>, Boolean> pairSplits) {
         if (components == null || volumeFractions == null || components.size() != volumeFractions.length) {
             throw new IllegalArgumentException("need one volume fraction per component");
         }
@@ -86,7 +94,7 @@ public final class WaterMiscibility {
             }
             return model(components, volumeFractions, kelvin, v.why + "; ");
         }
-        return multicomponent(components, volumeFractions, present, water, kelvin, data);
+        return multicomponent(components, volumeFractions, present, water, kelvin, data, pairSplits);
     }
 
     /**
@@ -117,13 +125,15 @@ public final class WaterMiscibility {
         boolean allMeasured = true;
         boolean anyMeasured = false;
         String firstDetail = null;
+        // whether two of the solvents split from each other does not depend on how much water is added
+        Map<List<Solvent>, Boolean> pairSplits = new HashMap<>();
         for (double f : WATER_FRACTIONS) {
             double[] phi = new double[with.size()];
             for (int i = 0; i < components.size(); i++) {
                 phi[i] = volumeFractions[i] * (1 - f);
             }
             phi[w] += f;
-            WaterJudgement j = judge(with, phi, kelvin, data);
+            WaterJudgement j = judge(with, phi, kelvin, data, pairSplits);
             allMeasured &= j.basis() == WaterJudgement.Basis.MEASURED;
             anyMeasured |= j.basis() != WaterJudgement.Basis.MODEL;
             if (j.splits()) {
@@ -192,7 +202,7 @@ public final class WaterMiscibility {
     }
 
     private static WaterJudgement multicomponent(List<Solvent> components, double[] volumeFractions, List<Solvent> present, int water,
-                                                 double kelvin, WaterSolubilityTable data) {
+                                                 double kelvin, WaterSolubilityTable data, Map<List<Solvent>, Boolean> pairSplits) {
         WaterJudgement additive = additiveUptake(present, volumeFractions(components, volumeFractions, present), water, kelvin, data);
         if (additive != null) {
             return additive;
@@ -218,12 +228,9 @@ public final class WaterMiscibility {
                     if (i == water || j == water) {
                         continue;
                     }
-                    for (double f : PAIR_FRACTIONS) {
-                        MiscibilityResult r = Miscibility.check(List.of(present.get(i), present.get(j)), new double[] {f, 1 - f}, kelvin);
-                        if (r.splits()) {
-                            unsure.add(present.get(i).name() + " and " + present.get(j).name() + " can split by the model");
-                            break;
-                        }
+                    List<Solvent> pair = List.of(present.get(i), present.get(j));
+                    if (pairSplits.computeIfAbsent(pair, p -> pairSplits(p, kelvin))) {
+                        unsure.add(present.get(i).name() + " and " + present.get(j).name() + " can split by the model");
                     }
                 }
             }
@@ -234,6 +241,15 @@ public final class WaterMiscibility {
             }
         }
         return model(components, volumeFractions, kelvin, String.join("; ", unsure) + ": ");
+    }
+
+    private static boolean pairSplits(List<Solvent> pair, double kelvin) {
+        for (double f : PAIR_FRACTIONS) {
+            if (Miscibility.check(pair, new double[] {f, 1 - f}, kelvin).splits()) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static double[] volumeFractions(List<Solvent> components, double[] volumeFractions, List<Solvent> present) {
