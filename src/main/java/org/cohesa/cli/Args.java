@@ -9,15 +9,16 @@ public final class Args {
 
     /** A finite decimal number; anything else is an {@link InvalidInputException} naming the option. */
     public static double number(String field, String text) {
+        double d;
         try {
-            double d = Double.parseDouble(text.strip());
-            if (!Double.isFinite(d)) {
-                throw new NumberFormatException();
-            }
-            return d;
+            d = Double.parseDouble(text.strip());
         } catch (NumberFormatException | NullPointerException e) {
             throw new InvalidInputException(field, String.valueOf(text), "not a number");
         }
+        if (!Double.isFinite(d)) {
+            throw new InvalidInputException(field, text, "not a finite number");
+        }
+        return d;
     }
 
     /** A number greater than zero. */

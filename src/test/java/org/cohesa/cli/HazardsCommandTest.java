@@ -84,7 +84,7 @@ class HazardsCommandTest {
         assertTrue(badT.err().startsWith("error:") && badT.err().contains("warm"), badT.err());
         CliTestSupport.Result hot = run("hazards", "--solvent", "toluene", "--temperature", "900");
         assertEquals(2, hot.exitCode());
-        assertTrue(hot.err().startsWith("error: temperature"), hot.err());
+        assertTrue(hot.err().startsWith("error: --temperature '900'"), hot.err());
         CliTestSupport.Result both = run("hazards", "--solvent", "toluene", "--blend", "toluene:1");
         assertEquals(2, both.exitCode());
         CliTestSupport.Result sum = run("hazards", "--blend", "toluene:0.5,ethanol:0.2");

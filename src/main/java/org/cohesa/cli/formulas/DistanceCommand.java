@@ -24,8 +24,8 @@ public final class DistanceCommand extends CohesaSubcommand {
 
     /** Exactly one of --solvent or --blend. */
     static final class LiquidChoice {
-        @Option(names = "--solvent", paramLabel = "NAME", required = true) String solvent;
-        @Option(names = "--blend", paramLabel = "NAME:FRACTION,...", required = true) String blend;
+        @Option(names = "--solvent", paramLabel = "NAME", required = true, description = "A library solvent by name, synonym or CAS.") String solvent;
+        @Option(names = "--blend", paramLabel = "NAME:FRACTION,...", required = true, description = "A blend by volume fractions that sum to 1, e.g. toluene:0.6,ethanol:0.4.") String blend;
     }
 
     @Override

@@ -1,5 +1,6 @@
 package org.cohesa.cli.safety;
 
+import org.cohesa.cli.Args;
 import org.cohesa.cli.CohesaSubcommand;
 import org.cohesa.cli.Output;
 import org.cohesa.cli.TextTable;
@@ -14,6 +15,7 @@ import org.cohesa.core.safety.SolventGuide;
 import org.cohesa.core.safety.VapourExposure;
 import org.cohesa.core.solvent.Blend;
 import org.cohesa.core.solvent.SolventLibrary;
+import org.cohesa.core.InvalidInputException;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -39,14 +41,17 @@ public final class HazardsCommand extends CohesaSubcommand {
 
     @Option(names = "--temperature", paramLabel = "C", defaultValue = "25",
             description = "Liquid temperature for the vapour-exposure estimate, °C (default ${DEFAULT-VALUE}).")
-    double temperature;
+    String temperature;
 
     @Option(names = "--ideal", description = "Use the ideal solution (activity coefficients = 1) on purpose, e.g. for comparison; the output names it.")
     boolean ideal;
 
     @Override
     protected void execute() {
-        double celsius = temperature;
+        double celsius = Args.number("--temperature", temperature);
+        if (celsius < -100 || celsius > 300) {
+            throw new InvalidInputException("--temperature", temperature, "must lie between −100 and 300 °C");
+        }
         SolventLibrary lib = ctx().library();
         Blend blend = liquid.solvent != null ? Blend.pure(lib.resolve("--solvent", liquid.solvent)) : lib.resolveBlend("--blend", liquid.blend);
         SafetyProfile p = SafetyProfiler.profile(blend, celsius + 273.15, ideal);
