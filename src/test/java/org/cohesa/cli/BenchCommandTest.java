@@ -79,10 +79,12 @@ class BenchCommandTest {
         assertEquals(0, code, err.toString());
         JsonNode j = new ObjectMapper().readTree(out.toString());
         assertEquals("fit-checks --limits", j.get("benchmark").asText());
-        assertEquals(4, j.get("scenarios").size(), "15, 20, 30 clean and 30 with two flips");
+        assertEquals(5, j.get("scenarios").size(), "15, 20, 30 clean, 30 with two flips, 30 with two flips and two scored 0.5");
+        assertEquals(2, j.get("scenarios").get(4).get("scored_half").asInt());
         JsonNode thirty = j.get("scenarios").get(2);
         assertEquals(30, thirty.get("liquids").asInt());
-        assertEquals(8, thirty.get("lines").size());
+        assertEquals(23, thirty.get("lines").size(), "8 diagnostics and 15 estimators tried against the fit (FitLimits)");
+        assertEquals(0, thirty.get("lines").get(0).get("pairedMeanDifference").asDouble(), 1e-12, "the program's fit against itself");
         assertEquals(5, thirty.get("per_sphere").size(), "the five spheres of issue 14");
         assertEquals(0, thirty.get("fit_worse_than_truth").asInt());
         assertTrue(j.get("library_spheres").asInt() > 20, "the published non-drug spheres of the bundled table");

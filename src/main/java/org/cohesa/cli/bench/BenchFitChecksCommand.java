@@ -66,7 +66,8 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
 
     @Option(names = "--limits", description = "Instead of the figures above, measure what limits the centre error: the same series fitted "
             + "with more starts, from the classic fit, with R0 fixed at the truth, with the whole list scored, with a sharper softness and with a leave-one-out "
-            + "prior from the library's other published spheres; per-axis errors and each sphere's own error.")
+            + "prior from the library's other published spheres, and the Bayes estimators, integrated softness, banded partial results and "
+            + "bias correction tried against it; per-axis errors, each variant's paired difference from the program's fit, and each sphere's own error.")
     boolean limits;
 
     record Row(int liquids, int flips, @JsonProperty("scored_half") int scoredHalf, int trials, @JsonProperty("centre_error_median") double centreMedian,
@@ -89,7 +90,7 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
                     @JsonProperty("region_coverage") double plainCoverage, @JsonProperty("region_coverage_with_prior") double priorCoverage) {
     }
 
-    record LimitsScenario(int liquids, int flips, int trials, List<FitLimits.Line> lines,
+    record LimitsScenario(int liquids, int flips, @JsonProperty("scored_half") int scoredHalf, int trials, List<FitLimits.Line> lines,
                           @JsonProperty("log_likelihood_gap_median") double gap, @JsonProperty("fit_worse_than_truth") int worse,
                           @JsonProperty("classic_start_higher") int classicHigher,
                           @JsonProperty("per_sphere") List<SphereLine> perSphere) {
@@ -281,16 +282,16 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
     private void limits(List<SolubilitySphere> truths, List<NamedPoint> pool, long start) {
         List<SolubilitySphere> library = librarySpheres();
         List<LimitsScenario> out = new ArrayList<>();
-        for (int[] sf : new int[][] {{15, 0}, {20, 0}, {30, 0}, {30, 2}}) {
-            FitLimits.Figures f = FitLimits.run(truths, library, pool, new FitValidation.Scenario(sf[0], sf[1], 0), trials,
-                    seed * 1000 + 900 + sf[0] + sf[1]);
+        for (int[] sf : new int[][] {{15, 0, 0}, {20, 0, 0}, {30, 0, 0}, {30, 2, 0}, {30, 2, 2}}) {
+            FitLimits.Figures f = FitLimits.run(truths, library, pool, new FitValidation.Scenario(sf[0], sf[1], sf[2]), trials,
+                    seed * 1000 + 900 + sf[0] + sf[1] + 5 * sf[2]);
             List<FitLimits.Line> lines = f.lines().stream().map(l -> new FitLimits.Line(l.what(), Output.round(l.centreMedian(), 3),
                     Output.round(l.centreMean(), 3), Output.round(l.r0Median(), 3), Output.round(l.dDMedian(), 3), Output.round(l.dPMedian(), 3),
-                    Output.round(l.dHMedian(), 3))).toList();
+                    Output.round(l.dHMedian(), 3), Output.round(l.pairedMeanDifference(), 3), Output.round(l.pairedStandardError(), 3))).toList();
             List<SphereLine> per = f.perSphere().stream().map(p -> new SphereLine(materialName(p.truth()), p.trials(), Output.round(p.centreMedian(), 3),
                     new double[] {Output.round(p.meanOffsetDD(), 2), Output.round(p.meanOffsetDP(), 2), Output.round(p.meanOffsetDH(), 2),
                             Output.round(p.meanOffsetR0(), 2)})).toList();
-            out.add(new LimitsScenario(sf[0], sf[1], f.trials(), lines, Output.round(f.logLikelihoodGapMedian(), 3), f.fitWorseThanTruth(),
+            out.add(new LimitsScenario(sf[0], sf[1], sf[2], f.trials(), lines, Output.round(f.logLikelihoodGapMedian(), 3), f.fitWorseThanTruth(),
                     f.classicStartHigher(), per));
         }
         LimitsReport report = new LimitsReport("fit-checks --limits", spheres + " (" + truths.size() + " spheres)",
@@ -303,12 +304,14 @@ final class BenchFitChecksCommand extends CohesaSubcommand {
         out().printf(Locale.ROOT, "what limits the centre error: %s, %d trials per scenario, seed %d, series drawn from %s; median errors in MPa^½%n",
                 report.spheres(), trials, seed, report.liquidList());
         for (LimitsScenario x : out) {
-            out().printf(Locale.ROOT, "%n%d liquids, %d flips (%d trials); fitted minus true log-likelihood: median %.2f nats, below 0 in %d trials; "
-                    + "a start at the classic fit reached a higher likelihood in %d%n", x.liquids(), x.flips(), x.trials(), x.gap(), x.worse(), x.classicHigher());
-            TextTable t = new TextTable("fit", "centre med", "centre mean", "R0 med", "|ΔδD| med", "|ΔδP| med", "|ΔδH| med");
+            out().printf(Locale.ROOT, "%n%d liquids, %d flips, %d scored 0.5 (%d trials); fitted minus true log-likelihood: median %.2f nats, below 0 in %d trials; "
+                    + "a start at the classic fit reached a higher likelihood in %d%n", x.liquids(), x.flips(), x.scoredHalf(), x.trials(), x.gap(), x.worse(),
+                    x.classicHigher());
+            TextTable t = new TextTable("fit", "centre med", "centre mean", "R0 med", "|ΔδD| med", "|ΔδP| med", "|ΔδH| med", "vs program: mean Δ ± se");
             for (FitLimits.Line l : x.lines()) {
                 t.row(l.what(), Output.fmt(l.centreMedian(), 2), Output.fmt(l.centreMean(), 2), Output.fmt(l.r0Median(), 2), Output.fmt(l.dDMedian(), 2),
-                        Output.fmt(l.dPMedian(), 2), Output.fmt(l.dHMedian(), 2));
+                        Output.fmt(l.dPMedian(), 2), Output.fmt(l.dHMedian(), 2),
+                        Output.fmt(l.pairedMeanDifference(), 2) + " ± " + Output.fmt(l.pairedStandardError(), 2));
             }
             t.print(out());
             TextTable p = new TextTable("sphere", "trials", "centre med", "mean ΔδD", "mean ΔδP", "mean ΔδH", "mean ΔR0");

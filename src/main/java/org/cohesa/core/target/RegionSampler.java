@@ -3,6 +3,7 @@ package org.cohesa.core.target;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
+import java.util.function.ToDoubleFunction;
 
 /**
  * Random-walk Metropolis sampling (Metropolis et al., <i>J. Chem. Phys.</i> 21 (1953) 1087) of the tempered
@@ -26,8 +27,16 @@ final class RegionSampler {
     }
 
     static Chain run(LikelihoodObjective f, double[] start, int kept, SplittableRandom rng) {
+        return run(f::logPosterior, start, kept, TEMPERATURE, rng);
+    }
+
+    /**
+     * The same sampler for any log density (up to a constant) over the search box, at {@code temperature} (1: the
+     * density itself, as the diagnostics of {@link FitLimits} use it for posterior means).
+     */
+    static Chain run(ToDoubleFunction<double[]> logDensity, double[] start, int kept, double temperature, SplittableRandom rng) {
         double[] x = start.clone();
-        double lx = f.logPosterior(x);
+        double lx = logDensity.applyAsDouble(x);
         double[] step = FIRST_STEPS.clone();
         List<double[]> pts = new ArrayList<>(kept);
         List<Double> ls = new ArrayList<>(kept);
@@ -38,8 +47,8 @@ final class RegionSampler {
             for (int k = 0; k < 4; k++) {
                 y[k] = x[k] + step[k] * rng.nextGaussian();
             }
-            double ly = inBounds(y) ? f.logPosterior(y) : Double.NEGATIVE_INFINITY;
-            if (ly > Double.NEGATIVE_INFINITY && Math.log(rng.nextDouble()) < (ly - lx) / TEMPERATURE) {
+            double ly = inBounds(y) ? logDensity.applyAsDouble(y) : Double.NEGATIVE_INFINITY;
+            if (ly > Double.NEGATIVE_INFINITY && Math.log(rng.nextDouble()) < (ly - lx) / temperature) {
                 System.arraycopy(y, 0, x, 0, 4);
                 lx = ly;
                 accepted++;

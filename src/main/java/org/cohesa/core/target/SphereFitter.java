@@ -271,6 +271,14 @@ public final class SphereFitter {
             return scores.length;
         }
 
+        /** The same liquids with other scores (a resampled series). */
+        Data withScores(double[] y) {
+            if (y.length != scores.length) {
+                throw new IllegalArgumentException("expected " + scores.length + " scores, got " + y.length);
+            }
+            return new Data(points, scaled, y.clone());
+        }
+
         int[] goodIndices(double[] w) {
             return java.util.stream.IntStream.range(0, size()).filter(i -> w[i] > 0 && scores[i] >= TestResult.GOOD_THRESHOLD).toArray();
         }
