@@ -254,8 +254,8 @@ def crc_estimate(tb_k, hvap_tb, hvap_298):
 
 # Source key of the last-resort estimate: ΔHvap at 25 °C from the cohesive energy of the Hansen parameters.
 HANSEN_KEY = "estimate-clapeyron-hansen-hvap"
-# The same estimate where the Hansen parameters are themselves estimated from the structure (Mathieu 2018): two
-# estimates in a chain, measured as a chain (docs/methods.md).
+# The same estimate where the Hansen parameters are themselves estimated from the structure (the default group route,
+# curation/estimated-hsp.csv): two estimates in a chain, measured as a chain (docs/methods.md).
 STRUCTURE_HANSEN_KEY = "estimate-clapeyron-structure-hvap"
 # Families the Hansen-based estimate is applied to. Left out, by its error measured on the bundled solvents that
 # have published correlations (docs/methods.md): glycols (median error 48 %, always too low), carboxylic acids

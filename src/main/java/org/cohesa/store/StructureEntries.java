@@ -25,8 +25,8 @@ public final class StructureEntries {
 
     /**
      * Source key of Hansen values a user's solvent gets from its structure by the default group route (Mathieu 2018
-     * and Stefanis–Panayiotou, per component; the note names each component's route). The "estimate-" prefix marks an
-     * estimate everywhere.
+     * and Stefanis–Panayiotou, per component; the note names each component's route), and the key of the bundled
+     * table's estimated sets (same route). The "estimate-" prefix marks an estimate everywhere.
      */
     public static final String HSP_SOURCE = "estimate-structure-groups";
     /** The key the same entries carried while the group route was Mathieu 2018 alone (still in older databases). */

@@ -87,8 +87,8 @@ class BundledDataCrossCheckTest {
             "estimate-clapeyron-structure-hvap",
             // checked by VapourPressureAtBoilingPointTest against the solvent's own published fit
             "tb-from-vapour-fit",
-            // checked by EstimatedHansenTableTest against the structure estimator (Mathieu 2018)
-            "estimate-structure-mathieu-2018",
+            // checked by EstimatedHansenTableTest against the structure estimator (default group route)
+            StructureEntries.HSP_SOURCE,
             // checked below against PubChem's molecular weight of the named component (representativeMolarMass...)
             "estimate-representative-molar-mass");
 

@@ -24,8 +24,9 @@ import org.cohesa.core.activity.LleGroups;
  * group methods where both cover the structure — Mathieu 2018 ({@link MathieuMethod}) and Stefanis–Panayiotou
  * ({@link StefanisPanayiotouMethod}) — and the one that covers it otherwise. The mean of independent estimators is
  * the usual way to combine them; it was chosen on half of the validation table (CAS check digit even) and confirmed on
- * the other half, where it beat either method alone in every component (docs/methods.md). {@link GroupRoute#MATHIEU}
- * keeps the Mathieu groups alone (the bundled table's estimated sets, source key estimate-structure-mathieu-2018).
+ * the other half, where it beat either method alone in every component (docs/methods.md). The bundled table's estimated
+ * sets and a user's solvent added by SMILES both use it (source key estimate-structure-groups). {@link GroupRoute#MATHIEU}
+ * keeps the Mathieu groups alone, for comparison (the route of the bundled sets before, key estimate-structure-mathieu-2018).
  */
 public final class StructureEstimator {
 

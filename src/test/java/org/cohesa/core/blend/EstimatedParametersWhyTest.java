@@ -20,7 +20,7 @@ class EstimatedParametersWhyTest {
 
     @Test
     void anEstimatedComponentIsNamedAndAPublishedOneIsNot() {
-        Solvent estimated = liquid("estimated liquid", "estimate-structure-mathieu-2018");
+        Solvent estimated = liquid("estimated liquid", "estimate-structure-groups");
         Solvent published = liquid("published liquid", "alshehri-2022");
         List<String> why = Desirability.explain(List.of(new BlendComponent(estimated, 0.5), new BlendComponent(published, 0.5)),
                 0.4, 0.8, Desirability.DEFAULT, Double.NaN).why();

@@ -124,7 +124,7 @@ class HansenEstimateTest {
 
     @Test
     void theFamiliesThatGetAWarningOnTheMathieuRouteAreItsMuchWorseOnes() {
-        // the same rule for the Mathieu groups alone (the route of the bundled table's estimated sets)
+        // the same rule for the Mathieu groups alone (GroupRoute.MATHIEU, kept for comparison)
         assertMuchWorse(new String[] {"group δD", "group δP", "group δH"}, EstimateErrors.MUCH_WORSE_MATHIEU);
     }
 
