@@ -141,6 +141,28 @@ class BlendCommandsTest {
     }
 
     @Test
+    void replaceBringsNoNewReactivityAndASemicrystallinePolymerHasNoEvaporationWindow() {
+        // dichloromethane is inert: the α,β-unsaturated ketone mesityl oxide (a Michael acceptor, ReactiveFlagTest) is no
+        // substitute unless asked for; the output says so in one line
+        CliTestSupport.Result r = run("replace", "dichloromethane");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("reactivity as the original: dichloromethane is no carboxylic acid"), r.out());
+        assertFalse(r.out().contains("mesityl oxide 100.0 %"), r.out());
+        CliTestSupport.Result kept = run("replace", "dichloromethane", "--exclude-reactive", "none");
+        assertFalse(kept.out().contains("reactivity as the original"), kept.out());
+        assertTrue(kept.out().contains("mesityl oxide 100.0 %"), kept.out());
+        // PVDF is dissolved warm and dried hot or coagulated: no evaporation window by default (common practice, no source),
+        // --process general brings the window back
+        CliTestSupport.Result pvdf = run("blend", "--material", "PVDF", "--json");
+        assertEquals("any", pvdf.json().get("ranking").get("process").get("use").asText(), pvdf.out());
+        assertEquals("triethyl phosphate", pvdf.json().get("blends").get(0).get("components").get(0).get("name").asText(), pvdf.out());
+        CliTestSupport.Result general = run("blend", "--material", "PVDF", "--process", "general", "--json");
+        assertEquals("general", general.json().get("ranking").get("process").get("use").asText(), general.out());
+        CliTestSupport.Result pmma = run("blend", "--material", "PMMA", "--top", "3", "--json");
+        assertEquals("general", pmma.json().get("ranking").get("process").get("use").asText(), pmma.out());
+    }
+
+    @Test
     void anAcidicDrugGetsNoAmineAndSaysWhy() {
         // Salicylic acid (pKa 2.97, CRC Handbook, dissociation constants; from memory) forms a salt with an amine solvent
         // (common practice, no source): a salt, not a solution. Its structure (solvent-db/material-structures.csv) marks it acidic.

@@ -391,10 +391,13 @@ class LibraryCurationTest {
         assertTrue(solvent("120-82-1").get("hazard_statements").contains("H400"));
         assertEquals("H225 H411", solvent("98-08-8").get("hazard_statements"));
         // Same source: 2-ethylbutan-1-ol 603-051-00-2 Acute Tox. 4 * H312 beside H302; propionitrile has no entry (the
-        // whole nitrile section 608-001 to 608-069 was read), so its recalled list is a supplier self-classification.
+        // whole nitrile section 608-001 to 608-069 was read), so its list is a supplier self-classification: the EMD Millipore
+        // SDS 'Propionitrile for synthesis' (product 807068, 2013, stored copy) gives Flam. Liq. 2, Acute Tox. 2 oral, Acute
+        // Tox. 1 dermal, Acute Tox. 4 inhalation, Eye Irrit. 2 (the recalled list had H225 alone).
         assertTrue(solvent("97-95-0").get("hazard_statements").contains("H312"));
-        assertEquals("memory-supplier-classification", solvent("107-12-0").get("src_hazard_statements"));
-        assertTrue(solvent("107-12-0").get("note").contains("supplier self-classification, check the SDS"));
+        assertEquals("supplier-sds-checked", solvent("107-12-0").get("src_hazard_statements"));
+        assertEquals(Set.of("H225", "H300", "H310", "H319", "H332"), Set.of(solvent("107-12-0").get("hazard_statements").split(" ")));
+        assertTrue(solvent("107-12-0").get("note").contains("check your supplier's SDS"));
         // GisChem data sheet 395 (BG RCI / BGHM, stored copy): 2-ethylhexanol H332 H315 H319 H335 from manufacturers' data.
         assertEquals("gischem", solvent("104-76-7").get("src_hazard_statements"));
         assertTrue(solvent("104-76-7").get("note").contains("check the SDS"));

@@ -66,7 +66,7 @@ public final class BlendCommand extends CohesaSubcommand {
                     "must exceed the number of fixed components (" + c.fixed().size() + ")");
         }
         BlendDesigner.Request req = new BlendDesigner.Request(sphere, c, k, top, rankBy, redLimit, options.keepTwoPhase, kelvin,
-                options.weights(org.cohesa.core.blend.ProcessUse.GENERAL, null));
+                options.weights(org.cohesa.core.blend.ProcessUse.defaultFor(material), null));
         BlendDesigner.Result r = BlendDesigner.design(lib.all(), req, PhaseChecks.miscibility(), BlendOptions.waterCheck(lib, c),
                 BlendView.progress(spec.commandLine().getErr()), null);
         if (json()) {
@@ -83,6 +83,10 @@ public final class BlendCommand extends CohesaSubcommand {
             out().println(atTemperature.describe());
         }
         out().println(BlendView.summary(r));
+        if (options.process == null && req.weights().use() != org.cohesa.core.blend.ProcessUse.GENERAL) {
+            out().println("process: " + req.weights().use().word() + " by default for a semicrystalline polymer: it is dissolved warm or hot and the "
+                    + "solvent leaves by hot drying or a non-solvent bath, not by evaporation at 25 °C (--process general or film weighs that)");
+        }
         BlendView.header(out(), r, c, options, req.weights());
         String secondary = BlendView.secondaryLabel(rankBy);
         List<String> header = new ArrayList<>(List.of("#", "blend (volume %)", "dD", "dP", "dH", "Ra", "RED"));

@@ -79,7 +79,7 @@ public final class BlendOptions {
     @Option(names = "--allow-salt-formers", description = "Keep amine solvents for an acidic material and acid solvents for a basic one (by default they are left out: they form salts with it).")
     boolean allowSaltFormers;
 
-    @Option(names = "--exclude-reactive", paramLabel = "FLAGS", description = "Leave out reactive solvents: acid (carboxylic acids), amine (amines, pyridines), nitro (nitroalkanes), peroxide (peroxide formers), dicarbonyl (acetoacetates, malonates: active methylene), enone (mesityl oxide, isophorone: Michael acceptors), or all.")
+    @Option(names = "--exclude-reactive", paramLabel = "FLAGS", description = "Leave out reactive solvents: acid (carboxylic acids), amine (amines, pyridines), nitro (nitroalkanes), peroxide (peroxide formers), dicarbonyl (acetoacetates, malonates: active methylene), enone (mesityl oxide, isophorone: Michael acceptors), all, or none (replace: keep the reactivities the original lacks, which it leaves out by default).")
     List<String> excludeReactive = new ArrayList<>();
 
     @Option(names = "--min-blend-flash-point", paramLabel = "C", description = "Least computed flash point of the blend itself, °C (Liaw et al. 2002); components may be lower.")

@@ -126,7 +126,7 @@ public final class BlendView {
                     + " (--allow-salt-formers keeps them)");
         }
         if (!c.more().excludeReactive().isEmpty()) {
-            out.add("reactive solvents left out: " + c.more().excludeReactive().stream().map(ReactiveFlag::label).collect(Collectors.joining(", ")));
+            out.add("reactive solvents left out: " + c.more().excludeReactive().stream().sorted().map(ReactiveFlag::label).collect(Collectors.joining(", ")));
         }
         return out;
     }

@@ -77,6 +77,12 @@ public record BlendConstraints(
                     blendBoilingMaxC, withWater, characters);
         }
 
+        /** A copy that leaves out the solvents carrying any of these reactivity flags (and no others). */
+        public More withReactive(Set<ReactiveFlag> flags) {
+            return new More(noIchClass1, ichUnlistedAllowed, healthLimits, flags, minBlendFlashPointC, blendBoilingMinC,
+                    blendBoilingMaxC, withWater, solute);
+        }
+
         /** A copy with another water demand (null: none). */
         public More withWater(WaterCheck.Need need) {
             return new More(noIchClass1, ichUnlistedAllowed, healthLimits, excludeReactive, minBlendFlashPointC, blendBoilingMinC,

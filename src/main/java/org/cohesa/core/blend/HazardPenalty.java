@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import org.cohesa.core.safety.FlammableLiquidClass;
+import org.cohesa.core.safety.HazardListBasis;
 import org.cohesa.core.safety.HazardStatements;
 import org.cohesa.core.safety.SafetyProfiler;
 import org.cohesa.core.safety.SolventGuide;
@@ -30,7 +31,9 @@ import org.cohesa.core.solvent.Solvent;
  *       1 (unknown is not safe: a solvent no agency has set a limit for has thin toxicology, and a liquid with a
  *       generous published limit must not rank below it); skin notation + 0.5;</li>
  *   <li>process suitability: a reactive solvent ({@link ReactiveFlag} other than peroxide former, which is counted
- *       below) 1: it reacts with bases, amines or the solute and is a worse first try;</li>
+ *       below) 2: it reacts with bases, amines or the solute and is a worse first try; the CHEM21 panel moved the reactive
+ *       solvents it ranked one or two classes below their computed rank (Table 7: pyridine, triethylamine, nitromethane; 1.8
+ *       points on average at a guide term's full weight);</li>
  *   <li>solvent guide (CHEM21: the paper's final ranking where it lists the solvent, else the computed ranking by
  *       default): recommended 0, problematic 0.5, hazardous 1.25, highly hazardous 2 — half of what a term of its own
  *       would weigh, because the guide's safety and health scores are computed from the flash point and H statements
@@ -41,7 +44,10 @@ import org.cohesa.core.solvent.Solvent;
  *       must be segregated and incinerated, and the published selection guides place most of them low.</li>
  * </ul>
  * A solvent with no hazard statements and no source for them (the library does not know) gets 2 points: unknown is
- * not safe, and it must not outrank a liquid whose statements are known to be mild. Water scores 0.
+ * not safe, and it must not outrank a liquid whose statements are known to be mild. A list recalled from memory and not
+ * checked ({@link HazardListBasis#RECALLED}) is possibly incomplete: its health terms count at least those 2 points (CHEM21
+ * scores a solvent without registered data health 5, between H318's 4 and a suspected CMR's 6, whose weights here are 1.5
+ * and 4). Water scores 0.
  *
  * @param points total penalty, ≥ 0
  * @param terms  the non-zero parts in words with their points, largest first, e.g. "H361d suspected reprotoxic 4"
@@ -56,8 +62,8 @@ public record HazardPenalty(double points, List<String> terms) {
     /** Penalty of a solvent with no 8-h exposure limit in the library. */
     static final double NO_EXPOSURE_LIMIT = 1;
 
-    /** Penalty of a solvent that takes part in reactions ({@link ReactiveFlag}, peroxide formers apart). */
-    static final double REACTIVE = 1;
+    /** Penalty of a solvent that takes part in reactions ({@link ReactiveFlag}, peroxide formers apart): as much as a Category 2 flammability. */
+    static final double REACTIVE = 2;
 
     public HazardPenalty {
         terms = List.copyOf(terms);
@@ -89,9 +95,11 @@ public record HazardPenalty(double points, List<String> terms) {
             return new HazardPenalty(0, List.of());
         }
         List<Term> t = new ArrayList<>();
-        if (s.hazardStatements().isEmpty() && !s.sources().containsKey("hazard_statements")) {
+        HazardListBasis basis = HazardListBasis.of(s);
+        if (basis == HazardListBasis.NOT_RECORDED) {
             t.add(new Term(UNKNOWN_STATEMENTS, "hazard statements not recorded"));
         }
+        double health = 0;
         for (Health h : HEALTH) {
             Set<String> codes = new LinkedHashSet<>();
             for (String code : s.hazardStatements()) {
@@ -101,7 +109,15 @@ public record HazardPenalty(double points, List<String> terms) {
             }
             if (!codes.isEmpty()) {
                 t.add(new Term(h.points(), String.join("/", codes) + " " + h.label()));
+                health += h.points();
             }
+        }
+        if (basis == HazardListBasis.RECALLED && health < UNKNOWN_STATEMENTS) {
+            // a recalled list is possibly incomplete: its health part counts at least as much as an unknown list's
+            // (CHEM21 scores a solvent without registered data health 5, between H318's 4 and H351's 6; 2 points lies
+            // between our 1.5 and 4 for those; docs/methods.md, "Ranking")
+            t.add(new Term(UNKNOWN_STATEMENTS - health, "hazard list recalled, not checked: health counted as at least "
+                    + fmt(UNKNOWN_STATEMENTS)));
         }
         Integer cat = flammableCategory(s);
         if (cat != null) {

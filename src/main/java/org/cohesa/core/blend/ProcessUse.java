@@ -4,6 +4,7 @@ import java.util.Locale;
 import org.cohesa.core.InvalidInputException;
 import org.cohesa.core.drying.EvaporationRates;
 import org.cohesa.core.solvent.Solvent;
+import org.cohesa.core.target.Material;
 
 /**
  * What the solvent has to do after it has dissolved the material: how it must leave the process. Each use has a
@@ -97,6 +98,20 @@ public enum ProcessUse {
             return "boiling point " + HazardPenalty.fmt(bpMin) + "–" + HazardPenalty.fmt(bpMax) + " °C";
         }
         return "none";
+    }
+
+    /**
+     * The default use of {@code blend} for a target: {@link #GENERAL}, except for a semicrystalline polymer
+     * ({@link Material#semicrystalline()}: PVDF, polyethylene, polypropylene, PET), which gets {@link #ANY}. Such a polymer
+     * dissolves only warm or hot, near its crystallites' melting range, and the solvent leaves the way that process makes it:
+     * an electrode slurry or cast film dried hot (PVDF in NMP is dried at 80–130 °C), a membrane dope coagulated in a
+     * non-solvent bath, a hot solution cooled (common practice, no source). Evaporation at 25 °C is not that way, and the
+     * general window (RER ≥ 0.3) costs exactly the slow dipolar liquids these polymers are dissolved in (triethyl phosphate,
+     * DMSO: 2.5–3 points each) — it put blends of a ketone with ethanol, a PVDF non-solvent, first. {@code --process} names
+     * a use when evaporation at room temperature does matter.
+     */
+    public static ProcessUse defaultFor(Material target) {
+        return target != null && target.semicrystalline() ? ANY : GENERAL;
     }
 
     /** Parses the user's word; {@code asOriginalAllowed} is false where there is no original (blend). */

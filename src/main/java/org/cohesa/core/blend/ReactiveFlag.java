@@ -84,7 +84,27 @@ public enum ReactiveFlag {
         return out;
     }
 
-    /** "acid", "amine", "nitro", "peroxide", "dicarbonyl", "enone" or "all". */
+    /**
+     * The chemical reactivity a substitute would bring that the replaced solvent does not have: every flag but
+     * {@link #PEROXIDE} that the original does not carry. A substitute does the original's job in the same chemistry; a
+     * process run in an inert solvent (dichloromethane, toluene, NMP) was not designed for a solvent that protonates,
+     * adds or condenses with the reagents or the product (common practice in process chemistry, no source), and the CHEM21
+     * panel moved the reactive solvents it ranked one or two classes below their computed rank (Prat et al., Green Chem.
+     * 18 (2016) 288, Table 7: pyridine recommended → hazardous, triethylamine problematic → hazardous, nitromethane
+     * hazardous → highly hazardous). Peroxide formation is a storage hazard, not a reaction with the process, and stays a
+     * penalty ({@link HazardPenalty}). A reactive original (pyridine, acetic acid) keeps its own kind among the candidates.
+     */
+    public static java.util.Set<ReactiveFlag> newTo(Solvent original) {
+        java.util.Set<ReactiveFlag> out = java.util.EnumSet.noneOf(ReactiveFlag.class);
+        for (ReactiveFlag f : values()) {
+            if (f != PEROXIDE && !f.applies(original)) {
+                out.add(f);
+            }
+        }
+        return out;
+    }
+
+    /** "acid", "amine", "nitro", "peroxide", "dicarbonyl", "enone", "all" or "none" (an empty list). */
     public static List<ReactiveFlag> parse(String field, String text) {
         List<ReactiveFlag> out = new ArrayList<>();
         for (String p : text.split(",")) {
@@ -95,6 +115,9 @@ public enum ReactiveFlag {
             if (w.equals("all")) {
                 return List.of(values());
             }
+            if (w.equals("none")) {
+                continue;
+            }
             ReactiveFlag f = switch (w) {
                 case "acid", "acids", "carboxylic-acid" -> ACID;
                 case "amine", "amines", "base" -> AMINE;
@@ -102,7 +125,7 @@ public enum ReactiveFlag {
                 case "peroxide", "peroxides", "peroxide-former" -> PEROXIDE;
                 case "dicarbonyl", "active-methylene", "keto-ester" -> ACTIVE_METHYLENE;
                 case "enone", "michael-acceptor", "unsaturated-carbonyl" -> MICHAEL_ACCEPTOR;
-                default -> throw new InvalidInputException(field, p.strip(), "choose from acid, amine, nitro, peroxide, dicarbonyl, enone, all");
+                default -> throw new InvalidInputException(field, p.strip(), "choose from acid, amine, nitro, peroxide, dicarbonyl, enone, all, none");
             };
             if (!out.contains(f)) {
                 out.add(f);

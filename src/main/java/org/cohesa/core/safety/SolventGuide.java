@@ -37,8 +37,11 @@ import org.cohesa.core.solvent.Solvent;
  *   Plus 1 when the boiling point is below 85 °C. Our own placements (not in the recalled table): H334 → 4,
  *   H362 → 6, the GHS-only H303/H305/H313/H316/H320/H333 → 2.</li>
  * <li><b>Environment</b> (from memory): boiling point 70–139 °C → 3; 50–69 or 140–200 °C → 5; &lt; 50 or
- *   &gt; 200 °C → 7; H412/H413 → at least 5; H400/H410/H411 and H420 (ozone) → 7. The paper's REACH
- *   registration criterion is not applied (no data); without a boiling point we assume 5 (our choice). Water scores 1 in all three (as in the paper).</li>
+ *   &gt; 200 °C → 7; H412/H413 → at least 5; H400/H410/H411 and H420 (ozone) → 7. Without a boiling point we assume 5
+ *   (our choice). Water scores 1 in all three (as in the paper).</li>
+ * <li><b>No registered data</b> (the paper's "n.a.", Table 8: γ-valerolactone, diethyl succinate, p-cymene): health 5 and
+ *   environment at least 5. Registration itself is not in our library; we apply the default to a solvent whose hazard list
+ *   is recalled from memory or not recorded ({@link HazardListBasis}), since nothing published was checked for it.</li>
  * <li><b>Ranking</b> (from memory): any score ≥ 8, or two scores ≥ 7 → hazardous; one score of 7, or two
  *   scores of 4–6 → problematic; otherwise recommended. This is the paper's "ranking by default"; the
  *   paper then revised some solvents after discussion (e.g. methanol and acetone to recommended), which a
@@ -74,6 +77,18 @@ public final class SolventGuide {
     }
 
     private static final String WATER_CAS = "7732-18-5";
+
+    /**
+     * Health score the paper gives a solvent without registered hazard data ("n.a."; Table 8: γ-valerolactone, diethyl
+     * succinate, p-cymene), here also a solvent whose list is recalled or not recorded ({@link HazardListBasis}).
+     */
+    static final int NOT_REGISTERED_HEALTH = 5;
+
+    /**
+     * Least environment score of such a solvent: an "n.a." H4xx column scores like H412, 5 (the rule that reproduces the printed
+     * Table 8 scores; no printed row tells it apart from the boiling-point score: p-cymene, 177 °C, 5; the two esters, above 200 °C, 7).
+     */
+    static final int NOT_REGISTERED_ENVIRONMENT = 5;
     private static final Set<String> STATIC_ACCUMULATING_FAMILIES = Set.of("aliphatic", "aromatic", "terpene");
 
     /**
@@ -131,6 +146,15 @@ public final class SolventGuide {
         int safety = safety(s, notes);
         int health = health(s, notes);
         int environment = environment(s, notes);
+        HazardListBasis basis = HazardListBasis.of(s);
+        if (basis.mayBeIncomplete() && (health < NOT_REGISTERED_HEALTH || environment < NOT_REGISTERED_ENVIRONMENT)) {
+            // the paper's default for a solvent without registered hazard data ("n.a." in Tables 7-8: health 5,
+            // environment at least 5; Table 8 scores γ-valerolactone, diethyl succinate and p-cymene so)
+            health = Math.max(health, NOT_REGISTERED_HEALTH);
+            environment = Math.max(environment, NOT_REGISTERED_ENVIRONMENT);
+            notes.add((basis == HazardListBasis.RECALLED ? "hazard statements recalled, not checked" : "hazard statements not recorded")
+                    + ": health and environment scores at least 5, the paper's default for a solvent without registered data");
+        }
         return new Scores(safety, health, environment, rank(safety, health, environment), notes, false);
     }
 

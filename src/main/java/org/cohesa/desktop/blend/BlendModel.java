@@ -107,6 +107,13 @@ public final class BlendModel {
             compared.clear();
             searchNote.set("");
             leftOutBySafety.clear();
+            // as `cohesa blend`: a semicrystalline polymer is dissolved hot and dried hot or coagulated, so no evaporation
+            // window by default (ProcessUse.defaultFor); a use the user chose, and a replacement case's "as the replaced
+            // liquid", stay
+            String replacing = session.replacingProperty().get();
+            if (t != null && (replacing == null || replacing.isBlank()) && process.get() == defaultUse(a)) {
+                process.set(defaultUse(t));
+            }
         });
         session.jobs().runningProperty().addListener((o, a, running) -> {
             if (!running && cancel != null) {
@@ -273,7 +280,7 @@ public final class BlendModel {
         Set<SoluteCharacter> character = soluteCharacter();
         double kelvin = number("temperature", temperatureC.get(), 25.0) + 273.15;
         List<String> waterRules = new ArrayList<>();
-        BlendConstraints c = waterRules(lib, forSolute(constraints(lib), character), kelvin, waterRules);
+        BlendConstraints c = reactivityRule(lib, waterRules(lib, forSolute(constraints(lib), character), kelvin, waterRules), waterRules);
         int k = maxComponents.get();
         if (c.fixed().size() >= k) {
             throw new InvalidInputException("most components", String.valueOf(k), "must exceed the number of fixed components");
@@ -407,6 +414,30 @@ public final class BlendModel {
             }
         }
         return out;
+    }
+
+    /**
+     * The command line's reactivity rule for a replacement, from the same core code ({@link ReactiveFlag#newTo}): a case that
+     * replaces a liquid under "as the replaced liquid" leaves out candidates with a reactivity that liquid lacks (an acid, a
+     * base, a nitroalkane, an active methylene, a Michael acceptor), unless a reactive box is ticked (then those boxes decide).
+     */
+    BlendConstraints reactivityRule(SolventLibrary lib, BlendConstraints c, List<String> notes) {
+        Solvent original = process.get() == org.cohesa.core.blend.ProcessUse.AS_ORIGINAL ? replacedMainComponent(lib) : null;
+        if (original == null || !c.more().excludeReactive().isEmpty()) {
+            return c;
+        }
+        Set<ReactiveFlag> flags = ReactiveFlag.newTo(original);
+        if (flags.isEmpty()) {
+            return c;
+        }
+        notes.add("reactivity as the replaced liquid: " + original.name() + " is no " + flags.stream().map(ReactiveFlag::label)
+                .collect(java.util.stream.Collectors.joining(", ")) + ", so no candidate is (ticked reactive boxes decide instead; another Leaves the process use drops this)");
+        return c.with(c.more().withReactive(flags));
+    }
+
+    /** The default process use for a target, as `cohesa blend` takes it ({@link org.cohesa.core.blend.ProcessUse#defaultFor}). */
+    private org.cohesa.core.blend.ProcessUse defaultUse(TargetChoice t) {
+        return org.cohesa.core.blend.ProcessUse.defaultFor(t == null ? null : TargetStructure.materialOf(t, List.copyOf(session.materials())));
     }
 
     /** The two-phase test: published mutual solubilities with water first, the activity model elsewhere (as the command line). */

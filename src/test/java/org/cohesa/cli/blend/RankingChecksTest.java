@@ -64,6 +64,8 @@ class RankingChecksTest {
 
     /** As replace does around the original: Ra ≤ the radius qualifies (RED 1.0). */
     static BlendDesigner.Result replaceAround(Solvent original, BlendConstraints c) {
+        // replace's reactivity rule: no reactivity the original lacks (ReactiveFlag.newTo)
+        c = c.with(c.more().withReactive(org.cohesa.core.blend.ReactiveFlag.newTo(original)));
         return design(new SolubilitySphere(original.hansen(), ReplaceCommand.DEFAULT_RADIUS), c, ReplaceCommand.defaultWeights(original),
                 ReplaceCommand.CENTRED_RED_LIMIT);
     }
@@ -74,7 +76,9 @@ class RankingChecksTest {
     }
 
     private static synchronized BlendDesigner.Result forMaterial(Material m) {
-        return DEFAULT_RESULTS.computeIfAbsent(m.name(), k -> design(m.sphere(), defaults(List.of(), null)));
+        // the command line's default process use for this material (general; any for a semicrystalline polymer)
+        return DEFAULT_RESULTS.computeIfAbsent(m.name(), k -> design(m.sphere(), defaults(List.of(), null),
+                Desirability.DEFAULT.withProcess(org.cohesa.core.blend.ProcessUse.defaultFor(m), null)));
     }
 
     private static List<Solvent> solvents(BlendSuggestion s) {
@@ -251,5 +255,52 @@ class RankingChecksTest {
             }
         }
         assertEquals(2, HazardLimit.level("reprotoxic", BundledLiquids.get("N-methyl-2-pyrrolidone")), "H360D: category 1B (GHS)");
+    }
+
+    /**
+     * Replacing dichloromethane: 2-MeTHF (the published replacement inside Ra 4; CHEM21, ACS GCI, see PUBLISHED) must be among
+     * the first three, and the α,β-unsaturated ketone mesityl oxide must not be offered at all (replace brings no reactivity the
+     * original lacks, ReactiveFlag.newTo). Before: tetrahydropyran (hazard list recalled, H225 alone), anisole, mesityl oxide,
+     * 2-MeTHF fourth. Tetrahydropyran may lead on its checked list (H225 H315 H319 H335): it is published as a biomass-derived
+     * alternative to THF, 2-MeTHF and CPME (Green Chem. 2022, doi:10.1039/D2GC03475A, abstract read from a stored copy).
+     */
+    @Test
+    void dichloromethaneIsReplacedByThePublishedEtherAmongTheFirstThreeAndNeverByAnEnone() {
+        Solvent dcm = BundledLiquids.get("dichloromethane");
+        // as replace does, also with water as the original: dichloromethane separates from water, so must every suggestion
+        org.cohesa.core.solvent.SolventLibrary lib = new org.cohesa.core.solvent.SolventLibrary(library);
+        assertEquals(org.cohesa.core.activity.WaterBehaviour.Kind.IMMISCIBLE, BlendOptions.waterBehaviour(lib, dcm, 298.15).kind());
+        BlendConstraints c = defaults(HazardLimit.defaults(dcm), dcm);
+        c = c.with(c.more().withWater(org.cohesa.core.blend.WaterCheck.Need.IMMISCIBLE).withReactive(org.cohesa.core.blend.ReactiveFlag.newTo(dcm)));
+        BlendDesigner.Request req = new BlendDesigner.Request(new SolubilitySphere(dcm.hansen(), ReplaceCommand.DEFAULT_RADIUS), c, 3, 10,
+                RankBy.DESIRABILITY, ReplaceCommand.CENTRED_RED_LIMIT, false, 298.15, ReplaceCommand.defaultWeights(dcm));
+        List<String> firsts = new ArrayList<>();
+        for (BlendSuggestion s : BlendDesigner.design(library, req, PhaseChecks.miscibility(), BlendOptions.waterCheck(lib, c), null, null).suggestions()) {
+            firsts.add(String.join("+", solvents(s).stream().map(Solvent::name).toList()));
+        }
+        int meThf = firsts.indexOf("2-methyltetrahydrofuran");
+        assertTrue(meThf >= 0 && meThf < 3, "2-MeTHF among the first three: " + firsts);
+        assertFalse(firsts.stream().anyMatch(n -> n.contains("mesityl oxide")), firsts.toString());
+    }
+
+    /**
+     * PVDF for an electrode slurry or a membrane dope: the solvents of the trade are NMP, DMAc, DMF, DMSO and triethyl phosphate,
+     * with Cyrene and γ-valerolactone as published greener options (the review of Marshall et al., "On the solubility and
+     * stability of polyvinylidene fluoride", Polymers 13 (2021) 1354, a stored copy of its opening read, the list from memory).
+     * With the safety defaults (no CMR: NMP, DMAc, DMF left out) each of the first three must hold one of the others, and no
+     * suggestion in the first five may pair a liquid with ethanol, a PVDF non-solvent (membranes are coagulated in it; common
+     * practice, no source) — before the semicrystalline default process use, cyclopentanone + ethanol led.
+     */
+    @Test
+    void pvdfStartsWithItsPublishedSolventsAndNoAlcoholBoostedBlend() {
+        Material pvdf = materials.stream().filter(m -> m.name().startsWith("poly(vinylidene fluoride)")).findFirst().orElseThrow();
+        List<BlendSuggestion> top = forMaterial(pvdf).suggestions();
+        List<String> published = List.of("triethyl phosphate", "dimethyl sulfoxide", "Cyrene", "gamma-valerolactone");
+        for (BlendSuggestion s : top.subList(0, 3)) {
+            assertTrue(solvents(s).stream().anyMatch(v -> published.contains(v.name())), s.blend().blend().describe());
+        }
+        for (BlendSuggestion s : top.subList(0, 5)) {
+            assertFalse(solvents(s).stream().anyMatch(v -> v.name().equals("ethanol")), s.blend().blend().describe());
+        }
     }
 }

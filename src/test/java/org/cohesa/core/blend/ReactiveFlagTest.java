@@ -64,4 +64,45 @@ class ReactiveFlagTest {
         assertTrue(p.terms().stream().anyMatch(t -> t.startsWith("reactive: 1,3-dicarbonyl")), p.terms().toString());
         assertEquals(List.of(ReactiveFlag.ACTIVE_METHYLENE), ReactiveFlag.parse("--exclude-reactive", "dicarbonyl"));
     }
+
+    /**
+     * The reactive term weighs 2, as much as a Category 2 flammability: the CHEM21 panel moved the reactive solvents its
+     * computed ranking placed too well one or two classes down (Prat et al., Green Chem. 18 (2016) 288, Table 7: pyridine
+     * recommended → hazardous, triethylamine problematic → hazardous, nitromethane hazardous → highly hazardous; 2.5, 1.5
+     * and 1.5 points at the full weight of a guide term). The published rows are read from chem21-ranks.csv.
+     */
+    @Test
+    void theReactiveWeightFollowsTheChem21PanelsMovesForReactiveSolvents() {
+        double moved = 0;
+        int n = 0;
+        for (String cas : List.of("110-86-1", "121-44-8", "75-52-5")) {
+            org.cohesa.core.safety.SolventGuide.Published row = org.cohesa.core.safety.SolventGuide.published(cas).orElseThrow();
+            assertTrue(guidePoints(row.finalRank()) > guidePoints(row.defaultRank()), row.name());
+            moved += 2 * (guidePoints(row.finalRank()) - guidePoints(row.defaultRank()));
+            n++;
+        }
+        assertEquals(HazardPenalty.REACTIVE, Math.rint(moved / n), 1e-9, "mean full-weight move " + moved / n);
+        assertTrue(HazardPenalty.of(lib.resolve("name", "mesityl oxide")).terms().contains("reactive: α,β-unsaturated carbonyl (Michael acceptor) 2"));
+    }
+
+    private static double guidePoints(org.cohesa.core.safety.GuideRank r) {
+        // HazardPenalty's guide term (half weight): recommended 0, problematic 0.5, hazardous 1.25, highly hazardous 2
+        return switch (r) {
+            case RECOMMENDED -> 0;
+            case PROBLEMATIC -> 0.5;
+            case HAZARDOUS -> 1.25;
+            case HIGHLY_HAZARDOUS -> 2;
+        };
+    }
+
+    @Test
+    void aSubstituteBringsNoReactivityTheOriginalLacks() {
+        // an inert original: every reactivity but peroxide formation (a storage hazard, kept as a penalty) is new to it
+        java.util.Set<ReactiveFlag> newToDcm = ReactiveFlag.newTo(lib.resolve("name", "dichloromethane"));
+        assertEquals(java.util.EnumSet.complementOf(java.util.EnumSet.of(ReactiveFlag.PEROXIDE)), newToDcm);
+        // a reactive original keeps its own kind: pyridine may be replaced by another base
+        assertFalse(ReactiveFlag.newTo(lib.resolve("name", "pyridine")).contains(ReactiveFlag.AMINE));
+        assertTrue(ReactiveFlag.newTo(lib.resolve("name", "pyridine")).contains(ReactiveFlag.MICHAEL_ACCEPTOR));
+        assertEquals(List.of(), ReactiveFlag.parse("--exclude-reactive", "none"));
+    }
 }

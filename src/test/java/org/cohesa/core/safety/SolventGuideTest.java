@@ -1,5 +1,7 @@
 package org.cohesa.core.safety;
 
+import java.util.List;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.cohesa.core.solvent.Solvent;
@@ -116,6 +118,52 @@ class SolventGuideTest {
         assertEquals(3, a.health());
         assertEquals(5, a.environment());
         assertEquals(GuideRank.PROBLEMATIC, a.rank());
+    }
+
+    /**
+     * Prat et al. 2016 Table 8 (as transcribed, see chem21-ranks.csv): a solvent without registered hazard data ("n.a." in the H3xx
+     * and H4xx columns) scores health 5 and environment at least 5 — γ-valerolactone (bp 207 °C, fp 100 °C) 1/5/7, diethyl
+     * succinate (218, 91) 1/5/7, p-cymene (177, 27, a hydrocarbon) 4/5/5, all problematic — while glycerol (290, 177), "None" after
+     * full registration, scores 1/1/7. A list the library does not record, or recalls without a checked source, is treated as the
+     * paper treats "n.a.".
+     */
+    @ParameterizedTest(name = "{0}: {5}/{6}/{7} {8}")
+    @CsvSource(delimiter = ';', textBlock = """
+            gamma-valerolactone; 0-00-11; ester;    207; 100; 1; 5; 7; problematic
+            diethyl succinate;   0-00-12; ester;    218;  91; 1; 5; 7; problematic
+            p-cymene;            0-00-13; aromatic; 177;  27; 4; 5; 5; problematic
+            """)
+    void aSolventWithoutRegisteredDataScoresAsTable8Does(String name, String cas, String family, double bp, double fp, int safety, int health,
+            int environment, String rank) {
+        // unknown CAS numbers, so the computation runs instead of the published row; no statements and no source: not recorded
+        Solvent s = TestSolvents.guideInput(name, cas, family, bp, fp, null, false, "");
+        assertEquals(HazardListBasis.NOT_RECORDED, HazardListBasis.of(s));
+        SolventGuide.Scores c = SolventGuide.computed(s);
+        assertEquals(List.of(safety, health, environment, rank), List.of(c.safety(), c.health(), c.environment(), c.rank().label()), c.toString());
+        // the same list recalled from memory (a memory-… key) is not checked either: the same scores
+        Solvent recalled = withHazardSource(s, "memory-supplier-classification");
+        assertEquals(HazardListBasis.RECALLED, HazardListBasis.of(recalled));
+        assertEquals(c.health(), SolventGuide.computed(recalled).health());
+    }
+
+    @Test
+    void aCheckedListWithoutStatementsScoresAsGlycerolDoes() {
+        // Table 8: glycerol, no H statement after full REACH registration ("None"): safety 1, health 1, environment 7 (bp 290 °C)
+        Solvent glycerolLike = withHazardSource(TestSolvents.guideInput("test polyol", "0-00-14", "alcohol", 290.0, 177.0, null, false, ""), "icsc");
+        assertEquals(HazardListBasis.CHECKED, HazardListBasis.of(glycerolLike));
+        SolventGuide.Scores c = SolventGuide.computed(glycerolLike);
+        assertEquals(List.of(1, 1, 7), List.of(c.safety(), c.health(), c.environment()));
+        // a recalled list with statements keeps them where they score higher (H351: 6, above the default 5)
+        Solvent suspect = withHazardSource(TestSolvents.guideInput("test ether", "0-00-15", "ether", 120.0, 30.0, null, false, "H226 H351"),
+                "memory-supplier-classification");
+        assertEquals(6, SolventGuide.computed(suspect).health());
+    }
+
+    static Solvent withHazardSource(Solvent s, String key) {
+        return new Solvent(s.name(), s.synonyms(), s.cas(), s.formula(), s.smiles(), s.family(), s.families(), s.molarMass(), s.density(),
+                s.molarVolume(), s.hansen(), s.boilingPointC(), s.meltingPointC(), s.fire(), s.vapourPressure(), s.hvapKjPerMol(), s.exposure(),
+                s.hazardStatements(), s.peroxideFormer(), s.ichClass(), s.unifac(), s.pricePerLitre(), java.util.Map.of("hazard_statements", key),
+                s.note(), s.userEntry());
     }
 
     @Test
