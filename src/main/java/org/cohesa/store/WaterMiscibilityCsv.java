@@ -24,7 +24,8 @@ import org.cohesa.core.activity.WaterSolubilityTable;
  * Reads {@code solvent-db/water-miscibility.csv}, the published mutual solubilities of solvents with water. Columns:
  * name, cas, behaviour ({@code miscible} or {@code partial}), solvent_in_water_wt_pct, water_in_solvent_wt_pct (mass %,
  * empty when miscible), temperature_c, lcst_c, ucst_c (°C, empty when none is published), source (key cited in
- * docs/methods.md), basis ("from memory" or "checked against the source"), note. All-or-nothing: every bad cell is listed.
+ * docs/methods.md), basis ("from memory", "checked against the source", "checked against a handbook" or "checked against a
+ * tertiary source"), note. All-or-nothing: every bad cell is listed.
  */
 public final class WaterMiscibilityCsv {
 
