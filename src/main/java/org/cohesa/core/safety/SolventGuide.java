@@ -31,9 +31,12 @@ import org.cohesa.core.solvent.Solvent;
  *   (EUH019). The paper's further +1 for a decomposition energy &gt; 500 J/g is not applied (no data).
  *   Resistivity is not in our library: hydrocarbons (families aliphatic, aromatic, terpene) get the point,
  *   as their resistivities lie far above 10⁸ Ω·m (from memory); other liquids do not.</li>
- * <li><b>Health</b> (from memory): the most severe H3xx statement sets the score — 2 for H304, H302, H312,
- *   H332, H336, EUH070, H315, H317, H319, H335, EUH066; 4 for H371, H373, H318; 6 for H341, H351, H361,
- *   H370, H372, H301, H311, H331, H314; 7 for H300, H310, H330; 9 for H340, H350, H360. No H3xx statement: 1.
+ * <li><b>Health</b> (the paper's Table 4 as transcribed in the repository the published rows come from,
+ *   unilker/NMRSolvents {@code tool/check_chem21.py}, whose rule check reproduces every printed score; before, from memory):
+ *   the most severe H3xx statement sets the score — 2 for H304, H371, H373, H302, H312, H332, H336, EUH070, H315, H317,
+ *   H319, H335, EUH066; 4 for H318, H334; 6 for H341, H351, H361, H370, H372, H301, H311, H331; 7 for H314 (Table 7 prints
+ *   health 7 for acetic acid, formic acid and acetic anhydride, whose worst statement is H314); 9 for H300, H310, H330, H340,
+ *   H350, H360. No H3xx statement: 1.
  *   Plus 1 when the boiling point is below 85 °C. Our own placements (not in the recalled table): H334 → 4,
  *   H362 → 6, the GHS-only H303/H305/H313/H316/H320/H333 → 2.</li>
  * <li><b>Environment</b> (from memory): boiling point 70–139 °C → 3; 50–69 or 140–200 °C → 5; &lt; 50 or
@@ -260,10 +263,11 @@ public final class SolventGuide {
         String f = HazardStatements.family(code);
         return switch (f) {
             case "H340", "H350", "H360" -> 9;
-            case "H300", "H310", "H330" -> 7;
-            case "H341", "H351", "H361", "H362", "H370", "H372", "H301", "H311", "H331", "H314" -> 6;
-            case "H371", "H373", "H318", "H334" -> 4;
-            case "H302", "H303", "H304", "H305", "H312", "H313", "H315", "H316", "H317", "H319", "H320",
+            case "H300", "H310", "H330" -> 9;
+            case "H314" -> 7;
+            case "H341", "H351", "H361", "H362", "H370", "H372", "H301", "H311", "H331" -> 6;
+            case "H318", "H334" -> 4;
+            case "H371", "H373", "H302", "H303", "H304", "H305", "H312", "H313", "H315", "H316", "H317", "H319", "H320",
                     "H332", "H333", "H335", "H336", "EUH070", "EUH066" -> 2;
             default -> 1;
         };

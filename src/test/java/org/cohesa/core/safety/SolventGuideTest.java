@@ -167,6 +167,20 @@ class SolventGuideTest {
     }
 
     @Test
+    void corrosiveScoresHealthSevenAsTable7PrintsForTheAcids() {
+        // Prat 2016 Table 7: acetic acid (bp 118, fp 39, worst H314) 3/7/3, formic acid (101, 49, H314) 3/7/3 — the health 7
+        // of H314 in Table 4 (as transcribed with the tables, chem21-ranks.csv); it was 6 in the recalled table
+        Solvent acetic = TestSolvents.guideInput("test acid", "0-00-16", "acid", 118.0, 39.0, null, false, "H226 H314");
+        SolventGuide.Scores c = SolventGuide.computed(acetic);
+        SolventGuide.Published printed = SolventGuide.published("64-19-7").orElseThrow();
+        assertEquals(List.of(printed.safety(), printed.health(), printed.environment()), List.of(c.safety(), c.health(), c.environment()));
+        assertEquals(7, printed.health());
+        // Table 4: H371/H373 score 2 like the irritants, H300/H310/H330 9 like category-1 CMR
+        assertEquals(2, SolventGuide.healthPoints("H373"));
+        assertEquals(9, SolventGuide.healthPoints("H330"));
+    }
+
+    @Test
     void rankingRuleCombinations() {
         // Prat 2016 combination rule (from memory): one score ≥ 8 or two ≥ 7 → hazardous; one 7 or two 4–6 → problematic
         assertEquals(GuideRank.HAZARDOUS, SolventGuide.rank(8, 1, 1));
