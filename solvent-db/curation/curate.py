@@ -725,9 +725,18 @@ ESTIMATE_KEY = "estimate-structure-groups"
 COMPONENTS = (("dD", "δD"), ("dP", "δP"), ("dH", "δH"))
 
 
-def route_name(route):
+DIPOLE_ROUTE = "dipole moment (Hansen–Beerbower)"
+
+
+def route_name(route, e=None):
     """'group contribution (mean of Mathieu 2018 and …)' -> 'the mean of Mathieu 2018 and …'; one method alone is
-    named with 'alone' (StructureEstimator's route strings)."""
+    named with 'alone' (StructureEstimator's route strings); δP from a measured dipole moment (the property route,
+    Hansen–Beerbower) names the dipole moment and the density with their source keys (row e of estimated-hsp.csv)."""
+    if route == DIPOLE_ROUTE:
+        if not (e and e["dipole_debye"] and e["src_dipole"] and e["density"] and e["src_density"]):
+            raise SystemExit(f"estimated-hsp.csv: {e and e['cas']}: δP from a dipole moment without the dipole and density with their keys")
+        return (f"from the dipole moment {e['dipole_debye']} D ({e['src_dipole']}) and the molar volume M/ρ "
+                f"(density {e['density']} g/cm³, {e['src_density']}) by Hansen–Beerbower, δP = 37.4·μ/√V")
     prefix = "group contribution ("
     if not (route.startswith(prefix) and route.endswith(")")):
         raise SystemExit(f"estimated-hsp.csv: route {route!r} is not a group route")
@@ -738,14 +747,18 @@ def route_name(route):
 def estimate_note(e, isomer):
     """The note of a bundled estimated set: the route of each component and that case's expected error (mean absolute
     error and 90th percentile on the published table, docs/methods.md), and the cautions that bear on the set."""
-    routes = [route_name(e["route_" + c]) for c, _ in COMPONENTS]
+    routes = [route_name(e["route_" + c], e) for c, _ in COMPONENTS]
     if len(set(routes)) == 1:
         how = f"δD, δP and δH each {routes[0]}"
     else:
         how = "; ".join(f"{sym} {r}" for (_, sym), r in zip(COMPONENTS, routes))
     errors = ", ".join(f"{sym} {e['mae_' + c]} (P90 {e['p90_' + c]})" for c, sym in COMPONENTS)
     caution = f"; {e['caution']}" if e["caution"] else ""
-    return (f"Hansen parameters estimated from the structure{isomer} (group contribution, default route: {how}; expected "
+    if DIPOLE_ROUTE in (e["route_" + c] for c, _ in COMPONENTS):
+        what = f"{isomer} and its measured dipole moment (group contribution, default route, with δP by the property route: "
+    else:
+        what = f"{isomer} (group contribution, default route: "
+    return (f"Hansen parameters estimated from the structure{what}{how}; expected "
             f"error of each component's route, mean absolute and 90th percentile on the published table: {errors} "
             f"MPa½{caution}); no published value found; confirm by a solubility test")
 
@@ -753,7 +766,8 @@ def estimate_note(e, isomer):
 def apply_structure_estimates(rows):
     """Fills the Hansen columns of solvents without a published set from curation/estimated-hsp.csv (generated from
     each SMILES by LibraryEstimatesTest with the default group route of StructureEstimator: per component the mean of
-    Mathieu 2018 and Stefanis–Panayiotou where both cover it, else the one that does) under the source key
+    Mathieu 2018 and Stefanis–Panayiotou where both cover it, else the one that does; δP from the Poling dipole moment
+    by Hansen–Beerbower where Poling lists the solvent, as a user's solvent added with --dipole) under the source key
     estimate-structure-groups, the key a user's solvent added by SMILES gets. A published or recalled set always wins;
     a solvent the methods cannot cover, or a mixture without a single structure, keeps empty Hansen columns and its
     note says why."""

@@ -181,6 +181,26 @@ final class HansenValidation {
                 double dd = PropertyRoute.dispersionFromRefractiveIndex(n, vm);
                 double dp = PropertyRoute.polarFromDipole(mu, vm);
                 v.of("property δH").add(family, PropertyRoute.hydrogenBondingRemainder(dt, dd, dp) - pub[2]);
+                if (est.dH() != null) {
+                    v.of("like for like δH group").add(family, est.dH().value() - pub[2]);
+                    v.of("like for like δH property").add(family, PropertyRoute.hydrogenBondingRemainder(dt, dd, dp) - pub[2]);
+                }
+            }
+            // like for like: the default group route and the property route on the same compounds (those with the
+            // measured property and a group value), which decides the route of the bundled estimated sets
+            if (n != null && est.dD() != null) {
+                double prop = PropertyRoute.dispersionFromRefractiveIndex(n, vm);
+                for (String set : new String[] {"like for like", half}) {
+                    v.of(set + " δD group").add(family, est.dD().value() - pub[0]);
+                    v.of(set + " δD property").add(family, prop - pub[0]);
+                }
+            }
+            if (mu != null && est.dP() != null) {
+                double prop = PropertyRoute.polarFromDipole(mu, vm);
+                for (String set : new String[] {"like for like", half}) {
+                    v.of(set + " δP group").add(family, est.dP().value() - pub[1]);
+                    v.of(set + " δP property").add(family, prop - pub[1]);
+                }
             }
             if (h != null) {
                 double pubTotal = Math.sqrt(pub[0] * pub[0] + pub[1] * pub[1] + pub[2] * pub[2]);
