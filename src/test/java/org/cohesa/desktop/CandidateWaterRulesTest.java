@@ -6,11 +6,14 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
 import java.util.List;
+import javafx.scene.control.CheckBox;
+import javafx.scene.control.Label;
 import javafx.stage.Stage;
 import org.cohesa.cli.CliTestSupport;
 import org.cohesa.core.activity.WaterBehaviour;
 import org.cohesa.core.activity.WaterMiscibility;
 import org.cohesa.core.blend.ProcessUse;
+import org.cohesa.core.blend.ReactiveFlag;
 import org.cohesa.core.hsp.SolubilitySphere;
 import org.cohesa.core.solvent.BlendComponent;
 import org.cohesa.core.solvent.Solvent;
@@ -27,7 +30,8 @@ import org.testfx.framework.junit5.Start;
 /**
  * The candidates follow the command line's water rules (issue 11), from the same core code: no water in the solution of
  * a polymer water does not dissolve (PVDF: `cohesa blend --material PVDF` gives the same list), and a case that replaces
- * dichloromethane asks every candidate to separate from water as dichloromethane does (as `cohesa replace` does).
+ * dichloromethane asks every candidate to separate from water as dichloromethane does (as `cohesa replace` does); and such a
+ * case leaves out every reactivity the replaced liquid lacks unless its switch is off (`cohesa replace --exclude-reactive none`).
  */
 @ExtendWith(ApplicationExtension.class)
 class CandidateWaterRulesTest {
@@ -99,5 +103,81 @@ class CandidateWaterRulesTest {
         // 1,3-dioxolane mixes with water (it led the list before the rule): not a candidate here
         assertTrue(DesktopFixture.names(rows).stream().noneMatch(n -> n.contains("1,3-dioxolane")), DesktopFixture.names(rows).toString());
         robot.interact(() -> fx.session.replacingProperty().set(""));
+    }
+
+    @Test
+    void aReplacementCaseLeavesOutReactivityTheLiquidLacksUnlessSwitchedOff(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        // NMP: water-miscible, so the water rule keeps miscible candidates, among them pyridine (a base) near its parameters
+        Solvent nmp = fx.session.solvents().stream().filter(s -> s.name().equals("N-methyl-2-pyrrolidone")).findFirst().orElseThrow();
+        BlendModel m = fx.workbench.blendModel();
+        CheckBox rule = robot.lookup("#blend-reactive-as-replaced").queryAs(CheckBox.class);
+        Label ruleNow = robot.lookup("#blend-reactive-rule").queryAs(Label.class);
+        assertFalse(rule.isVisible(), "no replacement, no switch");
+        robot.interact(() -> {
+            fx.session.replacingProperty().set(nmp.name());
+            fx.session.targetProperty().set(new TargetChoice("around NMP", SolubilitySphere.of(nmp.hansen().dD(),
+                    nmp.hansen().dP(), nmp.hansen().dH(), 6), "typed in"));
+        });
+        // NMP is no acid, base, nitroalkane, 1,3-dicarbonyl or enone (its structure, a lactam: CN1CCCC1=O; common practice, no source)
+        java.util.Set<ReactiveFlag> lacked = ReactiveFlag.newTo(nmp);
+        assertEquals(java.util.EnumSet.of(ReactiveFlag.ACID, ReactiveFlag.AMINE, ReactiveFlag.NITRO, ReactiveFlag.ACTIVE_METHYLENE,
+                ReactiveFlag.MICHAEL_ACCEPTOR), lacked);
+        assertTrue(rule.isVisible() && rule.isSelected() && !rule.isDisabled(), "on by default in a replacement case, as `cohesa replace`");
+        assertTrue(ruleNow.getText().startsWith(nmp.name() + " is no carboxylic acid"), ruleNow.getText());
+        // every single liquid that qualifies (the top 100 holds them all), so the two lists differ by the rule alone
+        Runnable form = () -> {
+            m.maxComponents.set(1);
+            m.top.set(100);
+        };
+        List<BlendModel.Row> on = fx.searchCandidates(robot, form);
+        assertFalse(on.isEmpty());
+        assertTrue(on.stream().flatMap(r -> r.blend().components().stream()).noneMatch(c -> lacked.stream().anyMatch(f -> f.applies(c.solvent()))),
+                DesktopFixture.names(on).toString());
+        assertTrue(m.leftOutBySafety().stream().anyMatch(l -> l.startsWith("reactivity as the replaced liquid: " + nmp.name() + " is no")),
+                m.leftOutBySafety().toString());
+        assertEquals("true", m.limits().get("reactive-as-replaced"));
+
+        // switched off: the reactive ones come back (the check above can fail), and the note goes
+        robot.interact(() -> rule.setSelected(false));
+        assertTrue(ruleNow.getText().startsWith("Off:"), ruleNow.getText());
+        List<BlendModel.Row> off = fx.searchCandidates(robot, form);
+        java.util.function.Predicate<BlendModel.Row> reactive = r -> r.blend().components().stream()
+                .anyMatch(c -> lacked.stream().anyMatch(f -> f.applies(c.solvent())));
+        assertTrue(off.stream().anyMatch(reactive), "with the switch off a reactive candidate comes back: " + DesktopFixture.names(off));
+        java.util.Set<String> back = new java.util.TreeSet<>(DesktopFixture.names(off));
+        DesktopFixture.names(on).forEach(back::remove);
+        assertEquals(new java.util.TreeSet<>(DesktopFixture.names(off.stream().filter(reactive).toList())), back,
+                "the switch brings back exactly the reactive ones");
+        assertTrue(off.size() < 100, "every qualifying liquid was listed");
+        assertTrue(m.leftOutBySafety().stream().noneMatch(l -> l.startsWith("reactivity as the replaced liquid")), m.leftOutBySafety().toString());
+        var limits = m.limits();
+        assertEquals("false", limits.get("reactive-as-replaced"));
+        robot.interact(() -> {
+            m.reactiveAsReplaced.set(true);
+            m.applyLimits(limits);
+        });
+        assertFalse(m.reactiveAsReplaced.get(), "the switch round-trips through the map a case stores");
+
+        // a ticked kind decides instead (as --exclude-reactive FLAGS): the switch is greyed and only that kind stays out
+        robot.interact(() -> {
+            rule.setSelected(true);
+            robot.lookup("#blend-reactive-" + ReactiveFlag.MICHAEL_ACCEPTOR.word()).queryAs(CheckBox.class).setSelected(true);
+        });
+        assertTrue(rule.isDisabled(), "ticked boxes decide");
+        assertTrue(ruleNow.getText().startsWith("The ticked kinds decide"), ruleNow.getText());
+        List<BlendModel.Row> enone = fx.searchCandidates(robot, form);
+        assertTrue(enone.stream().flatMap(r -> r.blend().components().stream()).noneMatch(c -> ReactiveFlag.MICHAEL_ACCEPTOR.applies(c.solvent())));
+        assertTrue(m.leftOutBySafety().stream().noneMatch(l -> l.startsWith("reactivity as the replaced liquid")), m.leftOutBySafety().toString());
+        robot.interact(() -> robot.lookup("#blend-reactive-" + ReactiveFlag.MICHAEL_ACCEPTOR.word()).queryAs(CheckBox.class).setSelected(false));
+
+        // another process use drops the rule, as on the command line
+        robot.interact(() -> m.process.set(ProcessUse.GENERAL));
+        assertTrue(rule.isDisabled() && ruleNow.getText().startsWith("Applies only"), ruleNow.getText());
+        robot.interact(() -> {
+            m.process.set(ProcessUse.AS_ORIGINAL);
+            fx.session.replacingProperty().set("");
+        });
+        assertEquals("", m.limits().get("reactive-as-replaced"), "no replacement, no such limit");
     }
 }

@@ -273,10 +273,7 @@ public final class BlendOptions {
         if (!unl.equals("keep") && !unl.equals("leave-out")) {
             throw new InvalidInputException("--ich-unlisted", ichUnlisted, "write keep or leave-out");
         }
-        Set<ReactiveFlag> reactive = new LinkedHashSet<>();
-        for (String r : excludeReactive) {
-            reactive.addAll(ReactiveFlag.parse("--exclude-reactive", r));
-        }
+        Set<ReactiveFlag> reactive = java.util.Objects.requireNonNullElse(reactiveNamed(), Set.of());
         Double minBlendFlash = minBlendFlashPoint == null ? null : Args.number("--min-blend-flash-point", minBlendFlashPoint);
         Double[] bb = range("--blend-boiling-range", blendBoilingRange);
         BlendConstraints c = new BlendConstraints(base.include(), base.exclude(), base.families(), base.excludeFamilies(), base.fixed(),
@@ -302,6 +299,18 @@ public final class BlendOptions {
     /** True when the user named a water demand (any included), so replace does not add the original's own. */
     boolean waterDemandGiven() {
         return withWater != null;
+    }
+
+    /** The reactive flags --exclude-reactive names (empty for "none"), or null when it is not given (the default rule applies). */
+    Set<ReactiveFlag> reactiveNamed() {
+        if (excludeReactive.isEmpty()) {
+            return null;
+        }
+        Set<ReactiveFlag> out = new LinkedHashSet<>();
+        for (String r : excludeReactive) {
+            out.addAll(ReactiveFlag.parse("--exclude-reactive", r));
+        }
+        return out;
     }
 
     /** True when the process use is the original's (replace's default, or named). */

@@ -17,7 +17,7 @@ import org.cohesa.core.blend.BlendDesigner;
 import org.cohesa.core.blend.BlendSuggestion;
 import org.cohesa.core.blend.Desirability;
 import org.cohesa.core.blend.HazardLimit;
-import org.cohesa.core.blend.ReactiveFlag;
+import org.cohesa.core.blend.ReactiveExclusion;
 import org.cohesa.core.blend.WaterCheck;
 import org.cohesa.core.activity.WaterBehaviour;
 import org.cohesa.core.blend.ProcessUse;
@@ -143,16 +143,11 @@ public final class ReplaceCommand extends CohesaSubcommand {
         }
         // nor a reactivity the original lacks (an acid, a base, a nitroalkane, an active methylene or a Michael acceptor in
         // place of an inert solvent; docs/methods.md), unless --exclude-reactive says which to leave out
-        String reactivityAsOriginal = null;
-        if (options.excludeReactive.isEmpty() && options.processAsOriginal()) {
-            java.util.Set<ReactiveFlag> newFlags = ReactiveFlag.newTo(original);
-            if (!newFlags.isEmpty()) {
-                c = c.with(c.more().withReactive(newFlags));
-                reactivityAsOriginal = "reactivity as the original: " + original.name() + " is no " + newFlags.stream().map(ReactiveFlag::label)
-                        .collect(java.util.stream.Collectors.joining(", ")) + ", so no suggestion is (--exclude-reactive none keeps them, "
-                        + "--exclude-reactive FLAGS leaves out only those, --process another use drops this)";
-            }
-        }
+        ReactiveExclusion reactive = ReactiveExclusion.of(options.reactiveNamed(), options.processAsOriginal() ? original : null);
+        c = reactive.applyTo(c);
+        String reactivityAsOriginal = !reactive.fromReplaced() ? null : "reactivity as the original: " + reactive.lack()
+                + ", so no suggestion is (--exclude-reactive none keeps them, --exclude-reactive FLAGS leaves out only those, "
+                + "--process another use drops this)";
         options.checkPricesExist(lib);
         if (c.fixed().size() >= k) {
             throw new InvalidInputException("--max-components", String.valueOf(k), "must exceed the number of fixed components (" + c.fixed().size() + ")");

@@ -19,6 +19,7 @@ import org.cohesa.core.blend.CancellationToken;
 import org.cohesa.core.blend.MeasuredFirstPhaseCheck;
 import org.cohesa.core.blend.PhaseCheck;
 import org.cohesa.core.blend.RankBy;
+import org.cohesa.core.blend.ReactiveExclusion;
 import org.cohesa.core.blend.ReactiveFlag;
 import org.cohesa.core.blend.SoluteCharacter;
 import org.cohesa.core.blend.WaterCheck;
@@ -72,6 +73,11 @@ public final class BlendModel {
     public final StringProperty excludeFamilies = new SimpleStringProperty("");
     /** Process-suitability flags to leave out (reactive solvents). */
     public final java.util.Map<ReactiveFlag, BooleanProperty> excludeReactive = new java.util.EnumMap<>(ReactiveFlag.class);
+    /**
+     * In a case that replaces a liquid, under "as the replaced liquid" and with no reactive box ticked: leave out every
+     * reactivity the replaced liquid lacks (on by default, as `cohesa replace`; off is its {@code --exclude-reactive none}).
+     */
+    public final BooleanProperty reactiveAsReplaced = new SimpleBooleanProperty(true);
     /** How the blend must behave with water: {@link #WATER_ANY}, {@link #WATER_SEPARATES} or {@link #WATER_MIXES}. */
     public final ObjectProperty<String> withWater = new SimpleObjectProperty<>(WATER_ANY);
     /** Least computed flash point of the blend itself, °C (components may be lower). */
@@ -172,6 +178,8 @@ public final class BlendModel {
         m.put("with-water", withWater.get());
         m.put("exclude-reactive", excludeReactive.entrySet().stream().filter(e -> e.getValue().get()).map(e -> e.getKey().word())
                 .collect(java.util.stream.Collectors.joining(",")));
+        // only a case that replaces a liquid has the rule: elsewhere it is no limit at all
+        m.put("reactive-as-replaced", replacing() ? String.valueOf(reactiveAsReplaced.get()) : "");
         return m;
     }
 
@@ -218,6 +226,9 @@ public final class BlendModel {
         }
         if (m.get("allow-salt-formers") != null) {
             allowSaltFormers.set(Boolean.parseBoolean(m.get("allow-salt-formers")));
+        }
+        if (m.get("reactive-as-replaced") != null && !m.get("reactive-as-replaced").isBlank()) {
+            reactiveAsReplaced.set(Boolean.parseBoolean(m.get("reactive-as-replaced")));
         }
         if (m.get("exclude-reactive") != null) {
             java.util.Set<String> on = java.util.Set.of(m.get("exclude-reactive").split(","));
@@ -417,22 +428,60 @@ public final class BlendModel {
     }
 
     /**
-     * The command line's reactivity rule for a replacement, from the same core code ({@link ReactiveFlag#newTo}): a case that
-     * replaces a liquid under "as the replaced liquid" leaves out candidates with a reactivity that liquid lacks (an acid, a
-     * base, a nitroalkane, an active methylene, a Michael acceptor), unless a reactive box is ticked (then those boxes decide).
+     * The reactive solvents to leave out, by the command line's rule from the same core code ({@link ReactiveExclusion}): ticked
+     * boxes decide; with none ticked, a case that replaces a liquid under "as the replaced liquid" leaves out every reactivity
+     * that liquid lacks (an acid, a base, a nitroalkane, an active methylene, a Michael acceptor) unless the switch is off.
      */
+    ReactiveExclusion reactiveExclusion(SolventLibrary lib) {
+        Set<ReactiveFlag> ticked = java.util.EnumSet.noneOf(ReactiveFlag.class);
+        excludeReactive.forEach((flag, on) -> {
+            if (on.get()) {
+                ticked.add(flag);
+            }
+        });
+        Set<ReactiveFlag> named = !ticked.isEmpty() ? ticked : reactiveAsReplaced.get() ? null : Set.of();
+        return ReactiveExclusion.of(named, process.get() == org.cohesa.core.blend.ProcessUse.AS_ORIGINAL ? replacedMainComponent(lib) : null);
+    }
+
     BlendConstraints reactivityRule(SolventLibrary lib, BlendConstraints c, List<String> notes) {
-        Solvent original = process.get() == org.cohesa.core.blend.ProcessUse.AS_ORIGINAL ? replacedMainComponent(lib) : null;
-        if (original == null || !c.more().excludeReactive().isEmpty()) {
-            return c;
+        ReactiveExclusion r = reactiveExclusion(lib);
+        if (r.fromReplaced()) {
+            notes.add("reactivity as the replaced liquid: " + r.lack() + ", so no candidate is (untick \"" + REACTIVE_AS_REPLACED
+                    + "\" to let them in, or tick the kinds to leave out instead)");
         }
-        Set<ReactiveFlag> flags = ReactiveFlag.newTo(original);
-        if (flags.isEmpty()) {
-            return c;
+        return r.applyTo(c);
+    }
+
+    /** The switch's words in the form (and in the notes that name it). */
+    public static final String REACTIVE_AS_REPLACED = "No reactivity the replaced liquid lacks";
+
+    /** True when the session's case replaces a liquid. */
+    boolean replacing() {
+        String r = session.replacingProperty().get();
+        return r != null && !r.isBlank();
+    }
+
+    /** What the reactivity switch does now, in one line beside it (empty when the case replaces nothing). */
+    public String reactiveRuleText() {
+        if (!replacing()) {
+            return "";
         }
-        notes.add("reactivity as the replaced liquid: " + original.name() + " is no " + flags.stream().map(ReactiveFlag::label)
-                .collect(java.util.stream.Collectors.joining(", ")) + ", so no candidate is (ticked reactive boxes decide instead; another Leaves the process use drops this)");
-        return c.with(c.more().withReactive(flags));
+        if (excludeReactive.values().stream().anyMatch(BooleanProperty::get)) {
+            return "The ticked kinds decide instead: only they are left out.";
+        }
+        if (process.get() != org.cohesa.core.blend.ProcessUse.AS_ORIGINAL) {
+            return "Applies only when the liquid leaves the process as the replaced liquid does.";
+        }
+        ReactiveExclusion r = reactiveExclusion(new SolventLibrary(List.copyOf(session.solvents())));
+        if (r.fromReplaced()) {
+            return r.lack() + ": candidates that are stay out. Untick to let them in.";
+        }
+        Solvent original = replacedMainComponent(new SolventLibrary(List.copyOf(session.solvents())));
+        if (original == null) {
+            return "The replaced liquid is not in the library: nothing to compare with.";
+        }
+        return reactiveAsReplaced.get() ? original.name() + " carries every kind: none is left out."
+                : "Off: candidates may bring a reactivity " + original.name() + " lacks.";
     }
 
     /** The default process use for a target, as `cohesa blend` takes it ({@link org.cohesa.core.blend.ProcessUse#defaultFor}). */
@@ -470,7 +519,7 @@ public final class BlendModel {
         Integer ich = "any".equals(maxIchClass.get()) || maxIchClass.get() == null ? null : Integer.valueOf(maxIchClass.get().substring(0, 1));
         Set<String> fams = families(lib, "families", families.get());
         Set<String> notFams = families(lib, "exclude families", excludeFamilies.get());
-        Set<ReactiveFlag> reactive = java.util.EnumSet.noneOf(ReactiveFlag.class);
+        Set<ReactiveFlag> reactive = java.util.EnumSet.noneOf(ReactiveFlag.class); // the ticked boxes; reactivityRule decides the rest
         excludeReactive.forEach((flag, on) -> {
             if (on.get()) {
                 reactive.add(flag);

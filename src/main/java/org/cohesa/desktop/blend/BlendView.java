@@ -306,6 +306,30 @@ public final class BlendView {
             reactive.getChildren().add(box);
         }
         g.add(reactive, 0, row++, 2, 1);
+        // a replacement case's own rule (as `cohesa replace`): shown only in such a case, greyed where it does not apply
+        CheckBox asReplaced = new CheckBox(BlendModel.REACTIVE_AS_REPLACED);
+        asReplaced.setId("blend-reactive-as-replaced");
+        asReplaced.setWrapText(true);
+        asReplaced.selectedProperty().bindBidirectional(model.reactiveAsReplaced);
+        Label asReplacedNow = new Label();
+        asReplacedNow.setId("blend-reactive-rule");
+        asReplacedNow.setWrapText(true);
+        asReplacedNow.getStyleClass().add("hint");
+        asReplacedNow.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+        List<javafx.beans.Observable> ruleInputs = new ArrayList<>(List.of(model.session().replacingProperty(), model.process,
+                model.reactiveAsReplaced, model.session().solvents()));
+        ruleInputs.addAll(model.excludeReactive.values());
+        asReplacedNow.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(model::reactiveRuleText,
+                ruleInputs.toArray(javafx.beans.Observable[]::new)));
+        asReplaced.disableProperty().bind(javafx.beans.binding.Bindings.createBooleanBinding(() -> model.process.get()
+                != org.cohesa.core.blend.ProcessUse.AS_ORIGINAL || model.excludeReactive.values().stream().anyMatch(p -> p.get()),
+                ruleInputs.toArray(javafx.beans.Observable[]::new)));
+        for (Node n : List.of(asReplaced, asReplacedNow)) {
+            n.visibleProperty().bind(asReplacedNow.textProperty().isNotEmpty());
+            n.managedProperty().bind(n.visibleProperty());
+        }
+        g.add(asReplaced, 0, row++, 2, 1);
+        g.add(asReplacedNow, 0, row++, 2, 1);
         CheckBox salt = new CheckBox("Allow salt formers (amines with an acidic material, acids with a basic one)");
         salt.setId("blend-allow-salt-formers");
         salt.setWrapText(true);

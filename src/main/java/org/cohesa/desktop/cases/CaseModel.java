@@ -79,7 +79,7 @@ public final class CaseModel {
         List<javafx.beans.Observable> form = new ArrayList<>(List.of(blends.maxComponents, blends.top, blends.rankBy, blends.process,
                 blends.include, blends.exclude, blends.fixed, blends.minFractionPercent, blends.boilingMin, blends.boilingMax,
                 blends.minFlashPoint, blends.maxIchClass, blends.noCmr, blends.maxCost, blends.redLimit, blends.temperatureC,
-                blends.families, blends.excludeFamilies, blends.withWater, blends.minBlendFlash, blends.allowIchClass1, current));
+                blends.families, blends.excludeFamilies, blends.withWater, blends.minBlendFlash, blends.allowIchClass1, blends.reactiveAsReplaced, current));
         form.addAll(blends.excludeReactive.values());
         javafx.beans.InvalidationListener recheck = o -> limitsChanged.set(differs(current.get(), blends.limits()));
         form.forEach(x -> x.addListener(recheck));

@@ -186,6 +186,7 @@ public final class LimitsStepView {
         m.put("no-cmr", "No CMR");
         m.put("with-water", "With water");
         m.put("exclude-reactive", "Leave out reactive");
+        m.put("reactive-as-replaced", BlendModel.REACTIVE_AS_REPLACED);
         m.put("max-cost", "Maximum cost per litre");
         m.put("red-limit", "RED limit");
         m.put("temperature", "Temperature (°C)");

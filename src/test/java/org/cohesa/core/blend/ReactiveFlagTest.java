@@ -105,4 +105,24 @@ class ReactiveFlagTest {
         assertTrue(ReactiveFlag.newTo(lib.resolve("name", "pyridine")).contains(ReactiveFlag.MICHAEL_ACCEPTOR));
         assertEquals(List.of(), ReactiveFlag.parse("--exclude-reactive", "none"));
     }
+
+    /** The rule the command line and the desktop share (common practice in process chemistry, no source; docs/methods.md). */
+    @Test
+    void namedFlagsDecideElseAReplacementLeavesOutWhatTheOriginalLacks() {
+        Solvent dcm = lib.resolve("name", "dichloromethane");
+        ReactiveExclusion byRule = ReactiveExclusion.of(null, dcm);
+        assertTrue(byRule.fromReplaced());
+        assertEquals(ReactiveFlag.newTo(dcm), byRule.flags());
+        assertTrue(byRule.lack().startsWith("dichloromethane is no carboxylic acid, amine or pyridine base"), byRule.lack());
+        // --exclude-reactive none / the desktop's switch off: nothing left out, the rule silent
+        ReactiveExclusion none = ReactiveExclusion.of(java.util.Set.of(), dcm);
+        assertFalse(none.fromReplaced());
+        assertTrue(none.flags().isEmpty());
+        // named flags decide alone
+        assertEquals(java.util.Set.of(ReactiveFlag.ACID), ReactiveExclusion.of(java.util.Set.of(ReactiveFlag.ACID), dcm).flags());
+        // no replacement (or another process use): nothing unless named
+        assertTrue(ReactiveExclusion.of(null, null).flags().isEmpty());
+        BlendConstraints c = ReactiveExclusion.of(null, dcm).applyTo(BlendConstraints.NONE);
+        assertEquals(ReactiveFlag.newTo(dcm), c.more().excludeReactive());
+    }
 }
