@@ -474,7 +474,7 @@ public final class BlendModel {
         }
         ReactiveExclusion r = reactiveExclusion(new SolventLibrary(List.copyOf(session.solvents())));
         if (r.fromReplaced()) {
-            return r.lack() + ": candidates that are stay out. Untick to let them in.";
+            return r.lack() + ", so no candidate may be one. Untick to let them in.";
         }
         Solvent original = replacedMainComponent(new SolventLibrary(List.copyOf(session.solvents())));
         if (original == null) {

@@ -136,11 +136,23 @@ public final class BlendView {
         Runnable showDefaults = () -> defaults.setText(model.leftOutBySafety().isEmpty() ? ""
                 : "Left out by the defaults:\n" + model.leftOutBySafety().stream().map(x -> "• " + x).collect(Collectors.joining("\n")));
         model.leftOutBySafety().addListener((javafx.collections.ListChangeListener<String>) ch -> showDefaults.run());
-        defaults.setMaxHeight(74); // four lines; the whole list is the tooltip
+        defaults.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
         Runnable tip = () -> defaults.setTooltip(model.leftOutBySafety().isEmpty() ? null : new javafx.scene.control.Tooltip(defaults.getText()));
         model.leftOutBySafety().addListener((javafx.collections.ListChangeListener<String>) ch -> tip.run());
         defaults.visibleProperty().bind(javafx.beans.binding.Bindings.isNotEmpty(model.leftOutBySafety()));
         defaults.managedProperty().bind(defaults.visibleProperty());
+        // at most about five lines high, so the cards keep the room; every line stays in reach by scrolling (and in the tooltip)
+        ScrollPane defaultsBox = new ScrollPane(defaults);
+        defaultsBox.setId("blend-left-out-box");
+        defaultsBox.setFitToWidth(true);
+        defaultsBox.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+        defaultsBox.setMaxHeight(92);
+        // never squeezed below its text (or the five lines) by the cards below it
+        defaultsBox.minHeightProperty().bind(javafx.beans.binding.Bindings.createDoubleBinding(() -> Math.min(92, defaults.getHeight() + 2),
+                defaults.heightProperty()));
+        defaultsBox.getStyleClass().add("left-out-box");
+        defaultsBox.visibleProperty().bind(defaults.visibleProperty());
+        defaultsBox.managedProperty().bind(defaults.visibleProperty());
         Button choose = new Button("C_hoose for checks");
         choose.setId("blend-choose");
         choose.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
@@ -155,7 +167,7 @@ public final class BlendView {
         chooseHint.setWrapText(true);
         HBox chooseBar = new HBox(10, choose, chooseHint);
         chooseBar.setAlignment(Pos.CENTER_LEFT);
-        VBox cardsBox = new VBox(6, chooseBar, note, defaults, table);
+        VBox cardsBox = new VBox(6, chooseBar, note, defaultsBox, table);
         cardsBox.setPadding(new Insets(6, 0, 0, 6));
         javafx.scene.layout.VBox.setVgrow(table, javafx.scene.layout.Priority.ALWAYS);
         SplitPane split = new SplitPane(cardsBox, right);

@@ -70,7 +70,8 @@ public final class LimitsStepView {
         leftOut.getStyleClass().add("left-out");
         leftOut.setMinHeight(Region.USE_PREF_SIZE);
         leftOut.textProperty().bind(Bindings.createStringBinding(() -> blends.leftOutBySafety().isEmpty() ? ""
-                : "Left out by the defaults (CMR, ICH class 1, salt formers with the material; switch them in the form):\n"
+                : "Left out by the defaults (CMR, ICH class 1, salt formers with the material, and in a replacement what the replaced liquid's water "
+                        + "behaviour and reactivity rule out; switch them in the form):\n"
                         + blends.leftOutBySafety().stream().map(x -> "• " + x).collect(Collectors.joining("\n")), blends.leftOutBySafety()));
         leftOut.visibleProperty().bind(Bindings.isNotEmpty(blends.leftOutBySafety()));
         leftOut.managedProperty().bind(leftOut.visibleProperty());
