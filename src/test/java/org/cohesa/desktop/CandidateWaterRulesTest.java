@@ -100,6 +100,9 @@ class CandidateWaterRulesTest {
             WaterBehaviour wb = WaterMiscibility.withWater(comps, f, water, 298.15, WaterMiscibilityCsv.bundled());
             assertEquals(WaterBehaviour.Kind.IMMISCIBLE, wb.kind(), DesktopFixture.names(List.of(r)) + " must separate from water: " + wb.detail());
         }
+        // the replaced liquid is no candidate for its own replacement (as `cohesa replace`), though it sits at RED 0 here
+        assertTrue(DesktopFixture.names(rows).stream().noneMatch(n -> n.contains("dichloromethane")), DesktopFixture.names(rows).toString());
+        assertTrue(m.leftOutBySafety().contains("the replaced liquid itself (dichloromethane) is no candidate"), m.leftOutBySafety().toString());
         // 1,3-dioxolane mixes with water (it led the list before the rule): not a candidate here
         assertTrue(DesktopFixture.names(rows).stream().noneMatch(n -> n.contains("1,3-dioxolane")), DesktopFixture.names(rows).toString());
         robot.interact(() -> fx.session.replacingProperty().set(""));

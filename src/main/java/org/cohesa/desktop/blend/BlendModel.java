@@ -281,6 +281,23 @@ public final class BlendModel {
         }
     }
 
+    /** The liquid the case replaces when it is a single library solvent (not a blend), else null. */
+    private Solvent replacedSingleLiquid(SolventLibrary lib) {
+        String text = session.replacingProperty().get();
+        if (text == null || text.isBlank()) {
+            return null;
+        }
+        try {
+            if (!text.contains(":")) {
+                return lib.resolve("replaced liquid", text.strip());
+            }
+            org.cohesa.core.solvent.Blend b = lib.resolveBlend("replaced liquid", text);
+            return b.components().size() == 1 ? b.components().get(0).solvent() : null;
+        } catch (IllegalArgumentException e) {
+            return null; // no longer in the library: nothing to leave out
+        }
+    }
+
     /** Runs the search against the current target. @throws InvalidInputException naming the first bad field */
     public void search(Runnable then) {
         TargetChoice target = session.target();
@@ -291,7 +308,14 @@ public final class BlendModel {
         Set<SoluteCharacter> character = soluteCharacter();
         double kelvin = number("temperature", temperatureC.get(), 25.0) + 273.15;
         List<String> waterRules = new ArrayList<>();
-        BlendConstraints c = reactivityRule(lib, waterRules(lib, forSolute(constraints(lib), character), kelvin, waterRules), waterRules);
+        BlendConstraints ruled = reactivityRule(lib, waterRules(lib, forSolute(constraints(lib), character), kelvin, waterRules), waterRules);
+        // as `cohesa replace`: the liquid being replaced is no candidate for its own replacement
+        Solvent replaced = replacedSingleLiquid(lib);
+        if (replaced != null && !ruled.exclude().contains(replaced)) {
+            ruled = ruled.alsoExcluding(replaced);
+            waterRules.add("the replaced liquid itself (" + replaced.name() + ") is no candidate");
+        }
+        BlendConstraints c = ruled;
         int k = maxComponents.get();
         if (c.fixed().size() >= k) {
             throw new InvalidInputException("most components", String.valueOf(k), "must exceed the number of fixed components");
