@@ -105,7 +105,21 @@ class CandidateWaterRulesTest {
         assertTrue(m.leftOutBySafety().contains("the replaced liquid itself (dichloromethane) is no candidate"), m.leftOutBySafety().toString());
         // 1,3-dioxolane mixes with water (it led the list before the rule): not a candidate here
         assertTrue(DesktopFixture.names(rows).stream().noneMatch(n -> n.contains("1,3-dioxolane")), DesktopFixture.names(rows).toString());
-        robot.interact(() -> fx.session.replacingProperty().set(""));
+        // the choice `cohesa replace --with-water any` gives: no water demand at all, and a candidate that does not separate is back
+        List<BlendModel.Row> any = fx.searchCandidates(robot, () -> {
+            m.withWater.set(BlendModel.WATER_NOT_EVEN_AS_REPLACED);
+            m.top.set(60);
+        });
+        assertTrue(m.leftOutBySafety().stream().noneMatch(l -> l.startsWith("with water as the replaced liquid")), m.leftOutBySafety().toString());
+        assertTrue(any.stream().anyMatch(r -> {
+            List<Solvent> comps = r.blend().components().stream().map(BlendComponent::solvent).toList();
+            double[] f = r.blend().components().stream().mapToDouble(BlendComponent::fraction).toArray();
+            return WaterMiscibility.withWater(comps, f, water, 298.15, WaterMiscibilityCsv.bundled()).kind() != WaterBehaviour.Kind.IMMISCIBLE;
+        }), DesktopFixture.names(any).toString());
+        robot.interact(() -> {
+            m.withWater.set(BlendModel.WATER_ANY);
+            fx.session.replacingProperty().set("");
+        });
     }
 
     @Test

@@ -78,7 +78,11 @@ public final class BlendModel {
      * reactivity the replaced liquid lacks (on by default, as `cohesa replace`; off is its {@code --exclude-reactive none}).
      */
     public final BooleanProperty reactiveAsReplaced = new SimpleBooleanProperty(true);
-    /** How the blend must behave with water: {@link #WATER_ANY}, {@link #WATER_SEPARATES} or {@link #WATER_MIXES}. */
+    /**
+     * How the blend must behave with water: {@link #WATER_ANY}, {@link #WATER_SEPARATES}, {@link #WATER_MIXES} or
+     * {@link #WATER_NOT_EVEN_AS_REPLACED} (no demand, and a replacement case drops the replaced liquid's own, as
+     * {@code cohesa replace --with-water any}).
+     */
     public final ObjectProperty<String> withWater = new SimpleObjectProperty<>(WATER_ANY);
     /** Least computed flash point of the blend itself, °C (components may be lower). */
     public final StringProperty minBlendFlash = new SimpleStringProperty("");
@@ -98,6 +102,7 @@ public final class BlendModel {
     public static final String WATER_ANY = "no demand";
     public static final String WATER_SEPARATES = "separates from water (extraction)";
     public static final String WATER_MIXES = "mixes with water (waterborne)";
+    public static final String WATER_NOT_EVEN_AS_REPLACED = "no demand, not even the replaced liquid's";
 
     public BlendModel(Session session) {
         this.session = session;
@@ -430,7 +435,8 @@ public final class BlendModel {
             }
         }
         Solvent original = process.get() == org.cohesa.core.blend.ProcessUse.AS_ORIGINAL ? replacedMainComponent(lib) : null;
-        if (out.more().withWater() == null && original != null && !WaterMiscibility.isWater(original)) {
+        if (out.more().withWater() == null && !WATER_NOT_EVEN_AS_REPLACED.equals(withWater.get()) && original != null
+                && !WaterMiscibility.isWater(original)) {
             org.cohesa.core.activity.WaterBehaviour wb;
             try {
                 wb = WaterMiscibility.withWater(List.of(original), new double[] {1.0}, water, kelvin, WaterMiscibilityCsv.bundled());
@@ -445,7 +451,8 @@ public final class BlendModel {
             if (need != null) {
                 out = out.with(out.more().withWater(need));
                 notes.add("with water as the replaced liquid: " + original.name() + " is " + wb.kind().label() + " with water (" + wb.detail()
-                        + "), so every candidate must be too (set With water to choose otherwise, or Leaves the process by another use)");
+                        + "), so every candidate must be too (With water: \"" + WATER_NOT_EVEN_AS_REPLACED
+                        + "\" drops this, or Leaves the process by another use)");
             }
         }
         return out;

@@ -304,7 +304,7 @@ public final class BlendView {
         g.add(cmr, 0, row++, 2, 1);
         ComboBox<String> water = new ComboBox<>();
         water.setId("blend-with-water");
-        water.getItems().setAll(BlendModel.WATER_ANY, BlendModel.WATER_SEPARATES, BlendModel.WATER_MIXES);
+        water.getItems().setAll(BlendModel.WATER_ANY, BlendModel.WATER_SEPARATES, BlendModel.WATER_MIXES, BlendModel.WATER_NOT_EVEN_AS_REPLACED);
         water.valueProperty().bindBidirectional(model.withWater);
         g.addRow(row++, new Label("With water"), water);
         Label reactiveTitle = new Label("Leave out reactive solvents");
