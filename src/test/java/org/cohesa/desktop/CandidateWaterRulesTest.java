@@ -12,6 +12,7 @@ import javafx.stage.Stage;
 import org.cohesa.cli.CliTestSupport;
 import org.cohesa.core.activity.WaterBehaviour;
 import org.cohesa.core.activity.WaterMiscibility;
+import org.cohesa.core.blend.HazardLimit;
 import org.cohesa.core.blend.ProcessUse;
 import org.cohesa.core.blend.ReactiveFlag;
 import org.cohesa.core.hsp.SolubilitySphere;
@@ -120,6 +121,43 @@ class CandidateWaterRulesTest {
             m.withWater.set(BlendModel.WATER_ANY);
             fx.session.replacingProperty().set("");
         });
+    }
+
+    @Test
+    void aReplacementCaseOffersNothingAsBadOnTheReplacedLiquidsHealthStatements(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        List<Solvent> lib = List.copyOf(fx.session.solvents());
+        // toluene carries H361d (reproductive toxicant, category 2) and H373 (organ damage, repeated exposure), read from a
+        // stored supplier SDS (solvent-db/SOURCES.md, supplier-sds-checked); `cohesa replace toluene` treats both as reasons
+        Solvent toluene = lib.stream().filter(s -> s.name().equals("toluene")).findFirst().orElseThrow();
+        List<HazardLimit> limits = HazardLimit.defaults(toluene);
+        assertTrue(limits.stream().anyMatch(h -> h.kind().equals("reprotoxic")) && limits.stream().anyMatch(h -> h.kind().equals("organ-repeated")),
+                limits.toString());
+        SolubilitySphere around = SolubilitySphere.of(toluene.hansen().dD(), toluene.hansen().dP(), toluene.hansen().dH(), 4);
+        // the rule has something to act on: library liquids inside the sphere that carry such a statement (e.g. ethylbenzene, H373)
+        assertTrue(lib.stream().filter(s -> s != toluene && s.hansen() != null && around.red(s.hansen()) <= 1)
+                .anyMatch(s -> limits.stream().anyMatch(h -> h.rejects(s))), "no liquid near toluene carries H361/H373");
+        BlendModel m = fx.workbench.blendModel();
+        robot.interact(() -> {
+            fx.session.replacingProperty().set("toluene");
+            fx.session.targetProperty().set(new TargetChoice("around toluene", around, "typed in"));
+        });
+        List<BlendModel.Row> rows = fx.searchCandidates(robot, () -> {
+            m.maxComponents.set(2);
+            m.top.set(20);
+        });
+        assertFalse(rows.isEmpty());
+        for (BlendModel.Row r : rows) {
+            for (BlendComponent c : r.blend().components()) {
+                for (HazardLimit h : limits) {
+                    assertFalse(h.rejects(c.solvent()), c.solvent().name() + " is as bad as toluene on " + h.kind() + " (" + h.because() + ")");
+                }
+            }
+        }
+        assertTrue(m.leftOutBySafety().stream().anyMatch(l -> l.startsWith("replaced for reprotoxic (H361d of toluene)")), m.leftOutBySafety().toString());
+        robot.interact(() -> fx.session.replacingProperty().set(""));
+        fx.searchCandidates(robot, () -> m.top.set(20));
+        assertTrue(m.leftOutBySafety().stream().noneMatch(l -> l.startsWith("replaced for")), "a case that replaces nothing has no such rule");
     }
 
     @Test

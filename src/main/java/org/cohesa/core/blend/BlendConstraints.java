@@ -83,6 +83,12 @@ public record BlendConstraints(
                     blendBoilingMaxC, withWater, solute);
         }
 
+        /** A copy with these "never as bad as the original" limits in place of the present ones. */
+        public More withHealthLimits(List<HazardLimit> limits) {
+            return new More(noIchClass1, ichUnlistedAllowed, limits, excludeReactive, minBlendFlashPointC, blendBoilingMinC,
+                    blendBoilingMaxC, withWater, solute);
+        }
+
         /** A copy with another water demand (null: none). */
         public More withWater(WaterCheck.Need need) {
             return new More(noIchClass1, ichUnlistedAllowed, healthLimits, excludeReactive, minBlendFlashPointC, blendBoilingMinC,

@@ -19,6 +19,7 @@ import org.cohesa.core.blend.CancellationToken;
 import org.cohesa.core.blend.MeasuredFirstPhaseCheck;
 import org.cohesa.core.blend.PhaseCheck;
 import org.cohesa.core.blend.RankBy;
+import org.cohesa.core.blend.HazardLimit;
 import org.cohesa.core.blend.ReactiveExclusion;
 import org.cohesa.core.blend.ReactiveFlag;
 import org.cohesa.core.blend.SoluteCharacter;
@@ -286,6 +287,32 @@ public final class BlendModel {
         }
     }
 
+    /**
+     * The replaced liquid's own health statements as limits ({@link HazardLimit#defaults}, the rule of {@code cohesa replace}
+     * without {@code --because}); for a replaced blend, each kind at the level of its worst component. Empty when the case
+     * replaces nothing or the liquid is no longer in the library.
+     */
+    List<HazardLimit> replacedHealthLimits(SolventLibrary lib) {
+        String text = session.replacingProperty().get();
+        if (text == null || text.isBlank()) {
+            return List.of();
+        }
+        org.cohesa.core.solvent.Blend b;
+        try {
+            b = text.contains(":") ? lib.resolveBlend("replaced liquid", text)
+                    : org.cohesa.core.solvent.Blend.pure(lib.resolve("replaced liquid", text.strip()));
+        } catch (IllegalArgumentException e) {
+            return List.of();
+        }
+        java.util.Map<String, HazardLimit> worst = new java.util.LinkedHashMap<>();
+        for (org.cohesa.core.solvent.BlendComponent bc : b.components()) {
+            for (HazardLimit h : HazardLimit.defaults(bc.solvent())) {
+                worst.merge(h.kind(), h, (a, n) -> n.level() > a.level() ? n : a);
+            }
+        }
+        return List.copyOf(worst.values());
+    }
+
     /** The liquid the case replaces when it is a single library solvent (not a blend), else null. */
     private Solvent replacedSingleLiquid(SolventLibrary lib) {
         String text = session.replacingProperty().get();
@@ -319,6 +346,15 @@ public final class BlendModel {
         if (replaced != null && !ruled.exclude().contains(replaced)) {
             ruled = ruled.alsoExcluding(replaced);
             waterRules.add("the replaced liquid itself (" + replaced.name() + ") is no candidate");
+        }
+        // as `cohesa replace` without --because: every CMR, organ-damage and acute-toxicity statement of the replaced
+        // liquid (category 4 "harmful" alone excepted) is a reason, and no candidate as bad on it takes part
+        List<HazardLimit> healthLimits = replacedHealthLimits(lib);
+        if (!healthLimits.isEmpty()) {
+            ruled = ruled.with(ruled.more().withHealthLimits(healthLimits));
+            for (HazardLimit h : healthLimits) {
+                waterRules.add("replaced for " + h.kind() + " (" + h.because() + "): no candidate carries the same or a worse statement of that kind");
+            }
         }
         BlendConstraints c = ruled;
         int k = maxComponents.get();
