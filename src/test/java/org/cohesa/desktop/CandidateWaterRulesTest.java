@@ -161,6 +161,74 @@ class CandidateWaterRulesTest {
     }
 
     @Test
+    void aTolueneCaseReplacedForFlammabilityOffersOnlyLessFlammableCandidates(FxRobot robot) throws Exception {
+        fx.awaitLibrary();
+        List<Solvent> lib = List.copyOf(fx.session.solvents());
+        // toluene: flash point 4 °C (IEC 60079-20-1), boiling point 110.6 °C (CRC Handbook), both as bundled, so GHS flammable liquid category 2 (UN GHS Rev. 10
+        // Table 2.6.1: flash point < 23 °C and initial boiling point > 35 °C); "less flammable" is then category 3 or none,
+        // flash point ≥ 23 °C (the same rule as `cohesa replace toluene --because flammable`, ReplacementReasons)
+        Solvent toluene = lib.stream().filter(s -> s.name().equals("toluene")).findFirst().orElseThrow();
+        assertTrue(toluene.flashPointC() != null && toluene.flashPointC() < 23, "toluene's flash point " + toluene.flashPointC());
+        SolubilitySphere around = SolubilitySphere.of(toluene.hansen().dD(), toluene.hansen().dP(), toluene.hansen().dH(), 4);
+        BlendModel m = fx.workbench.blendModel();
+        CheckBox flammable = robot.lookup("#blend-because-flammable").queryAs(CheckBox.class);
+        Label reasonsNow = robot.lookup("#blend-because-rule").queryAs(Label.class);
+        javafx.scene.Node reasonBoxes = robot.lookup("#blend-because").query();
+        assertFalse(reasonBoxes.isVisible(), "no replacement, no reasons");
+        robot.interact(() -> {
+            fx.session.replacingProperty().set("toluene");
+            fx.session.targetProperty().set(new TargetChoice("around toluene", around, "typed in"));
+        });
+        assertTrue(reasonBoxes.isVisible() && !flammable.isSelected(), "offered in a replacement case, none ticked by default");
+        assertTrue(reasonsNow.getText().startsWith("None ticked: its own health statements") && reasonsNow.getText().contains("H361d of toluene"),
+                reasonsNow.getText());
+        Runnable form = () -> {
+            m.maxComponents.set(2);
+            m.top.set(40);
+        };
+        // the default stays as it was: the health statements are the reasons, and flash points below 23 °C are let in
+        List<BlendModel.Row> health = fx.searchCandidates(robot, form);
+        assertTrue(m.leftOutBySafety().stream().anyMatch(l -> l.startsWith("replaced for reprotoxic (H361d of toluene)")), m.leftOutBySafety().toString());
+        assertTrue(m.leftOutBySafety().stream().noneMatch(l -> l.startsWith("replaced for flammable")), m.leftOutBySafety().toString());
+        assertTrue(health.stream().flatMap(r -> r.blend().components().stream())
+                .anyMatch(c -> c.solvent().flashPointC() != null && c.solvent().flashPointC() < 23),
+                "by default a candidate as flammable as toluene takes part: " + DesktopFixture.names(health));
+        assertEquals("", m.limits().get("replaced-because"));
+
+        robot.interact(() -> flammable.setSelected(true));
+        assertTrue(reasonsNow.getText().startsWith("Ticked") && reasonsNow.getText().contains("flash point ≥ 23.0 °C"), reasonsNow.getText());
+        List<BlendModel.Row> rows = fx.searchCandidates(robot, form);
+        assertFalse(rows.isEmpty());
+        for (BlendModel.Row r : rows) {
+            for (BlendComponent c : r.blend().components()) {
+                Double fp = c.solvent().flashPointC();
+                assertTrue(fp == null || fp >= 23, c.solvent().name() + " (flash point " + fp + " °C) is as flammable as toluene");
+            }
+        }
+        assertTrue(m.leftOutBySafety().contains("replaced for flammable (GHS Category 2 → components and blend flash point ≥ 23.0 °C)"),
+                m.leftOutBySafety().toString());
+        // the named reason replaces the default one, as `--because` does
+        assertTrue(m.leftOutBySafety().stream().noneMatch(l -> l.startsWith("replaced for reprotoxic")), m.leftOutBySafety().toString());
+        var limits = m.limits();
+        assertEquals("flammable", limits.get("replaced-because"));
+        robot.interact(() -> {
+            flammable.setSelected(false);
+            m.applyLimits(limits);
+        });
+        assertTrue(flammable.isSelected(), "the reasons round-trip through the map a case stores");
+
+        // a reason toluene does not have is refused in one line naming it (toluene is not an ozone-layer hazard)
+        robot.interact(() -> robot.lookup("#blend-because-ozone").queryAs(CheckBox.class).setSelected(true));
+        assertTrue(reasonsNow.getText().startsWith("toluene carries no hazard statement of that kind"), reasonsNow.getText());
+        robot.interact(() -> {
+            robot.lookup("#blend-because-ozone").queryAs(CheckBox.class).setSelected(false);
+            flammable.setSelected(false);
+            fx.session.replacingProperty().set("");
+        });
+        assertEquals("", m.limits().get("replaced-because"), "no replacement, no reasons");
+    }
+
+    @Test
     void aReplacementCaseLeavesOutReactivityTheLiquidLacksUnlessSwitchedOff(FxRobot robot) throws Exception {
         fx.awaitLibrary();
         // NMP: water-miscible, so the water rule keeps miscible candidates, among them pyridine (a base) near its parameters

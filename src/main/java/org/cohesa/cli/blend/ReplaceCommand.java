@@ -7,7 +7,6 @@ import org.cohesa.cli.Targets;
 import org.cohesa.cli.TextTable;
 
 import java.util.ArrayList;
-import java.util.Locale;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
@@ -16,12 +15,11 @@ import org.cohesa.core.blend.BlendConstraints;
 import org.cohesa.core.blend.BlendDesigner;
 import org.cohesa.core.blend.BlendSuggestion;
 import org.cohesa.core.blend.Desirability;
-import org.cohesa.core.blend.HazardLimit;
+import org.cohesa.core.blend.ReplacementReasons;
 import org.cohesa.core.blend.ReactiveExclusion;
 import org.cohesa.core.blend.WaterCheck;
 import org.cohesa.core.activity.WaterBehaviour;
 import org.cohesa.core.blend.ProcessUse;
-import org.cohesa.core.safety.FlammableLiquidClass;
 import org.cohesa.core.target.Material;
 import org.cohesa.core.blend.RankedBlend;
 import org.cohesa.core.hsp.HansenParameters;
@@ -82,10 +80,6 @@ public final class ReplaceCommand extends CohesaSubcommand {
     @Mixin
     BlendOptions options;
 
-    /** What the user's reasons make of the constraints. */
-    private record Reasons(List<HazardLimit> limits, Double minFlash, Integer maxIch, Double bpMin, Double bpMax, List<String> words) {
-    }
-
     @Override
     protected void execute() {
         // the solvents' parameters at the process temperature (the material's sphere stays as measured)
@@ -123,8 +117,9 @@ public final class ReplaceCommand extends CohesaSubcommand {
             options.defaultRedLimit(CENTRED_RED_LIMIT);
         }
         int k = options.maxComponents();
-        Reasons why = reasons(original);
-        BlendConstraints c = options.forSolute(applyReasons(options.constraints(lib, original), why), mat);
+        // the reasons the user named, or by default the original's own health statements (one core rule with the desktop)
+        ReplacementReasons why = ReplacementReasons.of("--because", original, ReplacementReasons.split(because));
+        BlendConstraints c = options.forSolute(why.applyTo(options.constraints(lib, original), "--boiling-range", "--because"), mat);
         // a substitute does the original's job: under the as-original use it must behave with water as the original does
         // (separate for an extraction or work-up, mix for a water-miscible process; docs/methods.md)
         String waterAsOriginal = null;
@@ -225,115 +220,6 @@ public final class ReplaceCommand extends CohesaSubcommand {
     static Desirability.Weights replaceWeights(BlendOptions o, Solvent original) {
         Desirability.Weights w = o.weights(ProcessUse.AS_ORIGINAL, original);
         return o.preferenceNamed() ? w : w.withComponents(REPLACE_COMPONENTS);
-    }
-
-    /** The reasons the user named, or by default the original's own health statements. */
-    private Reasons reasons(Solvent original) {
-        List<HazardLimit> limits = new ArrayList<>();
-        Double minFlash = null;
-        Integer maxIch = null;
-        Double bpMin = null;
-        Double bpMax = null;
-        List<String> words = new ArrayList<>();
-        List<String> given = new ArrayList<>();
-        for (String b : because) {
-            for (String w : b.split(",")) {
-                if (!w.isBlank()) {
-                    given.add(w.strip());
-                }
-            }
-        }
-        if (given.isEmpty()) {
-            limits.addAll(HazardLimit.defaults(original));
-        }
-        for (String w : given) {
-            List<String> kinds = HazardLimit.kindsOf("--because", w);
-            if (kinds != null) {
-                for (HazardLimit h : HazardLimit.forReasons("--because", original, kinds, w)) {
-                    if (limits.stream().noneMatch(x -> x.kind().equals(h.kind()))) {
-                        limits.add(h);
-                    }
-                }
-                continue;
-            }
-            switch (w.toLowerCase(Locale.ROOT)) {
-                case "flammable", "flammability" -> {
-                    Integer cat = FlammableLiquidClass.ghs(original.flashPointC(), original.boilingPointC()).category();
-                    if (cat == null) {
-                        throw new InvalidInputException("--because", w, original.name() + " is not a flammable liquid in the library (no flash point)");
-                    }
-                    // Strictly less flammable: the next GHS category boundary above the original's (Table 2.6.1).
-                    minFlash = cat <= 2 ? 23.0 : cat == 3 ? 60.5 : 93.5;
-                    words.add("flammable (GHS Category " + cat + " → components and blend flash point ≥ " + Output.fmt(minFlash, 1) + " °C)");
-                }
-                case "ich", "ich-class" -> {
-                    Integer ich = original.ichClass();
-                    if (ich == null || ich == 3) {
-                        throw new InvalidInputException("--because", w, original.name() + " is " + (ich == null ? "not listed in ICH Q3C" : "already ICH Q3C class 3")
-                                + ", so a milder class cannot be asked for");
-                    }
-                    maxIch = ich + 1;
-                    words.add("ICH Q3C class " + ich + " (→ class " + maxIch + (maxIch < 3 ? " or milder" : "") + " only)");
-                }
-                case "high-boiling" -> {
-                    requireBoilingPoint(original, w);
-                    bpMax = original.boilingPointC() - 0.5;
-                    words.add("high boiling point " + Output.fmt(original.boilingPointC(), 0) + " °C (→ components boil lower)");
-                }
-                case "low-boiling" -> {
-                    requireBoilingPoint(original, w);
-                    bpMin = original.boilingPointC() + 0.5;
-                    words.add("low boiling point " + Output.fmt(original.boilingPointC(), 0) + " °C (→ components boil higher)");
-                }
-                default -> throw new InvalidInputException("--because", w, "choose from reprotoxic, carcinogen, mutagen, cmr, organ, toxic, aspiration, health, "
-                        + "ozone, flammable, ich, high-boiling, low-boiling");
-            }
-        }
-        List<String> all = new ArrayList<>();
-        for (HazardLimit h : limits) {
-            all.add(h.kind() + " (" + h.because() + ")");
-        }
-        all.addAll(words);
-        return new Reasons(limits, minFlash, maxIch, bpMin, bpMax, all);
-    }
-
-    private static void requireBoilingPoint(Solvent s, String w) {
-        if (s.boilingPointC() == null) {
-            throw new InvalidInputException("--because", w, s.name() + " has no boiling point in the library");
-        }
-    }
-
-    /** The constraints tightened by the reasons (a user's own limits stay when they are stricter). */
-    private static BlendConstraints applyReasons(BlendConstraints c, Reasons w) {
-        Double minFlash = stricter(w.minFlash(), c.minFlashPointC(), true);
-        Integer ich = w.maxIch() == null ? c.maxIchClass() : c.maxIchClass() == null ? w.maxIch() : Integer.valueOf(Math.max(w.maxIch(), c.maxIchClass()));
-        Double bpMin = stricter(w.bpMin(), c.boilingMinC(), true);
-        Double bpMax = stricter(w.bpMax(), c.boilingMaxC(), false);
-        if (bpMin != null && bpMax != null && bpMin > bpMax) {
-            throw new InvalidInputException("--boiling-range", Output.fmt(bpMin, 0) + ".." + Output.fmt(bpMax, 0), "the reasons and the window leave no boiling point");
-        }
-        BlendConstraints.More m = c.more();
-        List<HazardLimit> limits = new ArrayList<>(m.healthLimits());
-        limits.addAll(w.limits());
-        try {
-            return new BlendConstraints(c.include(), c.exclude(), c.families(), c.excludeFamilies(), c.fixed(), c.minFraction(), c.maxFraction(),
-                    c.fractionRanges(), bpMin, bpMax, minFlash, ich, c.noCmr(), c.maxCost(),
-                    new BlendConstraints.More(m.noIchClass1(), m.ichUnlistedAllowed(), limits, m.excludeReactive(), m.minBlendFlashPointC(),
-                            m.blendBoilingMinC(), m.blendBoilingMaxC(), m.withWater(), m.solute()));
-        } catch (IllegalArgumentException e) {
-            throw new InvalidInputException("--because", String.join(",", w.words()), e.getMessage());
-        }
-    }
-
-    /** The stricter of two optional limits: the larger lower limit or the smaller upper limit. */
-    private static Double stricter(Double a, Double b, boolean lower) {
-        if (a == null) {
-            return b;
-        }
-        if (b == null) {
-            return a;
-        }
-        return lower ? Double.valueOf(Math.max(a, b)) : Double.valueOf(Math.min(a, b));
     }
 
     /** Side-by-side properties of a solvent or blend. */

@@ -22,6 +22,7 @@ import org.cohesa.core.blend.RankBy;
 import org.cohesa.core.blend.HazardLimit;
 import org.cohesa.core.blend.ReactiveExclusion;
 import org.cohesa.core.blend.ReactiveFlag;
+import org.cohesa.core.blend.ReplacementReasons;
 import org.cohesa.core.blend.SoluteCharacter;
 import org.cohesa.core.blend.WaterCheck;
 import org.cohesa.core.blend.WaterInPolymer;
@@ -80,6 +81,11 @@ public final class BlendModel {
      */
     public final BooleanProperty reactiveAsReplaced = new SimpleBooleanProperty(true);
     /**
+     * In a case that replaces a liquid: the reasons named for replacing it ({@link ReplacementReasons}, the rule of
+     * {@code cohesa replace --because}), reason word → ticked. None ticked: the liquid's own health statements.
+     */
+    public final java.util.Map<String, BooleanProperty> replacedBecause = new java.util.LinkedHashMap<>();
+    /**
      * How the blend must behave with water: {@link #WATER_ANY}, {@link #WATER_SEPARATES}, {@link #WATER_MIXES} or
      * {@link #WATER_NOT_EVEN_AS_REPLACED} (no demand, and a replacement case drops the replaced liquid's own, as
      * {@code cohesa replace --with-water any}).
@@ -109,6 +115,9 @@ public final class BlendModel {
         this.session = session;
         for (ReactiveFlag f : ReactiveFlag.values()) {
             excludeReactive.put(f, new SimpleBooleanProperty(false));
+        }
+        for (String w : REASON_LABELS.keySet()) {
+            replacedBecause.put(w, new SimpleBooleanProperty(false));
         }
         // a case that replaces a liquid ranks by leaving the process as that liquid does, as `cohesa replace` does
         session.replacingProperty().addListener((o, a, r) -> process.set(r == null || r.isBlank()
@@ -186,6 +195,7 @@ public final class BlendModel {
                 .collect(java.util.stream.Collectors.joining(",")));
         // only a case that replaces a liquid has the rule: elsewhere it is no limit at all
         m.put("reactive-as-replaced", replacing() ? String.valueOf(reactiveAsReplaced.get()) : "");
+        m.put("replaced-because", replacing() ? String.join(",", tickedReasons()) : "");
         return m;
     }
 
@@ -240,6 +250,10 @@ public final class BlendModel {
             java.util.Set<String> on = java.util.Set.of(m.get("exclude-reactive").split(","));
             excludeReactive.forEach((f, p) -> p.set(on.contains(f.word())));
         }
+        if (m.get("replaced-because") != null) {
+            java.util.Set<String> on = java.util.Set.copyOf(ReplacementReasons.split(List.of(m.get("replaced-because"))));
+            replacedBecause.forEach((w, p) -> p.set(on.contains(w)));
+        }
     }
 
     private static void integer(String text, int lo, int hi, ObjectProperty<Integer> p) {
@@ -288,21 +302,29 @@ public final class BlendModel {
     }
 
     /**
-     * The replaced liquid's own health statements as limits ({@link HazardLimit#defaults}, the rule of {@code cohesa replace}
-     * without {@code --because}); for a replaced blend, each kind at the level of its worst component. Empty when the case
-     * replaces nothing or the liquid is no longer in the library.
+     * The reasons a case that replaces a liquid is made for, by the command line's rule ({@link ReplacementReasons}, as
+     * {@code cohesa replace --because}): the ticked reasons, judged on the replaced liquid (its largest component when it is
+     * a blend, as the process rate); with none ticked, its own health statements ({@link HazardLimit#defaults}, as without
+     * {@code --because}), for a replaced blend each kind at the level of its worst component. Null when the case replaces
+     * nothing or the liquid is no longer in the library.
+     *
+     * @throws InvalidInputException naming "replaced because" when a ticked reason does not apply to the liquid
      */
-    List<HazardLimit> replacedHealthLimits(SolventLibrary lib) {
+    ReplacementReasons replacementReasons(SolventLibrary lib) {
         String text = session.replacingProperty().get();
         if (text == null || text.isBlank()) {
-            return List.of();
+            return null;
         }
         org.cohesa.core.solvent.Blend b;
         try {
             b = text.contains(":") ? lib.resolveBlend("replaced liquid", text)
                     : org.cohesa.core.solvent.Blend.pure(lib.resolve("replaced liquid", text.strip()));
         } catch (IllegalArgumentException e) {
-            return List.of();
+            return null;
+        }
+        List<String> ticked = tickedReasons();
+        if (!ticked.isEmpty()) {
+            return ReplacementReasons.of(REASONS_FIELD, replacedMainComponent(lib), ticked);
         }
         java.util.Map<String, HazardLimit> worst = new java.util.LinkedHashMap<>();
         for (org.cohesa.core.solvent.BlendComponent bc : b.components()) {
@@ -310,7 +332,54 @@ public final class BlendModel {
                 worst.merge(h.kind(), h, (a, n) -> n.level() > a.level() ? n : a);
             }
         }
-        return List.copyOf(worst.values());
+        List<String> words = worst.values().stream().map(h -> h.kind() + " (" + h.because() + ")").toList();
+        return new ReplacementReasons(List.copyOf(worst.values()), null, null, null, null, words);
+    }
+
+    /** The field the reasons are named under in messages. */
+    public static final String REASONS_FIELD = "replaced because";
+
+    /** The reasons offered in the form (words of {@link ReplacementReasons#NAMES}) with their labels, in our words. */
+    public static final java.util.Map<String, String> REASON_LABELS = reasonLabels();
+
+    private static java.util.Map<String, String> reasonLabels() {
+        java.util.Map<String, String> m = new java.util.LinkedHashMap<>();
+        m.put("reprotoxic", "harms fertility or the unborn");
+        m.put("carcinogen", "may cause cancer");
+        m.put("mutagen", "damages genes");
+        m.put("organ", "damages organs");
+        m.put("toxic", "toxic");
+        m.put("aspiration", "aspiration hazard");
+        m.put("ozone", "harms the ozone layer");
+        m.put("flammable", "too flammable");
+        m.put("ich", "needs a milder ICH class");
+        m.put("high-boiling", "boils too high");
+        m.put("low-boiling", "boils too low");
+        return java.util.Collections.unmodifiableMap(m);
+    }
+
+    /** The ticked reasons' words, in the form's order. */
+    List<String> tickedReasons() {
+        return replacedBecause.entrySet().stream().filter(e -> e.getValue().get()).map(java.util.Map.Entry::getKey).toList();
+    }
+
+    /** What the reasons ask now, in one line beside them (empty when the case replaces nothing). */
+    public String reasonsRuleText() {
+        if (!replacing()) {
+            return "";
+        }
+        ReplacementReasons r;
+        try {
+            r = replacementReasons(new SolventLibrary(List.copyOf(session.solvents())));
+        } catch (InvalidInputException e) {
+            return e.reason();
+        }
+        if (r == null) {
+            return "The replaced liquid is not in the library: no reason can be judged.";
+        }
+        String head = tickedReasons().isEmpty() ? "None ticked: its own health statements" : "Ticked";
+        return r.words().isEmpty() ? head + ": it carries no CMR, organ-damage or acute-toxicity statement above \"harmful\", so nothing is asked."
+                : head + ", so no candidate is as bad on: " + String.join("; ", r.words()) + ".";
     }
 
     /** The liquid the case replaces when it is a single library solvent (not a blend), else null. */
@@ -347,13 +416,16 @@ public final class BlendModel {
             ruled = ruled.alsoExcluding(replaced);
             waterRules.add("the replaced liquid itself (" + replaced.name() + ") is no candidate");
         }
-        // as `cohesa replace` without --because: every CMR, organ-damage and acute-toxicity statement of the replaced
-        // liquid (category 4 "harmful" alone excepted) is a reason, and no candidate as bad on it takes part
-        List<HazardLimit> healthLimits = replacedHealthLimits(lib);
-        if (!healthLimits.isEmpty()) {
-            ruled = ruled.with(ruled.more().withHealthLimits(healthLimits));
-            for (HazardLimit h : healthLimits) {
+        // as `cohesa replace`: the ticked reasons, or without any every CMR, organ-damage and acute-toxicity statement of
+        // the replaced liquid (category 4 "harmful" alone excepted), and no candidate as bad on one takes part
+        ReplacementReasons reasons = replacementReasons(lib);
+        if (reasons != null) {
+            ruled = reasons.applyTo(ruled, "boiling point min./max.", REASONS_FIELD);
+            for (HazardLimit h : reasons.limits()) {
                 waterRules.add("replaced for " + h.kind() + " (" + h.because() + "): no candidate carries the same or a worse statement of that kind");
+            }
+            for (String w : reasons.words().subList(reasons.limits().size(), reasons.words().size())) {
+                waterRules.add("replaced for " + w);
             }
         }
         BlendConstraints c = ruled;

@@ -342,6 +342,34 @@ public final class BlendView {
         }
         g.add(asReplaced, 0, row++, 2, 1);
         g.add(asReplacedNow, 0, row++, 2, 1);
+        // a replacement case's reasons (as `cohesa replace --because`): shown only in such a case
+        Label becauseTitle = new Label("Replaced because (none ticked: its own health statements)");
+        becauseTitle.setWrapText(true);
+        javafx.scene.layout.FlowPane because = new javafx.scene.layout.FlowPane(10, 4);
+        because.setId("blend-because");
+        because.setPrefWrapLength(330);
+        for (var e : model.replacedBecause.entrySet()) {
+            CheckBox box = new CheckBox(BlendModel.REASON_LABELS.get(e.getKey()));
+            box.setId("blend-because-" + e.getKey());
+            box.selectedProperty().bindBidirectional(e.getValue());
+            because.getChildren().add(box);
+        }
+        Label becauseNow = new Label();
+        becauseNow.setId("blend-because-rule");
+        becauseNow.setWrapText(true);
+        becauseNow.getStyleClass().add("hint");
+        becauseNow.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+        List<javafx.beans.Observable> becauseInputs = new ArrayList<>(List.of(model.session().replacingProperty(), model.session().solvents()));
+        becauseInputs.addAll(model.replacedBecause.values());
+        becauseNow.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(model::reasonsRuleText,
+                becauseInputs.toArray(javafx.beans.Observable[]::new)));
+        for (Node n : List.of(becauseTitle, because, becauseNow)) {
+            n.visibleProperty().bind(becauseNow.textProperty().isNotEmpty());
+            n.managedProperty().bind(n.visibleProperty());
+        }
+        g.add(becauseTitle, 0, row++, 2, 1);
+        g.add(because, 0, row++, 2, 1);
+        g.add(becauseNow, 0, row++, 2, 1);
         CheckBox salt = new CheckBox("Allow salt formers (amines with an acidic material, acids with a basic one)");
         salt.setId("blend-allow-salt-formers");
         salt.setWrapText(true);

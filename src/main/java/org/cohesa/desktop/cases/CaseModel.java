@@ -81,6 +81,7 @@ public final class CaseModel {
                 blends.minFlashPoint, blends.maxIchClass, blends.noCmr, blends.maxCost, blends.redLimit, blends.temperatureC,
                 blends.families, blends.excludeFamilies, blends.withWater, blends.minBlendFlash, blends.allowIchClass1, blends.reactiveAsReplaced, current));
         form.addAll(blends.excludeReactive.values());
+        form.addAll(blends.replacedBecause.values());
         javafx.beans.InvalidationListener recheck = o -> limitsChanged.set(differs(current.get(), blends.limits()));
         form.forEach(x -> x.addListener(recheck));
         progress = javafx.beans.binding.Bindings.createObjectBinding(() -> current.get() == null ? List.of()

@@ -188,6 +188,7 @@ public final class LimitsStepView {
         m.put("with-water", "With water");
         m.put("exclude-reactive", "Leave out reactive");
         m.put("reactive-as-replaced", BlendModel.REACTIVE_AS_REPLACED);
+        m.put("replaced-because", "Replaced because");
         m.put("max-cost", "Maximum cost per litre");
         m.put("red-limit", "RED limit");
         m.put("temperature", "Temperature (°C)");
