@@ -115,6 +115,21 @@ public record ReplacementReasons(List<HazardLimit> limits, Double minFlashPointC
         return new ReplacementReasons(limits, minFlash, maxIch, bpMin, bpMax, all);
     }
 
+    /**
+     * The default reasons for replacing a blend: each component's own health statements ({@link HazardLimit#defaults}),
+     * each kind at the level of its worst component. For one liquid this equals {@code of(field, liquid, List.of())}.
+     */
+    public static ReplacementReasons defaultsFor(List<Solvent> components) {
+        java.util.Map<String, HazardLimit> worst = new java.util.LinkedHashMap<>();
+        for (Solvent s : components) {
+            for (HazardLimit h : HazardLimit.defaults(s)) {
+                worst.merge(h.kind(), h, (a, n) -> n.level() > a.level() ? n : a);
+            }
+        }
+        List<String> words = worst.values().stream().map(h -> h.kind() + " (" + h.because() + ")").toList();
+        return new ReplacementReasons(List.copyOf(worst.values()), null, null, null, null, words);
+    }
+
     private static void requireBoilingPoint(String field, Solvent s, String w) {
         if (s.boilingPointC() == null) {
             throw new InvalidInputException(field, w, s.name() + " has no boiling point in the library");

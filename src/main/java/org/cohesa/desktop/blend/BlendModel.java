@@ -286,19 +286,25 @@ public final class BlendModel {
                         .withComponents(org.cohesa.core.blend.Desirability.REPLACE_COMPONENTS);
     }
 
-    private org.cohesa.core.solvent.Solvent replacedMainComponent(SolventLibrary lib) {
+    /** The liquid the case replaces, resolved in the library; null when it replaces nothing or the liquid is no longer there. */
+    private org.cohesa.core.solvent.Blend replacedLiquid(SolventLibrary lib) {
         String text = session.replacingProperty().get();
         if (text == null || text.isBlank()) {
             return null;
         }
         try {
-            org.cohesa.core.solvent.Blend b = text.contains(":") ? lib.resolveBlend("replaced liquid", text)
+            return text.contains(":") ? lib.resolveBlend("replaced liquid", text)
                     : org.cohesa.core.solvent.Blend.pure(lib.resolve("replaced liquid", text.strip()));
-            return b.components().stream().max(java.util.Comparator.comparingDouble(org.cohesa.core.solvent.BlendComponent::fraction))
-                    .map(org.cohesa.core.solvent.BlendComponent::solvent).orElse(null);
         } catch (IllegalArgumentException e) {
-            return null; // a liquid no longer in the library: no reference rate
+            return null;
         }
+    }
+
+    /** The replaced liquid's largest component (the reference for its rate), or null. */
+    private org.cohesa.core.solvent.Solvent replacedMainComponent(SolventLibrary lib) {
+        org.cohesa.core.solvent.Blend b = replacedLiquid(lib);
+        return b == null ? null : b.components().stream().max(java.util.Comparator.comparingDouble(org.cohesa.core.solvent.BlendComponent::fraction))
+                .map(org.cohesa.core.solvent.BlendComponent::solvent).orElse(null);
     }
 
     /**
@@ -311,29 +317,13 @@ public final class BlendModel {
      * @throws InvalidInputException naming "replaced because" when a ticked reason does not apply to the liquid
      */
     ReplacementReasons replacementReasons(SolventLibrary lib) {
-        String text = session.replacingProperty().get();
-        if (text == null || text.isBlank()) {
-            return null;
-        }
-        org.cohesa.core.solvent.Blend b;
-        try {
-            b = text.contains(":") ? lib.resolveBlend("replaced liquid", text)
-                    : org.cohesa.core.solvent.Blend.pure(lib.resolve("replaced liquid", text.strip()));
-        } catch (IllegalArgumentException e) {
+        org.cohesa.core.solvent.Blend b = replacedLiquid(lib);
+        if (b == null) {
             return null;
         }
         List<String> ticked = tickedReasons();
-        if (!ticked.isEmpty()) {
-            return ReplacementReasons.of(REASONS_FIELD, replacedMainComponent(lib), ticked);
-        }
-        java.util.Map<String, HazardLimit> worst = new java.util.LinkedHashMap<>();
-        for (org.cohesa.core.solvent.BlendComponent bc : b.components()) {
-            for (HazardLimit h : HazardLimit.defaults(bc.solvent())) {
-                worst.merge(h.kind(), h, (a, n) -> n.level() > a.level() ? n : a);
-            }
-        }
-        List<String> words = worst.values().stream().map(h -> h.kind() + " (" + h.because() + ")").toList();
-        return new ReplacementReasons(List.copyOf(worst.values()), null, null, null, null, words);
+        return ticked.isEmpty() ? ReplacementReasons.defaultsFor(b.components().stream().map(org.cohesa.core.solvent.BlendComponent::solvent).toList())
+                : ReplacementReasons.of(REASONS_FIELD, replacedMainComponent(lib), ticked);
     }
 
     /** The field the reasons are named under in messages. */
@@ -384,19 +374,8 @@ public final class BlendModel {
 
     /** The liquid the case replaces when it is a single library solvent (not a blend), else null. */
     private Solvent replacedSingleLiquid(SolventLibrary lib) {
-        String text = session.replacingProperty().get();
-        if (text == null || text.isBlank()) {
-            return null;
-        }
-        try {
-            if (!text.contains(":")) {
-                return lib.resolve("replaced liquid", text.strip());
-            }
-            org.cohesa.core.solvent.Blend b = lib.resolveBlend("replaced liquid", text);
-            return b.components().size() == 1 ? b.components().get(0).solvent() : null;
-        } catch (IllegalArgumentException e) {
-            return null; // no longer in the library: nothing to leave out
-        }
+        org.cohesa.core.solvent.Blend b = replacedLiquid(lib);
+        return b != null && b.components().size() == 1 ? b.components().get(0).solvent() : null;
     }
 
     /** Runs the search against the current target. @throws InvalidInputException naming the first bad field */

@@ -28,4 +28,20 @@ class HazardLimitTest {
         assertEquals(2, HazardLimit.defaults(BundledLiquids.get("N-methyl-2-pyrrolidone")).stream()
                 .filter(l -> l.kind().equals("reprotoxic")).findFirst().orElseThrow().level());
     }
+
+    @Test
+    void aReplacedBlendsDefaultReasonsTakeEachKindAtItsWorstComponent() {
+        Solvent toluene = BundledLiquids.get("toluene");
+        Solvent nmp = BundledLiquids.get("N-methyl-2-pyrrolidone");
+        // one liquid: the same reasons as replace without --because
+        assertEquals(ReplacementReasons.of("--because", toluene, List.of()), ReplacementReasons.defaultsFor(List.of(toluene)));
+        // toluene (H361d, reprotoxic level 1; supplier SDS in the bundled data) with NMP (H360D, level 2): the blend is
+        // replaced for reprotoxic at level 2, from NMP, and for toluene's H373 as well
+        ReplacementReasons blend = ReplacementReasons.defaultsFor(List.of(toluene, nmp));
+        HazardLimit repro = blend.limits().stream().filter(l -> l.kind().equals("reprotoxic")).findFirst().orElseThrow();
+        assertEquals(2, repro.level());
+        assertTrue(repro.because().contains("N-methyl-2-pyrrolidone"), repro.because());
+        assertTrue(blend.limits().stream().anyMatch(l -> l.kind().equals("organ-repeated")), blend.limits().toString());
+        assertEquals(blend.limits().size(), blend.words().size());
+    }
 }
