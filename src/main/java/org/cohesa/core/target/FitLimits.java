@@ -242,21 +242,25 @@ public final class FitLimits {
      * (an ordered-category link: McCullagh, <i>J. R. Stat. Soc. B</i> 42 (1980) 109); yes/no results as in the fit.
      */
     static double bandLogLikelihood(SphereFitter.Data data, double[] p, double band, DissolutionModel m) {
+        return sumOverResults(data, p, (red, y) -> {
+            if (y > 0 && y < 1) {
+                double s = m.softness();
+                double in = 1 / (1 + Math.exp(-(1 + band - red) / s)) - 1 / (1 + Math.exp(-(1 - band - red) / s));
+                return Math.log(m.lapse() + (1 - 2 * m.lapse()) * in);
+            }
+            return DissolutionModel.logLikelihood(y, m.pDissolves(red));
+        });
+    }
+
+    /** Σ over the results of {@code term(RED, score)} at the sphere {@code p}; −∞ for a radius that is not positive. */
+    private static double sumOverResults(SphereFitter.Data data, double[] p, java.util.function.DoubleBinaryOperator term) {
         double r = p[3];
         if (!(r > 0)) {
             return Double.NEGATIVE_INFINITY;
         }
         double sum = 0;
         for (int i = 0; i < data.size(); i++) {
-            double red = SphereFitter.Data.ra(data.points[i], p) / r;
-            double y = data.scores[i];
-            if (y > 0 && y < 1) {
-                double s = m.softness();
-                double in = 1 / (1 + Math.exp(-(1 + band - red) / s)) - 1 / (1 + Math.exp(-(1 - band - red) / s));
-                sum += Math.log(m.lapse() + (1 - 2 * m.lapse()) * in);
-            } else {
-                sum += DissolutionModel.logLikelihood(y, m.pDissolves(red));
-            }
+            sum += term.applyAsDouble(SphereFitter.Data.ra(data.points[i], p) / r, data.scores[i]);
         }
         return sum;
     }
@@ -270,21 +274,14 @@ public final class FitLimits {
     }
 
     static double mixtureLogLikelihood(SphereFitter.Data data, double[] p, double[] nodes) {
-        double r = p[3];
-        if (!(r > 0)) {
-            return Double.NEGATIVE_INFINITY;
-        }
-        double sum = 0;
-        for (int i = 0; i < data.size(); i++) {
-            double red = SphereFitter.Data.ra(data.points[i], p) / r;
+        return sumOverResults(data, p, (red, y) -> {
             double q = 0;
             for (double sn : nodes) {
                 q += 1 / (1 + Math.exp(-(1 - red) / sn));
             }
             double pd = DissolutionModel.DEFAULT_LAPSE + (1 - 2 * DissolutionModel.DEFAULT_LAPSE) * q / nodes.length;
-            sum += DissolutionModel.logLikelihood(data.scores[i], pd);
-        }
-        return sum;
+            return DissolutionModel.logLikelihood(y, pd);
+        });
     }
 
     /**
